@@ -1,0 +1,55 @@
+import type { Profile } from '../profile/profile';
+import type { Range } from '../core/range';
+
+/**
+ * The calc contract shared by the CLI (`gprime calc`), the site file and the UI: a method declares its
+ * parameters (SI unit, default, hard range) and result names, and runs on resolved SI arguments.
+ */
+export type ParamSpec =
+  | { kind: 'number'; name: string; unit: string; description: string; default?: number; optional?: boolean; range?: Range }
+  | { kind: 'choice'; name: string; description: string; choices: readonly string[]; default?: string; optional?: boolean }
+  | { kind: 'profile'; name: string; description: string; optional?: boolean }
+  | { kind: 'text'; name: string; description: string; default?: string; optional?: boolean };
+
+export interface ResultSpec {
+  name: string;
+  unit: string;
+  description: string;
+}
+
+export type ResultValue = { value: number; unit: string } | { value: string; unit: '' };
+
+export interface CalcOutput {
+  results: Record<string, ResultValue>;
+  warnings: string[];
+  sources: string[];
+}
+
+export type CalcArgValue = number | string | Profile;
+export type CalcArgs = Record<string, CalcArgValue | undefined>;
+
+export interface CalcMethod {
+  id: string;
+  title: string;
+  /** the topic folder of shared-core it comes from */
+  topic: string;
+  params: readonly ParamSpec[];
+  results: readonly ResultSpec[];
+  run(args: CalcArgs): CalcOutput;
+}
+
+/** Typed accessors for resolved arguments (the resolver has validated kinds and ranges). */
+export const arg = {
+  num(args: CalcArgs, name: string): number {
+    return args[name] as number;
+  },
+  optNum(args: CalcArgs, name: string): number | undefined {
+    return args[name] as number | undefined;
+  },
+  text<T extends string = string>(args: CalcArgs, name: string): T {
+    return args[name] as T;
+  },
+  profile(args: CalcArgs, name = 'file'): Profile | undefined {
+    return args[name] as Profile | undefined;
+  },
+};

@@ -1,0 +1,26 @@
+/** A bad input: names the field, the value, its unit and the allowed range. */
+export class InputError extends Error {
+  readonly field: string;
+  readonly value: unknown;
+  readonly unit: string;
+  readonly allowed: string;
+
+  constructor(field: string, value: unknown, unit: string, allowed: string, detail?: string) {
+    const shown = typeof value === 'number' ? formatNumber(value) : JSON.stringify(value);
+    const unitText = unit && unit !== '1' ? ` ${unit}` : '';
+    super(`${field} = ${shown}${unitText} is not allowed: ${detail ?? `allowed range is ${allowed}`}`);
+    this.name = 'InputError';
+    this.field = field;
+    this.value = value;
+    this.unit = unit;
+    this.allowed = allowed;
+  }
+}
+
+export function formatNumber(x: number): string {
+  if (!Number.isFinite(x)) return String(x);
+  if (x === 0) return '0';
+  const a = Math.abs(x);
+  if (a >= 1e6 || a < 1e-3) return x.toExponential(3).replace(/\.?0+e/, 'e');
+  return String(Number(x.toPrecision(6)));
+}

@@ -1,0 +1,53 @@
+import { formatNumber } from './errors';
+import { inRange, type Range } from './range';
+
+/** A calibrated or validated input range of a published method; outside it the result gets a warning. */
+export interface ValidityRange extends Range {
+  unit: string;
+  /** what the range is (e.g. "laboratory data of …") */
+  note?: string;
+}
+
+/**
+ * Runtime descriptor of one published method. Warnings, `gprime calc --list`
+ * and the report's reference list read it, so the documentation cannot drift.
+ */
+export interface MethodInfo {
+  id: string;
+  title: string;
+  /** full citation with equation or table */
+  source: string;
+  /** the equation in words or symbols, for the calc sheet */
+  equation: string;
+  validity: Record<string, ValidityRange>;
+}
+
+/** A scalar result: value in SI, unit, the method that made it and its warnings. */
+export interface Scalar {
+  value: number;
+  unit: string;
+  method: string;
+  warnings: string[];
+}
+
+/** Warnings for every input outside the method's validity ranges. */
+export function validityWarnings(info: MethodInfo, inputs: Record<string, number>): string[] {
+  const out: string[] = [];
+  for (const [name, range] of Object.entries(info.validity)) {
+    const x = inputs[name];
+    if (x === undefined || inRange(x, range)) continue;
+    const u = range.unit && range.unit !== '1' ? ` ${range.unit}` : '';
+    const lo = range.min === undefined ? '−∞' : formatNumber(range.min);
+    const hi = range.max === undefined ? '∞' : formatNumber(range.max);
+    out.push(
+      `${name} = ${formatNumber(x)}${u} is outside the range ${lo} … ${hi}${u} of ${info.title}` +
+        (range.note ? ` (${range.note})` : '') + '; the result is an extrapolation.',
+    );
+  }
+  return out;
+}
+
+/** Builds a Scalar for a method, adding its validity warnings. */
+export function scalar(info: MethodInfo, value: number, unit: string, inputs: Record<string, number>, extra: string[] = []): Scalar {
+  return { value, unit, method: info.id, warnings: [...validityWarnings(info, inputs), ...extra] };
+}

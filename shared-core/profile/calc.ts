@@ -1,0 +1,56 @@
+import { num } from '../calc/resolve';
+import { arg, type CalcMethod } from '../calc/types';
+import { InputError } from '../core/errors';
+import { DENSITY_METHODS } from '../water/density';
+import { n2Profile, mixedLayerDepth, thermoclineDepth, twoLayerFit, stabilityFlags, MIXED_LAYER_THRESHOLD, THERMOCLINE_MAX_GRADIENT, TWO_LAYER_FIT } from './stratification';
+import type { Profile } from './profile';
+import type { CalcOutput } from '../calc/types';
+
+/** Summary of a measured profile: mixed layer, thermocline, peak N² and the equivalent two layers. */
+export function summariseProfile(p: Profile): CalcOutput {
+  const mld = mixedLayerDepth(p);
+  const th = thermoclineDepth(p);
+  const fit = twoLayerFit(p);
+  const n2 = n2Profile(p).n2;
+  const warnings = [...p.warnings, ...fit.warnings];
+  if (mld.mixedToBottom) warnings.push('The density never exceeds the surface value by 0.03 kg/m³: the column is mixed to the bottom.');
+  if (th.weak) warnings.push(`The largest density gradient is ${th.gradient.toFixed(3)} kg/m³ per m, below 0.1: there is no distinct thermocline.`);
+  const unstable = stabilityFlags(p).filter((f) => f.stability === 'unstable');
+  for (const f of unstable) warnings.push(`Density inversion between ${f.top} m and ${f.bottom} m (N² = ${f.n2.toExponential(2)} 1/s²): unstable or a sensor error.`);
+  return {
+    results: {
+      mixed_layer_depth: num(mld.value, 'm'),
+      thermocline_depth: num(th.value, 'm'),
+      n2_max: num(Math.max(...n2), '1/s2'),
+      upper_thickness: num(fit.upperThickness, 'm'),
+      rho_upper: num(fit.rhoUpper, 'kg/m3'),
+      rho_lower: num(fit.rhoLower, 'kg/m3'),
+      g_prime: num(fit.gPrime, 'm/s2'),
+    },
+    warnings,
+    sources: [DENSITY_METHODS[p.eos].source, MIXED_LAYER_THRESHOLD.source, THERMOCLINE_MAX_GRADIENT.source, TWO_LAYER_FIT.source],
+  };
+}
+
+export const profileCalcMethods: CalcMethod[] = [
+  {
+    id: 'profile-summary',
+    title: 'Stratification summary of a measured profile',
+    topic: 'profile',
+    params: [{ kind: 'profile', name: 'file', description: 'path to a CSV profile (depth or elevation, temperature, optional salinity, sediment, extra columns)' }],
+    results: [
+      { name: 'mixed_layer_depth', unit: 'm', description: 'density-threshold mixed-layer depth' },
+      { name: 'thermocline_depth', unit: 'm', description: 'depth of the largest density gradient' },
+      { name: 'n2_max', unit: '1/s2', description: 'largest squared buoyancy frequency' },
+      { name: 'upper_thickness', unit: 'm', description: 'upper-layer thickness of the two-layer fit' },
+      { name: 'rho_upper', unit: 'kg/m3', description: 'upper-layer density of the fit' },
+      { name: 'rho_lower', unit: 'kg/m3', description: 'lower-layer density of the fit' },
+      { name: 'g_prime', unit: 'm/s2', description: 'reduced gravity between the fitted layers' },
+    ],
+    run(a) {
+      const p = arg.profile(a);
+      if (!p) throw new InputError('file', '(missing)', '', 'a CSV profile', 'a profile file is required');
+      return summariseProfile(p);
+    },
+  },
+];

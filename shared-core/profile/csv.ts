@@ -1,0 +1,123 @@
+import Papa from 'papaparse';
+import { InputError } from '../core/errors';
+import { convertToSi } from '../units/units';
+import type { EquationOfState } from '../water/density';
+import { makeProfile, ProfileError, type Profile, type ProfileColumn, type ProfileIssue } from './profile';
+
+/** Which standard column a header names; anything else is an extra constituent. */
+type Role = 'depth' | 'elevation' | 'temperature' | 'salinity' | 'sediment';
+
+const ROLE_PATTERNS: [Role, RegExp][] = [
+  ['depth', /^(depth|dep|d|z_?down)$/i],
+  ['elevation', /^(elevation|elev|height|z|level|stage)$/i],
+  ['temperature', /^(temperature|temp|t|water_?temp(erature)?|wtemp)$/i],
+  ['salinity', /^(salinity|sal|s|psal|practical_?salinity)$/i],
+  ['sediment', /^(sediment|ssc|tss|suspended_?(sediment|solids)|sed)$/i],
+];
+
+const SI_UNIT: Record<Role, string> = { depth: 'm', elevation: 'm', temperature: 'degC', salinity: 'PSU', sediment: 'kg/m3' };
+const DEFAULT_UNIT: Record<Role, string> = { depth: 'm', elevation: 'm', temperature: 'degC', salinity: 'PSU', sediment: 'kg/m3' };
+
+export interface ParsedHeader {
+  name: string;
+  unit: string;
+}
+
+/** Splits "depth (ft)", "Temp [degF]", "Sal (psu)", "DO mg/L" or "depth_m" into a name and a unit. */
+export function parseHeader(header: string): ParsedHeader {
+  const h = header.trim();
+  const bracket = /^(.*?)\s*[([{]\s*([^)\]}]*)\s*[)\]}]\s*$/.exec(h);
+  if (bracket) return { name: bracket[1].trim(), unit: bracket[2].trim() };
+  const spaced = /^(.*\S)\s+(\S*[/°%]\S*|m|ft|psu|ppt|degC|degF|C|F)$/i.exec(h);
+  if (spaced) return { name: spaced[1].trim(), unit: spaced[2].trim() };
+  const suffix = /^(.*?)_(m|ft|degc|degf|c|f|psu|ppt|mgl|kgm3)$/i.exec(h);
+  if (suffix) return { name: suffix[1], unit: ({ mgl: 'mg/L', kgm3: 'kg/m3' } as Record<string, string>)[suffix[2].toLowerCase()] ?? suffix[2] };
+  return { name: h, unit: '' };
+}
+
+function roleOf(name: string): Role | undefined {
+  const key = name.replace(/[\s.-]+/g, '_');
+  return ROLE_PATTERNS.find(([, re]) => re.test(key))?.[0];
+}
+
+/** Parses one cell: accepts a decimal comma when the separator is not a comma. Empty → NaN. */
+function parseCell(text: string, decimalComma: boolean): number {
+  const t = text.trim();
+  if (t === '') return NaN;
+  const normal = decimalComma ? t.replace(',', '.') : t;
+  return /^[-+]?(\d+\.?\d*|\.\d+)([eE][-+]?\d+)?$/.test(normal) ? Number(normal) : NaN;
+}
+
+export interface CsvProfileOptions {
+  eos?: EquationOfState;
+  /** water-surface elevation [m] for elevation columns; default: the highest sample */
+  surfaceElevation?: number;
+}
+
+/**
+ * Reads a profile CSV: comma, semicolon or tab separated; headers with units in any common form;
+ * decimal commas; blank lines and lines starting with # ignored. Every problem is collected and thrown
+ * at once as a ProfileError with row (1-based data row) and column.
+ */
+export function parseProfileCsv(text: string, options: CsvProfileOptions = {}): Profile {
+  const body = text.replace(/^\uFEFF/, '').split(/\r?\n/).filter((l) => !/^\s*#/.test(l)).join('\n');
+  const parsed = Papa.parse<string[]>(body, { skipEmptyLines: 'greedy', delimitersToGuess: [',', ';', '\t', '|'] });
+  const rows = parsed.data;
+  if (rows.length < 2) throw new ProfileError([{ row: 0, column: '(file)', message: 'needs a header line and at least 2 data rows' }]);
+  const delimiter = parsed.meta.delimiter;
+  const headers = rows[0].map(parseHeader);
+  const issues: ProfileIssue[] = [];
+  const roles = headers.map((h) => roleOf(h.name));
+  const find = (r: Role) => roles.indexOf(r);
+  const depthCol = find('depth') >= 0 ? find('depth') : find('elevation');
+  const tempCol = find('temperature');
+  if (depthCol < 0) issues.push({ row: 0, column: '(header)', message: `no depth or elevation column among: ${headers.map((h) => h.name).join(', ')}` });
+  if (tempCol < 0) issues.push({ row: 0, column: '(header)', message: `no temperature column among: ${headers.map((h) => h.name).join(', ')}` });
+  if (issues.length) throw new ProfileError(issues);
+
+  const data = rows.slice(1);
+  const column = (c: number): number[] => {
+    const role = roles[c];
+    const h = headers[c];
+    return data.map((r, i) => {
+      if (r.length !== headers.length) {
+        issues.push({ row: i + 1, column: h.name, message: `has ${r.length} fields, the header has ${headers.length}` });
+        return NaN;
+      }
+      const v = parseCell(r[c] ?? '', delimiter !== ',');
+      if (Number.isNaN(v)) {
+        issues.push({ row: i + 1, column: h.name, message: r[c]?.trim() ? `"${r[c].trim()}" is not a number` : 'value is missing' });
+        return NaN;
+      }
+      if (!role) return v;
+      try {
+        return convertToSi(h.name, v, h.unit || DEFAULT_UNIT[role], SI_UNIT[role]);
+      } catch (e) {
+        issues.push({ row: i + 1, column: h.name, message: e instanceof InputError ? e.message : String(e) });
+        return NaN;
+      }
+    });
+  };
+  let depth = column(depthCol);
+  if (roles[depthCol] === 'elevation') {
+    const surface = options.surfaceElevation ?? Math.max(...depth.filter(Number.isFinite));
+    depth = depth.map((z) => surface - z);
+  }
+  const col = (r: Role) => (find(r) >= 0 ? column(find(r)) : undefined);
+  const temperature = column(tempCol), salinity = col('salinity'), sediment = col('sediment');
+  const extra: ProfileColumn[] = headers.flatMap((h, c) => (roles[c] ? [] : [{ name: h.name, unit: h.unit, values: column(c) }]));
+  if (issues.length) throw new ProfileError(dedupe(issues));
+  // sort by depth when the file is ordered bottom-up (elevation tables usually are)
+  const order = depth.map((_, i) => i);
+  if (depth.length > 1 && depth[0] > depth[depth.length - 1]) order.reverse();
+  const pick = (v: number[] | undefined) => v && order.map((i) => v[i]);
+  return makeProfile({
+    depth: pick(depth)!, temperature: pick(temperature)!, salinity: pick(salinity), sediment: pick(sediment),
+    extra: extra.map((e) => ({ ...e, values: pick(e.values)! })), eos: options.eos,
+  });
+}
+
+function dedupe(issues: ProfileIssue[]): ProfileIssue[] {
+  const seen = new Set<string>();
+  return issues.filter((i) => { const k = `${i.row}|${i.column}|${i.message}`; if (seen.has(k)) return false; seen.add(k); return true; });
+}

@@ -1,0 +1,2 @@
+// Sub-commands beyond `calc` register themselves here (one import each).
+export {};

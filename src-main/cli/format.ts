@@ -1,0 +1,34 @@
+import { formatNumber } from '../../shared-core/core/errors';
+import type { CalcOutput, CalcMethod } from '../../shared-core/calc/types';
+
+/** Plain-text rendering of a calc result for a terminal. */
+export function formatCalcText(method: CalcMethod, out: CalcOutput): string {
+  const lines = [`${method.title} (${method.id})`];
+  const width = Math.max(...Object.keys(out.results).map((k) => k.length));
+  for (const [name, r] of Object.entries(out.results)) {
+    const v = typeof r.value === 'number' ? formatNumber(r.value) : r.value;
+    lines.push(`  ${name.padEnd(width)}  ${v}${r.unit && r.unit !== '1' ? ' ' + r.unit : ''}`);
+  }
+  if (out.warnings.length) lines.push('Warnings:', ...out.warnings.map((w) => `  ! ${w}`));
+  lines.push('Sources:', ...out.sources.map((s) => `  - ${s}`));
+  return lines.join('\n');
+}
+
+/** The self-description of every method for `gprime calc --list`. */
+export function describeMethods(methods: readonly CalcMethod[]) {
+  return methods.map((m) => ({
+    id: m.id,
+    title: m.title,
+    topic: m.topic,
+    parameters: m.params.map((p) => ({
+      name: p.name,
+      kind: p.kind,
+      description: p.description,
+      ...(p.kind === 'number' ? { unit: p.unit, range: p.range ?? {} } : {}),
+      ...(p.kind === 'choice' ? { choices: p.choices } : {}),
+      ...('default' in p && p.default !== undefined ? { default: p.default } : {}),
+      required: !p.optional && !('default' in p && p.default !== undefined),
+    })),
+    results: m.results.map((r) => ({ name: r.name, unit: r.unit, description: r.description })),
+  }));
+}

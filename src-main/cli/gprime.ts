@@ -1,0 +1,4 @@
+import './commands';
+import { main } from './main';
+
+process.exitCode = await main(process.argv.slice(2));

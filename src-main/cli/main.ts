@@ -1,0 +1,52 @@
+import { InputError } from '../../shared-core/core/errors';
+import { ProfileError } from '../../shared-core/profile/profile';
+import { calcCommand } from './calc-command';
+import { UsageError, type CommandResult } from './errors';
+
+const USAGE = `gprime — screening estimates for stratified flows and density currents
+
+Usage:
+  gprime calc <method> name=value … [--json]   run one estimate (values in SI or with units: depth=30ft)
+  gprime calc --list [--json]                   list every method, its parameters and results
+  gprime help                                   this text
+
+Exit codes: 0 success, 2 bad input, 1 internal error.
+Screening estimates only: local codes, the permitting authority and licensed engineering practice govern.`;
+
+export type CommandHandler = (args: string[], json: boolean) => CommandResult | Promise<CommandResult>;
+
+const COMMANDS: Record<string, CommandHandler> = {
+  calc: calcCommand,
+};
+
+/** Registers a sub-command (later modules add `assess` and others). */
+export function registerCommand(name: string, handler: CommandHandler): void {
+  COMMANDS[name] = handler;
+}
+
+/** Runs the CLI on argv (without node and script) and returns the exit code. */
+export async function main(argv: string[]): Promise<number> {
+  const json = argv.includes('--json');
+  const args = argv.filter((a) => a !== '--json');
+  const [command, ...rest] = args;
+  if (!command || command === 'help' || command === '--help' || command === '-h') {
+    process.stdout.write(USAGE + '\n');
+    return command ? 0 : 2;
+  }
+  const handler = COMMANDS[command];
+  try {
+    if (!handler) throw new UsageError(`unknown command "${command}"; try \`gprime help\``);
+    const result = await handler(rest, json);
+    process.stdout.write(result.stdout + '\n');
+    return result.exitCode ?? 0;
+  } catch (e) {
+    const bad = e instanceof InputError || e instanceof ProfileError || e instanceof UsageError;
+    const message = e instanceof Error ? e.message : String(e);
+    if (json) {
+      const field = e instanceof InputError ? e.field : undefined;
+      process.stdout.write(JSON.stringify({ error: { kind: bad ? 'input' : 'internal', field, message } }) + '\n');
+    }
+    process.stderr.write(`gprime: ${message}\n`);
+    return bad ? 2 : 1;
+  }
+}
