@@ -1,0 +1,4 @@
+import type { CalcMethod } from '../calc/types';
+
+/** The inflows methods of `gprime calc`. */
+export const inflowCalcMethods: CalcMethod[] = [];
