@@ -4,6 +4,7 @@ export default defineConfig({
   test: {
     include: ['test/**/*.test.ts'],
     environment: 'node',
+    globalSetup: ['test/global-setup.ts'],
     testTimeout: 30000,
     hookTimeout: 120000,
   },

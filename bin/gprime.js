@@ -1,5 +1,6 @@
 #!/usr/bin/env node
-// Launcher: runs the TypeScript CLI through tsx's loader, so `npx gprime …` works after `npm install`.
-import { register } from 'tsx/esm/api';
-register();
-await import('../src-main/cli/gprime.ts');
+// The `gprime` command: runs the bundled TypeScript CLI, rebuilding the bundle when a source changed.
+import { pathToFileURL } from 'node:url';
+import { ensureCliBundle } from './cli-bundle.js';
+
+await import(pathToFileURL(await ensureCliBundle()).href);

@@ -12,7 +12,7 @@ export const TEOS10_75: MethodInfo = {
   validity: {
     salinity: { min: 0, max: 42, unit: 'PSU', note: 'oceanographic funnel of the fit' },
     temperature: { min: -2, max: 40, unit: 'degC' },
-    pressure: { min: 0, max: 200, unit: 'dbar', note: 'in-situ temperature is taken as potential temperature; θ − t < 0.02 °C above 200 dbar' },
+    pressure: { min: 0, max: 1000, unit: 'dbar', note: 'θ from t by one midpoint step of the adiabatic lapse rate' },
   },
 };
 
@@ -86,19 +86,35 @@ export function specificVolume75(absoluteSalinity: number, conservativeTemperatu
 }
 
 /**
+ * Potential temperature referenced to 0 dbar by one midpoint step of the adiabatic lapse rate
+ * Γ = (T α)/(ρ c_p) (Fofonoff 1977, Deep-Sea Res. 24, 489–491; TEOS-10 Manual Eq. 2.22.1), with the thermal
+ * expansion α from the 75-term polynomial and c_p ≈ c_p0. Error below 0.002 °C above 1000 dbar.
+ */
+export function potentialTemperatureApprox(absoluteSalinity: number, temperature: number, pressure: number): number {
+  const lapse = (t: number, p: number) => {
+    const ct = conservativeTemperatureFromPt(absoluteSalinity, t);
+    const dv = (specificVolume75(absoluteSalinity, ct + 0.01, p) - specificVolume75(absoluteSalinity, ct - 0.01, p)) / 0.02;
+    return ((t + 273.15) * dv) / CP0; // K per Pa: Γ = T (∂v/∂T) / c_p
+  };
+  const pa = pressure * 1e4;
+  const mid = temperature - 0.5 * pa * lapse(temperature, pressure);
+  return temperature - pa * lapse(mid, pressure / 2);
+}
+
+/**
  * Seawater in-situ density with TEOS-10 (75-term polynomial of Roquet et al. 2015).
- * SA = (35.16504/35)·SP (reference composition, no δSA); θ ≈ t (adiabatic correction neglected, see validity);
+ * SA = (35.16504/35)·SP (reference composition, no δSA); θ from potentialTemperatureApprox();
  * CT = h0(SA, θ)/c_p0; ρ = 1/v(SA, CT, p).
  * @param salinity practical salinity [PSU]; @param temperature in-situ temperature [degC, ITS-90]; @param pressure [dbar]
  * @returns density [kg/m3]
  * @source Roquet et al. (2015), Ocean Modelling 90, 29–43; TEOS-10 Manual (IOC et al. 2010) §2.5, §3.3.
- * @validity S 0–42, t −2–40 °C; p ≤ 200 dbar for the θ ≈ t simplification (error < 0.005 kg/m³ there).
+ * @validity S 0–42, t −2–40 °C, p ≤ 1000 dbar (gprime's surface-water range; GSW's exact θ would extend it).
  */
 export function densitySeawaterTeos10(salinity: number, temperature: number, pressure = 0): Scalar {
   const sp = requireInRange('salinity', salinity, 'PSU', { min: 0, max: 70 });
   const t = requireInRange('temperature', temperature, 'degC', { min: -3, max: 60 });
   const p = requireInRange('pressure', pressure, 'dbar', { min: 0, max: 12000 });
   const sa = absoluteSalinityReference(sp);
-  const ct = conservativeTemperatureFromPt(sa, t);
+  const ct = conservativeTemperatureFromPt(sa, p === 0 ? t : potentialTemperatureApprox(sa, t, p));
   return scalar(TEOS10_75, 1 / specificVolume75(sa, ct, p), 'kg/m3', { salinity: sp, temperature: t, pressure: p });
 }

@@ -8,7 +8,7 @@ export const VISCOSITY_KESTIN_1978: MethodInfo = {
   source:
     'Kestin, J., Sokolov, M., Wakeham, W.A. (1978). Viscosity of liquid water in the range −8 °C to 150 °C. ' +
     'J. Phys. Chem. Ref. Data 7(3), 941–948, Eq. (9), μ20 = 1.002 mPa·s; kinematic viscosity ν = μ/ρ with ρ from Kell (1975).',
-  equation: 'log10(μ/μ20) = (20 − t)/(t + 96) · [1.2364 − 1.37e-3 (20 − t) + 5.7e-6 (20 − t)²];  ν = μ/ρ',
+  equation: 'log10(μ/μ20) = (20 − t)/(t + 96) · [1.2378 − 1.303e-3 (20 − t) + 3.06e-6 (20 − t)² + 2.55e-8 (20 − t)³];  ν = μ/ρ',
   validity: { temperature: { min: 0, max: 100, unit: 'degC', note: 'pure water at atmospheric pressure' } },
 };
 
@@ -21,7 +21,7 @@ export const VISCOSITY_KESTIN_1978: MethodInfo = {
 export function dynamicViscosityKestin1978(temperature: number): Scalar {
   const t = requireInRange('temperature', temperature, 'degC', { min: -8, max: 150 });
   const d = 20 - t;
-  const log10Ratio = (d / (t + 96)) * (1.2364 - 1.37e-3 * d + 5.7e-6 * d * d);
+  const log10Ratio = (d / (t + 96)) * (1.2378 + d * (-1.303e-3 + d * (3.06e-6 + d * 2.55e-8)));
   return scalar(VISCOSITY_KESTIN_1978, 1.002e-3 * 10 ** log10Ratio, 'Pa s', { temperature: t });
 }
 

@@ -1,0 +1,111 @@
+import { readFileSync } from 'node:fs';
+import { resolve } from 'node:path';
+import { describe, expect, it } from 'vitest';
+import fc from 'fast-check';
+import { runCheckValues } from '../../helpers/check-values';
+import {
+  parseProfileCsv, makeProfile, n2Profile, stabilityFlags, mixedLayerDepth, thermoclineDepth, twoLayerFit, interpolateAt,
+  ProfileError, NEUTRAL_N2, parseHeader,
+} from '../../../shared-core/profile';
+import { densitySeawaterEos80 } from '../../../shared-core/water';
+import { GRAVITY } from '../../../shared-core/quantities';
+
+const fixture = (name: string) => parseProfileCsv(readFileSync(resolve(import.meta.dirname, '../../fixtures/profiles', name), 'utf8'));
+
+runCheckValues('profile', 'two-layer-least-squares', (i) => {
+  const fit = twoLayerFit(fixture(String(i.profile)));
+  return i.output === 'upper_thickness' ? fit.upperThickness : fit.gPrime;
+});
+runCheckValues('profile', 'thermocline-max-gradient', (i) => thermoclineDepth(fixture(String(i.profile))).value);
+runCheckValues('profile', 'mixed-layer-density-threshold', (i) => mixedLayerDepth(fixture(String(i.profile))).value);
+
+describe('CSV import', () => {
+  it('reads units in headers, semicolons and decimal commas', () => {
+    const p = parseProfileCsv('Depth [ft];Temp (degF);Sal (psu);DO (mg/L)\n0;68,0;0;8,1\n10;59,0;0;7,9\n');
+    expect(p.depth[1]).toBeCloseTo(3.048, 10); // NIST SP 811: 1 ft = 0.3048 m exactly
+    expect(p.temperature[0]).toBeCloseTo(20, 10);
+    expect(p.temperature[1]).toBeCloseTo(15, 10);
+    expect(p.extra[0]).toEqual({ name: 'DO', unit: 'mg/L', values: [8.1, 7.9] });
+  });
+
+  it('reads tabs, elevation columns (bottom-up) and mg/L sediment', () => {
+    const p = parseProfileCsv('elevation (m)\ttemperature (C)\tTSS (mg/L)\n90\t8\t20\n95\t12\t10\n100\t20\t5\n');
+    expect(p.depth).toEqual([0, 5, 10]);
+    expect(p.temperature).toEqual([20, 12, 8]);
+    expect(p.sediment[2]).toBeCloseTo(0.02, 12);
+  });
+
+  it('reports every bad row with row and column', () => {
+    try {
+      parseProfileCsv('depth (m),temperature (degC)\n0,20\n1,abc\n2,\n3,99\n');
+      expect.unreachable();
+    } catch (e) {
+      expect(e).toBeInstanceOf(ProfileError);
+      const msg = (e as Error).message;
+      expect(msg).toMatch(/row 2, column "temperature": "abc" is not a number/);
+      expect(msg).toMatch(/row 3, column "temperature": value is missing/);
+    }
+    expect(() => parseProfileCsv('depth (m),temperature (degC)\n0,20\n1,99\n')).toThrow(/row 2, column "temperature": 99 degC is physically impossible/);
+    expect(() => parseProfileCsv('depth (m),temperature (degC)\n0,20\n0,19\n')).toThrow(/row 2, column "depth": duplicate depth/);
+    expect(() => parseProfileCsv('depth (m),temperature (degC)\n0,20\n5,19\n3,18\n')).toThrow(/row 3, column "depth": depth 3 m is shallower/);
+    expect(() => parseProfileCsv('depth (kg),temperature (degC)\n0,20\n5,19\n')).toThrow(/cannot be converted to m/);
+    expect(() => parseProfileCsv('height,colour\n0,1\n')).toThrow(/no temperature column/);
+  });
+
+  it('splits header names and units in the common forms', () => {
+    expect(parseHeader('depth (ft)')).toEqual({ name: 'depth', unit: 'ft' });
+    expect(parseHeader('Temp [degF]')).toEqual({ name: 'Temp', unit: 'degF' });
+    expect(parseHeader('depth_m')).toEqual({ name: 'depth', unit: 'm' });
+    expect(parseHeader('DO mg/L')).toEqual({ name: 'DO', unit: 'mg/L' });
+  });
+});
+
+describe('stratification', () => {
+  it('N² of a linear salinity gradient equals g/ρ dρ/dd (Gill 1982, Eq. 3.7.5)', () => {
+    const depth = [0, 10, 20, 30];
+    const p = makeProfile({ depth, temperature: [10, 10, 10, 10], salinity: [30, 31, 32, 33] });
+    const { n2 } = n2Profile(p);
+    const rho = depth.map((_, i) => densitySeawaterEos80(30 + i, 10).value);
+    n2.forEach((v, i) => expect(v).toBeCloseTo((GRAVITY * (rho[i + 1] - rho[i])) / (0.5 * (rho[i] + rho[i + 1]) * 10), 12));
+  });
+
+  it('the N² sign matches the stability flag (property)', () => {
+    fc.assert(fc.property(fc.array(fc.double({ min: 0, max: 30, noNaN: true }), { minLength: 2, maxLength: 30 }), (temps) => {
+      const p = makeProfile({ depth: temps.map((_, i) => i), temperature: temps });
+      const flags = stabilityFlags(p);
+      for (const f of flags) {
+        if (f.stability === 'unstable') expect(f.n2).toBeLessThan(-NEUTRAL_N2);
+        if (f.stability === 'stable') expect(f.n2).toBeGreaterThan(NEUTRAL_N2);
+        if (f.stability === 'neutral') expect(Math.abs(f.n2)).toBeLessThanOrEqual(NEUTRAL_N2);
+      }
+    }));
+  });
+
+  it('the two-layer fit conserves the column mass and brackets the profile (property)', () => {
+    fc.assert(fc.property(fc.array(fc.double({ min: 4, max: 30, noNaN: true }), { minLength: 3, maxLength: 20 }), (temps) => {
+      const sorted = [...temps].sort((a, b) => b - a); // warm on top: stable
+      const p = makeProfile({ depth: sorted.map((_, i) => i * 2), temperature: sorted });
+      const fit = twoLayerFit(p, 200);
+      const min = Math.min(...p.density), max = Math.max(...p.density);
+      expect(fit.rhoUpper).toBeGreaterThanOrEqual(min - 1e-9);
+      expect(fit.rhoLower).toBeLessThanOrEqual(max + 1e-9);
+      expect(fit.gPrime).toBeGreaterThanOrEqual(-1e-12);
+      const bottom = p.depth[p.depth.length - 1];
+      const cells = 200, dz = bottom / cells;
+      let mass = 0;
+      for (let i = 0; i < cells; i++) mass += interpolateAt(p.depth, p.density, (i + 0.5) * dz) * dz;
+      expect(fit.rhoUpper * fit.upperThickness + fit.rhoLower * fit.lowerThickness).toBeCloseTo(mass, 6);
+    }));
+  });
+
+  it('never lets NaN out of a profile built from arbitrary numbers', () => {
+    fc.assert(fc.property(fc.array(fc.double(), { minLength: 0, maxLength: 6 }), fc.array(fc.double(), { minLength: 0, maxLength: 6 }), (d, t) => {
+      try {
+        const p = makeProfile({ depth: d, temperature: t });
+        expect(p.density.every(Number.isFinite)).toBe(true);
+      } catch (e) {
+        expect(e).toBeInstanceOf(ProfileError);
+      }
+    }));
+  });
+});
