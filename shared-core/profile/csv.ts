@@ -40,12 +40,11 @@ function roleOf(name: string): Role | undefined {
   return ROLE_PATTERNS.find(([, re]) => re.test(key))?.[0];
 }
 
-/** Parses one cell: accepts a decimal comma when the separator is not a comma. Empty → NaN. */
-function parseCell(text: string, decimalComma: boolean): number {
-  const t = text.trim();
-  if (t === '') return NaN;
-  const normal = decimalComma ? t.replace(',', '.') : t;
-  return /^[-+]?(\d+\.?\d*|\.\d+)([eE][-+]?\d+)?$/.test(normal) ? Number(normal) : NaN;
+/** Parses one cell (a number, or text in plain decimal notation). Empty or null → NaN. */
+function parseCell(cell: string | number | null | undefined): number {
+  if (typeof cell === 'number') return Number.isFinite(cell) ? cell : NaN;
+  const t = (cell ?? '').trim();
+  return /^[-+]?(\d+\.?\d*|\.\d+)([eE][-+]?\d+)?$/.test(t) ? Number(t) : NaN;
 }
 
 export interface CsvProfileOptions {
@@ -54,18 +53,36 @@ export interface CsvProfileOptions {
   surfaceElevation?: number;
 }
 
+/** A profile as a table: header texts (name and unit, e.g. "depth (ft)") and rows of cells. */
+export interface ProfileTable {
+  columns: string[];
+  rows: (string | number | null)[][];
+}
+
 /**
- * Reads a profile CSV: comma, semicolon or tab separated; headers with units in any common form;
- * decimal commas; blank lines and lines starting with # ignored. Every problem is collected and thrown
- * at once as a ProfileError with row (1-based data row) and column.
+ * Reads CSV text into a table: comma, semicolon, tab or bar separated; blank lines and lines starting
+ * with # ignored. With a separator other than a comma, decimal commas are turned into points.
  */
-export function parseProfileCsv(text: string, options: CsvProfileOptions = {}): Profile {
+export function readCsvTable(text: string): ProfileTable {
   const body = text.replace(/^\uFEFF/, '').split(/\r?\n/).filter((l) => !/^\s*#/.test(l)).join('\n');
   const parsed = Papa.parse<string[]>(body, { skipEmptyLines: 'greedy', delimitersToGuess: [',', ';', '\t', '|'] });
-  const rows = parsed.data;
-  if (rows.length < 2) throw new ProfileError([{ row: 0, column: '(file)', message: 'needs a header line and at least 2 data rows' }]);
-  const delimiter = parsed.meta.delimiter;
-  const headers = rows[0].map(parseHeader);
+  const [header = [], ...data] = parsed.data;
+  const decimalComma = parsed.meta.delimiter !== ',';
+  return { columns: header.map((h) => h.trim()), rows: data.map((r) => r.map((c) => (decimalComma ? c.replace(',', '.') : c))) };
+}
+
+/**
+ * Reads a profile CSV (see readCsvTable) into a Profile; headers carry units in any common form.
+ * Every problem is collected and thrown at once as a ProfileError with row (1-based data row) and column.
+ */
+export function parseProfileCsv(text: string, options: CsvProfileOptions = {}): Profile {
+  return profileFromTable(readCsvTable(text), options);
+}
+
+/** Builds a Profile from a table of header texts and cells, converting every unit to SI. */
+export function profileFromTable(table: ProfileTable, options: CsvProfileOptions = {}): Profile {
+  if (table.rows.length < 2) throw new ProfileError([{ row: 0, column: '(file)', message: 'needs a header line and at least 2 data rows' }]);
+  const headers = table.columns.map(parseHeader);
   const issues: ProfileIssue[] = [];
   const roles = headers.map((h) => roleOf(h.name));
   const find = (r: Role) => roles.indexOf(r);
@@ -75,7 +92,7 @@ export function parseProfileCsv(text: string, options: CsvProfileOptions = {}): 
   if (tempCol < 0) issues.push({ row: 0, column: '(header)', message: `no temperature column among: ${headers.map((h) => h.name).join(', ')}` });
   if (issues.length) throw new ProfileError(issues);
 
-  const data = rows.slice(1);
+  const data = table.rows;
   const column = (c: number): number[] => {
     const role = roles[c];
     const h = headers[c];
@@ -84,9 +101,11 @@ export function parseProfileCsv(text: string, options: CsvProfileOptions = {}): 
         issues.push({ row: i + 1, column: h.name, message: `has ${r.length} fields, the header has ${headers.length}` });
         return NaN;
       }
-      const v = parseCell(r[c] ?? '', delimiter !== ',');
+      const cell = r[c];
+      const v = parseCell(cell);
       if (Number.isNaN(v)) {
-        issues.push({ row: i + 1, column: h.name, message: r[c]?.trim() ? `"${r[c].trim()}" is not a number` : 'value is missing' });
+        const shown = cell === null || cell === undefined ? '' : String(cell).trim();
+        issues.push({ row: i + 1, column: h.name, message: shown ? `"${shown}" is not a number` : 'value is missing' });
         return NaN;
       }
       if (!role) return v;
@@ -107,7 +126,7 @@ export function parseProfileCsv(text: string, options: CsvProfileOptions = {}): 
   const temperature = column(tempCol), salinity = col('salinity'), sediment = col('sediment');
   const extra: ProfileColumn[] = headers.flatMap((h, c) => (roles[c] ? [] : [{ name: h.name, unit: h.unit, values: column(c) }]));
   if (issues.length) throw new ProfileError(dedupe(issues));
-  // sort by depth when the file is ordered bottom-up (elevation tables usually are)
+  // sort by depth when the table is ordered bottom-up (elevation tables usually are)
   const order = depth.map((_, i) => i);
   if (depth.length > 1 && depth[0] > depth[depth.length - 1]) order.reverse();
   const pick = (v: number[] | undefined) => v && order.map((i) => v[i]);

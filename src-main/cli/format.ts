@@ -1,4 +1,5 @@
 import { formatNumber } from '../../shared-core/core/errors';
+import { SCREENING_CAUTION } from '../../shared-core/core/caution';
 import type { CalcOutput, CalcMethod } from '../../shared-core/calc/types';
 
 /** Plain-text rendering of a calc result for a terminal. */
@@ -10,7 +11,7 @@ export function formatCalcText(method: CalcMethod, out: CalcOutput): string {
     lines.push(`  ${name.padEnd(width)}  ${v}${r.unit && r.unit !== '1' ? ' ' + r.unit : ''}`);
   }
   if (out.warnings.length) lines.push('Warnings:', ...out.warnings.map((w) => `  ! ${w}`));
-  lines.push('Sources:', ...out.sources.map((s) => `  - ${s}`));
+  lines.push('Sources:', ...out.sources.map((s) => `  - ${s}`), '', SCREENING_CAUTION);
   return lines.join('\n');
 }
 

@@ -1,5 +1,6 @@
 import { InputError } from '../../shared-core/core/errors';
 import { ProfileError } from '../../shared-core/profile/profile';
+import { SiteFileError } from '../../shared-core/site/load';
 import { calcCommand } from './calc-command';
 import { UsageError, type CommandResult } from './errors';
 
@@ -8,6 +9,9 @@ const USAGE = `gprime — screening estimates for stratified flows and density c
 Usage:
   gprime calc <method> name=value … [--json]   run one estimate (values in SI or with units: depth=30ft)
   gprime calc --list [--json]                   list every method, its parameters and results
+  gprime assess <site file> [--json]            evaluate every estimate of a site file
+  gprime assess <site file> --out <folder> [--format pdf,png,svg,csv,xlsx] [--units si|us]
+                                                write the calc sheet, charts and tables
   gprime help                                   this text
 
 Exit codes: 0 success, 2 bad input, 1 internal error.
@@ -40,7 +44,7 @@ export async function main(argv: string[]): Promise<number> {
     process.stdout.write(result.stdout + '\n');
     return result.exitCode ?? 0;
   } catch (e) {
-    const bad = e instanceof InputError || e instanceof ProfileError || e instanceof UsageError;
+    const bad = e instanceof InputError || e instanceof ProfileError || e instanceof UsageError || e instanceof SiteFileError;
     const message = e instanceof Error ? e.message : String(e);
     if (json) {
       const field = e instanceof InputError ? e.field : undefined;

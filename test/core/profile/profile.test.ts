@@ -49,7 +49,7 @@ describe('CSV import', () => {
     expect(() => parseProfileCsv('depth (m),temperature (degC)\n0,20\n0,19\n')).toThrow(/row 2, column "depth": duplicate depth/);
     expect(() => parseProfileCsv('depth (m),temperature (degC)\n0,20\n5,19\n3,18\n')).toThrow(/row 3, column "depth": depth 3 m is shallower/);
     expect(() => parseProfileCsv('depth (kg),temperature (degC)\n0,20\n5,19\n')).toThrow(/cannot be converted to m/);
-    expect(() => parseProfileCsv('height,colour\n0,1\n')).toThrow(/no temperature column/);
+    expect(() => parseProfileCsv('height,colour\n0,1\n1,2\n')).toThrow(/no temperature column/);
   });
 
   it('splits header names and units in the common forms', () => {

@@ -1,0 +1,67 @@
+import { assessSite, type Assessment } from '../../shared-core/site';
+import { formatNumber } from '../../shared-core/core/errors';
+import { readSiteFile, GPRIME_VERSION } from '../services/site-file';
+import { UsageError, type CommandResult } from './errors';
+
+/** A short plain-text summary: per estimate its key result and warnings count. */
+export function summariseAssessment(a: Assessment): string {
+  const lines = [`${a.project.name} — ${a.waterBody}`, `gprime ${a.gprimeVersion}, site file sha256 ${a.siteHash.slice(0, 16)}…`, ''];
+  for (const e of a.estimates) {
+    const where = [e.feature?.name, e.condition?.name].filter(Boolean).join(', ');
+    if (e.status === 'error') {
+      lines.push(`✗ ${e.id} (${e.method}${where ? `; ${where}` : ''}): ${e.error}`);
+      continue;
+    }
+    const [key, r] = Object.entries(e.results)[0] ?? ['', { value: '', unit: '' }];
+    const value = typeof r.value === 'number' ? formatNumber(r.value) : r.value;
+    lines.push(`• ${e.id} (${e.method}${where ? `; ${where}` : ''}): ${key} = ${value}${r.unit && r.unit !== '1' ? ' ' + r.unit : ''}` +
+      (e.warnings.length ? `  [${e.warnings.length} warning${e.warnings.length > 1 ? 's' : ''}]` : ''));
+  }
+  lines.push('', a.caution);
+  return lines.join('\n');
+}
+
+/** Options of `gprime assess`. */
+export interface AssessOptions {
+  file: string;
+  out?: string;
+  formats?: string[];
+  units?: 'si' | 'us';
+}
+
+export function parseAssessArgs(args: string[]): AssessOptions {
+  const opts: AssessOptions = { file: '' };
+  for (let i = 0; i < args.length; i++) {
+    const a = args[i];
+    const value = () => {
+      const v = args[++i];
+      if (v === undefined) throw new UsageError(`${a} needs a value`);
+      return v;
+    };
+    if (a === '--out') opts.out = value();
+    else if (a === '--format') opts.formats = value().split(',').map((s) => s.trim()).filter(Boolean);
+    else if (a === '--units') {
+      const u = value();
+      if (u !== 'si' && u !== 'us') throw new UsageError(`--units takes si or us, not "${u}"`);
+      opts.units = u;
+    } else if (a.startsWith('--')) throw new UsageError(`unknown option ${a}`);
+    else if (!opts.file) opts.file = a;
+    else throw new UsageError(`unexpected argument "${a}"`);
+  }
+  if (!opts.file) throw new UsageError('gprime assess needs a site file: gprime assess <site file> [--json] [--out <folder>]');
+  return opts;
+}
+
+/** `gprime assess <site file> [--json]` evaluates every estimate of the site. */
+export async function assessCommand(args: string[], json: boolean): Promise<CommandResult> {
+  const opts = parseAssessArgs(args);
+  const loaded = readSiteFile(opts.file);
+  const assessment = assessSite(loaded.site, { gprimeVersion: GPRIME_VERSION, siteHash: loaded.hash });
+  if (opts.out) {
+    const { writeReport } = await import('../report/write-report');
+    const written = await writeReport(loaded, assessment, { outDir: opts.out, formats: opts.formats, units: opts.units ?? loaded.site.units });
+    const summary = summariseAssessment(assessment) + `\n\nWrote ${written.length} files to ${opts.out}:\n` + written.map((w) => `  ${w}`).join('\n');
+    return { stdout: json ? JSON.stringify({ ...assessment, written }) : summary };
+  }
+  return { stdout: json ? JSON.stringify(assessment) : summariseAssessment(assessment) };
+}

@@ -1,0 +1,75 @@
+import { readFileSync } from 'node:fs';
+import { resolve } from 'node:path';
+import { describe, expect, it } from 'vitest';
+import fc from 'fast-check';
+import { loadSite, serialiseSite, assessSite, siteJsonSchema, SiteFileError, SITE_VERSION } from '../../../shared-core/site';
+
+const ROOT = resolve(import.meta.dirname, '../../..');
+const read = (p: string) => readFileSync(resolve(ROOT, p), 'utf8');
+const DEMOS = ['examples/quillmere-reservoir.gpsite', 'examples/amsel-estuary.gpsite'];
+
+describe('site document', () => {
+  it('the demo sites load and survive a save/load round trip unchanged', () => {
+    for (const path of DEMOS) {
+      const site = loadSite(read(path));
+      expect(loadSite(serialiseSite(site))).toEqual(site);
+    }
+  });
+
+  it('migrates a version-1 file forward (single profile → one named condition)', () => {
+    const site = loadSite(read('test/fixtures/sites/version1.gpsite'));
+    expect(site.version).toBe(SITE_VERSION);
+    expect(site.conditions).toHaveLength(1);
+    expect(site.conditions[0].profile.columns).toEqual(['depth (ft)', 'temperature (degF)']);
+    expect(site.estimates[0].condition).toBe(site.conditions[0].id);
+    const a = assessSite(site, { gprimeVersion: 't', siteHash: 'h' });
+    expect(a.estimates[0].status).toBe('ok');
+  });
+
+  it('refuses a newer version with a clear message', () => {
+    const doc = JSON.parse(read(DEMOS[0]));
+    doc.version = SITE_VERSION + 1;
+    expect(() => loadSite(JSON.stringify(doc))).toThrow(/version 3; this gprime reads versions up to 2/);
+  });
+
+  it('names the place of a malformed value', () => {
+    const doc = JSON.parse(read(DEMOS[0]));
+    doc.features[0].ports[1].depth = true;
+    try {
+      loadSite(JSON.stringify(doc));
+      expect.unreachable();
+    } catch (e) {
+      expect(e).toBeInstanceOf(SiteFileError);
+      expect((e as SiteFileError).place).toBe('features[0].ports[1].depth');
+    }
+    expect(() => loadSite('{"format": "gprime-site", "version": 2,')).toThrow(SiteFileError);
+    expect(() => loadSite('{"format": "other"}')).toThrow(/not a gprime site file/);
+  });
+
+  it('never throws anything but SiteFileError on arbitrary JSON (property)', () => {
+    fc.assert(fc.property(fc.jsonValue(), (v) => {
+      try { loadSite(JSON.stringify(v)); } catch (e) { expect(e).toBeInstanceOf(SiteFileError); }
+    }));
+  });
+
+  it('the shipped JSON Schema matches the zod schema', () => {
+    expect(JSON.parse(read('shared-core/site/site.schema.json'))).toEqual(JSON.parse(JSON.stringify(siteJsonSchema())));
+  });
+
+  it('assessing is deterministic: the same site gives the same numbers', () => {
+    const site = loadSite(read(DEMOS[0]));
+    const a = assessSite(site, { gprimeVersion: 't', siteHash: 'h' });
+    const b = assessSite(loadSite(read(DEMOS[0])), { gprimeVersion: 't', siteHash: 'h' });
+    expect(JSON.stringify(a)).toBe(JSON.stringify(b));
+  });
+
+  it('a bad value in a feature gives that estimate an error naming the place, the others still run', () => {
+    const doc = JSON.parse(read(DEMOS[0]));
+    doc.features[0].release = '18 kg';
+    const a = assessSite(loadSite(JSON.stringify(doc)), { gprimeVersion: 't', siteHash: 'h' });
+    const blend = a.estimates.find((e) => e.id === 'release-summer')!;
+    expect(blend.status).toBe('error');
+    expect(blend.error).toMatch(/features\[0\]\.release/);
+    expect(a.estimates.find((e) => e.id === 'strat-summer')!.status).toBe('ok');
+  });
+});
