@@ -19,10 +19,32 @@ export interface ResultSpec {
 
 export type ResultValue = { value: number; unit: string } | { value: string; unit: '' };
 
+/** One axis of a chart series: label, SI unit and values. */
+export interface SeriesAxis {
+  label: string;
+  unit: string;
+  values: number[];
+}
+
+/**
+ * A curve for charts (UI, report): x against one or more y columns, all in SI. `depthAxis` marks
+ * vertical-section charts where y is a depth drawn downwards (profiles, mode shapes, plume paths).
+ */
+export interface Series {
+  title: string;
+  x: SeriesAxis;
+  y: SeriesAxis[];
+  depthAxis?: boolean;
+  /** a short caption for the chart */
+  caption?: string;
+}
+
 export interface CalcOutput {
   results: Record<string, ResultValue>;
   warnings: string[];
   sources: string[];
+  /** curves for charts; not part of the CLI's JSON contract */
+  series?: Series[];
 }
 
 export type CalcArgValue = number | string | Profile;

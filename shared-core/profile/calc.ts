@@ -4,7 +4,7 @@ import { InputError } from '../core/errors';
 import { DENSITY_METHODS } from '../water/density';
 import { n2Profile, mixedLayerDepth, thermoclineDepth, twoLayerFit, stabilityFlags, MIXED_LAYER_THRESHOLD, THERMOCLINE_MAX_GRADIENT, TWO_LAYER_FIT } from './stratification';
 import type { Profile } from './profile';
-import type { CalcOutput } from '../calc/types';
+import type { CalcOutput, Series } from '../calc/types';
 
 /** Summary of a measured profile: mixed layer, thermocline, peak N² and the equivalent two layers. */
 export function summariseProfile(p: Profile): CalcOutput {
@@ -29,7 +29,22 @@ export function summariseProfile(p: Profile): CalcOutput {
     },
     warnings,
     sources: [DENSITY_METHODS[p.eos].source, MIXED_LAYER_THRESHOLD.source, THERMOCLINE_MAX_GRADIENT.source, TWO_LAYER_FIT.source],
+    series: profileSeries(p),
   };
+}
+
+/** Profile charts: temperature, salinity and density against depth, and N² at the mid-depths. */
+export function profileSeries(p: Profile): Series[] {
+  const depth = { label: 'Depth', unit: 'm', values: [...p.depth] };
+  const n2 = n2Profile(p);
+  const out: Series[] = [
+    { title: 'Temperature', x: depth, y: [{ label: 'Temperature', unit: 'degC', values: [...p.temperature] }], depthAxis: true, caption: 'Measured temperature against depth' },
+    { title: 'Density', x: depth, y: [{ label: 'Density', unit: 'kg/m3', values: [...p.density] }], depthAxis: true, caption: `Potential density (${p.eos}) against depth` },
+    { title: 'Buoyancy frequency squared', x: { label: 'Depth', unit: 'm', values: n2.depth }, y: [{ label: 'N²', unit: '1/s2', values: n2.n2 }], depthAxis: true, caption: 'N² between samples, at mid-depths' },
+  ];
+  if (p.salinity.some((s) => s > 0)) out.splice(1, 0, { title: 'Salinity', x: depth, y: [{ label: 'Salinity', unit: 'PSU', values: [...p.salinity] }], depthAxis: true, caption: 'Measured practical salinity against depth' });
+  for (const c of p.extra) out.push({ title: c.name, x: depth, y: [{ label: c.name, unit: c.unit || '1', values: [...c.values] }], depthAxis: true, caption: `${c.name} against depth` });
+  return out;
 }
 
 export const profileCalcMethods: CalcMethod[] = [

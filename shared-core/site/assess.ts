@@ -1,6 +1,6 @@
 import { findCalcMethod } from '../calc/registry';
 import { resolveArgs, runCalc, type RawArg } from '../calc/resolve';
-import type { CalcMethod, ResultValue } from '../calc/types';
+import type { CalcMethod, ResultValue, Series } from '../calc/types';
 import { InputError } from '../core/errors';
 import { SCREENING_CAUTION } from '../core/caution';
 import { ProfileError } from '../profile/profile';
@@ -20,6 +20,8 @@ export interface EstimateOutcome {
   results: Record<string, ResultValue>;
   warnings: string[];
   sources: string[];
+  /** curves for charts, when the method provides them */
+  series: Series[];
   /** why the estimate could not be computed (status 'error') */
   error?: string;
 }
@@ -53,7 +55,7 @@ export function runEstimate(site: Site, e: Estimate, index: number): EstimateOut
   const method = findCalcMethod(e.method);
   const base = {
     id: e.id, method: e.method, title: e.title ?? method?.title ?? e.method,
-    inputs: {}, results: {}, warnings: [] as string[], sources: [] as string[],
+    inputs: {}, results: {}, warnings: [] as string[], sources: [] as string[], series: [] as Series[],
   };
   const ctx = makeContext(site, e.condition, e.feature);
   const feature = ctx.feature && { id: ctx.feature.id, name: ctx.feature.name, kind: ctx.feature.kind };
@@ -69,7 +71,7 @@ export function runEstimate(site: Site, e: Estimate, index: number): EstimateOut
     const out = runCalc(method, raw);
     const inputs = describeInputs(method, resolveArgs(method, raw), ctx.condition?.name);
     const warnings = [...(ctx.profile?.warnings ?? []), ...out.warnings];
-    return { ...base, feature, condition, status: 'ok', inputs, results: out.results, warnings: [...new Set(warnings)], sources: out.sources };
+    return { ...base, feature, condition, status: 'ok', inputs, results: out.results, warnings: [...new Set(warnings)], sources: out.sources, series: out.series ?? [] };
   } catch (err) {
     if (err instanceof InputError || err instanceof ProfileError) return fail(err.message);
     throw err;

@@ -3,7 +3,7 @@ import { GRAVITY } from '../quantities';
 import { interpolateAt } from '../profile/profile';
 import { waterDensity } from '../water/density';
 import { si, siOptional, buoyancyFrequencyAt, meanBuoyancyFrequency, type EstimateContext } from './context';
-import type { Channel, Inflow, Intake, Outfall } from './schema';
+import type { Channel, Feature, Inflow, Intake, Outfall } from './schema';
 
 /**
  * Default arguments of each calc method, taken from the estimate's feature and condition. The
@@ -14,8 +14,8 @@ type Binding = (ctx: EstimateContext) => Record<string, RawArg | undefined>;
 const at = (ctx: EstimateContext) => `features[${ctx.featureIndex}]`;
 const body = (ctx: EstimateContext) => ctx.site.waterBody;
 
-function feature<K extends string>(ctx: EstimateContext, kind: K) {
-  return ctx.feature && ctx.feature.kind === kind ? ctx.feature : undefined;
+function feature<K extends Feature['kind']>(ctx: EstimateContext, kind: K): Extract<Feature, { kind: K }> | undefined {
+  return ctx.feature && ctx.feature.kind === kind ? (ctx.feature as Extract<Feature, { kind: K }>) : undefined;
 }
 
 /** Two-layer description of the condition's profile (least-squares fit), for two-layer methods. */

@@ -39,6 +39,6 @@ export function calcCommand(args: string[], json: boolean): CommandResult {
     raw[name] = spec?.kind === 'profile' ? loadProfileFile(name, value) : value;
   }
   const out = runCalc(method, raw);
-  if (json) return { stdout: JSON.stringify({ method: method.id, ...out }) };
+  if (json) return { stdout: JSON.stringify({ method: method.id, results: out.results, warnings: out.warnings, sources: out.sources }) };
   return { stdout: formatCalcText(method, out) };
 }

@@ -1,0 +1,63 @@
+import { z } from 'zod';
+
+/**
+ * The one contract between the renderer and the Node side (Electron IPC or the browser shell's HTTP API).
+ * Each channel maps to a request and a response validator. Computation never crosses it: the renderer
+ * imports shared-core directly; the Node side handles files, dialogs, clipboard and exports only.
+ */
+const empty = z.object({}).strict();
+const siteText = z.string().min(2).max(50_000_000);
+const filePath = z.string().min(1).max(4096);
+const exportFormat = z.enum(['pdf', 'png', 'svg', 'csv', 'xlsx']);
+
+export const CHANNELS = {
+  /** native open dialog; null when cancelled */
+  'site.open': { request: empty, response: z.object({ path: filePath, text: siteText }).nullable() },
+  /** read a known path (recent files, reopen) */
+  'site.read': { request: z.object({ path: filePath }).strict(), response: z.object({ path: filePath, text: siteText }) },
+  /** atomic save to a known path (temporary file, flush, rename) */
+  'site.save': { request: z.object({ path: filePath, text: siteText }).strict(), response: z.object({ path: filePath }) },
+  /** native save dialog then atomic save; null when cancelled */
+  'site.saveAs': { request: z.object({ text: siteText, suggestedName: z.string().max(255) }).strict(), response: z.object({ path: filePath }).nullable() },
+  'site.recent': { request: empty, response: z.object({ paths: z.array(filePath) }) },
+  /** autosave of the unsaved document to the recovery file */
+  'recovery.write': { request: z.object({ text: siteText, path: filePath.nullable() }).strict(), response: empty },
+  /** the recovery file left by a session that did not end cleanly, or null */
+  'recovery.check': { request: empty, response: z.object({ text: siteText, path: filePath.nullable(), savedAt: z.string() }).nullable() },
+  'recovery.clear': { request: empty, response: empty },
+  /** writes the report of a site (text of the site document) into a folder; returns the files written */
+  'report.export': {
+    request: z.object({ text: siteText, formats: z.array(exportFormat).min(1), units: z.enum(['si', 'us']), outDir: filePath.nullable() }).strict(),
+    response: z.object({ outDir: filePath, files: z.array(z.string()) }).nullable(),
+  },
+  /** copies a PNG (base64) to the system clipboard */
+  'clipboard.writeImage': { request: z.object({ pngBase64: z.string().min(1).max(100_000_000) }).strict(), response: empty },
+  'app.info': { request: empty, response: z.object({ version: z.string(), shell: z.enum(['electron', 'browser']) }) },
+} as const;
+
+export type Channel = keyof typeof CHANNELS;
+export type RequestOf<C extends Channel> = z.infer<(typeof CHANNELS)[C]['request']>;
+export type ResponseOf<C extends Channel> = z.infer<(typeof CHANNELS)[C]['response']>;
+
+export interface ContractError {
+  /** 'invalid-request' | 'forbidden' | 'not-found' | 'io' | 'site-file' | 'internal' */
+  code: string;
+  message: string;
+}
+
+export type Reply<T> = { ok: true; value: T } | { ok: false; error: ContractError };
+
+/** The API the renderer sees: one function per channel, each answering a Reply. */
+export type GprimeApi = { [C in Channel]: (request: RequestOf<C>) => Promise<Reply<ResponseOf<C>>> };
+
+export const CHANNEL_NAMES = Object.keys(CHANNELS) as Channel[];
+
+/** Validates a request; returns the parsed value or a ContractError naming the first bad field. */
+export function parseRequest<C extends Channel>(channel: C, payload: unknown): Reply<RequestOf<C>> {
+  const spec = CHANNELS[channel];
+  if (!spec) return { ok: false, error: { code: 'invalid-request', message: `unknown channel "${String(channel)}"` } };
+  const r = spec.request.safeParse(payload ?? {});
+  if (r.success) return { ok: true, value: r.data as RequestOf<C> };
+  const i = r.error.issues[0];
+  return { ok: false, error: { code: 'invalid-request', message: `${channel}: ${i.path.join('.') || '(request)'}: ${i.message}` } };
+}
