@@ -26,6 +26,22 @@ export interface EstimateOutcome {
   error?: string;
 }
 
+/** One row of the mixing-zone compliance table: a constituent of an outfall under one condition. */
+export interface ComplianceRow {
+  feature: string;
+  condition: string;
+  constituent: string;
+  unit: string;
+  /** dilution needed to meet the criterion at the mixing-zone boundary, S = (Ce − Ca)/(Cc − Ca) */
+  requiredDilution: number | null;
+  /** dilution the near-field model gives at the mixing-zone boundary */
+  achievedDilution: number | null;
+  /** achieved / required − 1 (positive: meets with that margin) */
+  margin: number | null;
+  verdict: 'meets' | 'does not meet' | 'cannot tell';
+  note: string;
+}
+
 export interface Assessment {
   format: 'gprime-assessment';
   project: Site['project'];
@@ -36,6 +52,8 @@ export interface Assessment {
   units: Site['units'];
   caution: string;
   estimates: EstimateOutcome[];
+  /** mixing-zone compliance per outfall, condition and constituent */
+  compliance: ComplianceRow[];
 }
 
 function describeInputs(method: CalcMethod, args: Record<string, unknown>, conditionName?: string): Record<string, ResultValue> {
@@ -89,5 +107,6 @@ export function assessSite(site: Site, meta: { gprimeVersion: string; siteHash: 
     units: site.units,
     caution: SCREENING_CAUTION,
     estimates: site.estimates.map((e, i) => runEstimate(site, e, i)),
+    compliance: [],
   };
 }
