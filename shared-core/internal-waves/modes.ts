@@ -96,7 +96,11 @@ export function verticalModesFromN2(column: N2Column, bottom: number, options: M
   const pairs = lowestEigenpairs(pencil, wanted + extra);
   const toShape = (v: number[]) => {
     const w = depth.map((_, j) => (j < first || j === cells ? 0 : v[j - first]));
-    return { w: scaleToUnit(w), u: scaleToUnit(depth.map((_, j) => (w[Math.min(j + 1, cells)] - w[Math.max(j - 1, 0)]) / ((Math.min(j + 1, cells) - Math.max(j - 1, 0)) * dz)))) };
+    const u = depth.map((_, j) => {
+      const up = Math.max(j - 1, 0), down = Math.min(j + 1, cells);
+      return (w[down] - w[up]) / ((down - up) * dz);
+    });
+    return { w: scaleToUnit(w), u: scaleToUnit(u) };
   };
   const modes = pairs.slice(extra).map((p, i) => {
     const s = toShape(p.vector);

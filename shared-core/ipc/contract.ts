@@ -11,8 +11,11 @@ const filePath = z.string().min(1).max(4096);
 const exportFormat = z.enum(['pdf', 'png', 'svg', 'csv', 'xlsx']);
 
 export const CHANNELS = {
-  /** native open dialog; null when cancelled */
-  'site.open': { request: empty, response: z.object({ path: filePath, text: siteText }).nullable() },
+  /**
+   * native open dialog; null when cancelled. The browser shell has no dialog: there `name` picks a file of
+   * its workspace folder (as listed by 'site.recent'), and a request without `name` answers null.
+   */
+  'site.open': { request: z.object({ name: z.string().min(1).max(255).optional() }).strict(), response: z.object({ path: filePath, text: siteText }).nullable() },
   /** read a known path (recent files, reopen) */
   'site.read': { request: z.object({ path: filePath }).strict(), response: z.object({ path: filePath, text: siteText }) },
   /** atomic save to a known path (temporary file, flush, rename) */
@@ -27,7 +30,11 @@ export const CHANNELS = {
   'recovery.clear': { request: empty, response: empty },
   /** writes the report of a site (text of the site document) into a folder; returns the files written */
   'report.export': {
-    request: z.object({ text: siteText, formats: z.array(exportFormat).min(1), units: z.enum(['si', 'us']), outDir: filePath.nullable() }).strict(),
+    request: z.object({
+      text: siteText, formats: z.array(exportFormat).min(1), units: z.enum(['si', 'us']), outDir: filePath.nullable(),
+      /** the site's file, when it has one (named in the report) */
+      path: filePath.nullable().optional(),
+    }).strict(),
     response: z.object({ outDir: filePath, files: z.array(z.string()) }).nullable(),
   },
   /** copies a PNG (base64) to the system clipboard */

@@ -1,4 +1,131 @@
-import type { CalcMethod } from '../calc/types';
+import { num, text } from '../calc/resolve';
+import { arg, type CalcArgs, type CalcMethod, type CalcOutput } from '../calc/types';
+import { InputError } from '../core/errors';
+import { positive, nonNegative } from '../core/range';
+import { JET_LENGTH_SCALES, jetLengthScales } from './length-scales';
+import { BUOYANT_JET } from './closure';
+import { buoyantJetTrajectory, type BuoyantJetInput } from './buoyant-jet';
+import { LINE_PLUME_RSB1989, linePlumeRobertsSnyderBaumgartner1989 } from './line-plume';
+import { REQUIRED_DILUTION, requiredDilution } from '../mixing-zone/required-dilution';
+import type { ResultValue } from '../calc/types';
 
-/** The jets methods of `gprime calc`. */
-export const jetCalcMethods: CalcMethod[] = [];
+const lengthScaleResults = [
+  ['l_q', 'lQ', 'Q/√M: distance over which the port geometry matters'],
+  ['l_m', 'lM', 'M^¾/|B|^½: jet-to-plume distance'],
+  ['l_crossflow_momentum', 'lCrossflowMomentum', '√M/u_a: distance before the current bends the jet'],
+  ['l_crossflow_buoyancy', 'lCrossflowBuoyancy', '|B|/u_a³: distance before the current dominates the buoyant rise'],
+  ['l_strat_momentum', 'lStratMomentum', '(M/N²)^¼: stratification scale of a jet'],
+  ['l_strat_buoyancy', 'lStratBuoyancy', '(|B|/N³)^¼: stratification scale of a plume'],
+] as const;
+
+/** Runs the buoyant-jet model for the CLI and reports the headline results. */
+function runBuoyantJet(a: CalcArgs): CalcOutput {
+  const profile = arg.profile(a);
+  const rhoA = arg.optNum(a, 'ambient_density');
+  if ((profile === undefined) === (rhoA === undefined)) {
+    throw new InputError(profile ? 'ambient_density' : 'file', '(missing)', '', 'exactly one of ambient_density and file', 'give either a uniform ambient_density or a profile file, not both and not neither');
+  }
+  const input: BuoyantJetInput = {
+    diameter: arg.num(a, 'diameter'), velocity: arg.num(a, 'velocity'), angle: arg.num(a, 'angle'),
+    portDepth: arg.num(a, 'port_depth'), effluentDensity: arg.num(a, 'effluent_density'),
+    ambient: profile ? { kind: 'profile', profile } : { kind: 'uniform', density: rhoA as number }, current: arg.num(a, 'current'),
+  };
+  const t = buoyantJetTrajectory(input);
+  const results: Record<string, ResultValue> = { max_rise: num(t.maxRise, 'm') };
+  const ev = (k: string) => t.events.find((e) => e.kind === k);
+  const ret = ev('return to port level');
+  if (ret) { results.return_distance = num(ret.horizontalDistance, 'm'); results.return_dilution = num(ret.dilutionCentreline, '1'); }
+  const neutral = ev('neutral buoyancy');
+  if (t.outcome === 'trapped' && neutral) results.trap_height = num(neutral.z, 'm');
+  const surf = ev('surface contact');
+  if (t.outcome === 'surfaces' && surf) results.surface_dilution = num(surf.dilutionCentreline, '1');
+  results.outcome = text(t.outcomeText);
+  return { results, warnings: t.warnings, sources: [BUOYANT_JET.source] };
+}
+
+/** The jets and mixing-zone methods of `gprime calc`. */
+export const jetCalcMethods: CalcMethod[] = [
+  {
+    id: 'jet-length-scales',
+    title: JET_LENGTH_SCALES.title,
+    topic: 'jets',
+    params: [
+      { kind: 'number', name: 'diameter', unit: 'm', description: 'port diameter', range: { ...positive, max: 20 } },
+      { kind: 'number', name: 'velocity', unit: 'm/s', description: 'exit velocity', range: { ...positive, max: 100 } },
+      { kind: 'number', name: 'g_prime', unit: 'm/s2', description: 'reduced gravity g(ρ_a − ρ_e)/ρ_a, positive for a rising effluent', range: { min: -5, max: 5 } },
+      { kind: 'number', name: 'current', unit: 'm/s', description: 'ambient current speed', default: 0, range: { ...nonNegative, max: 10 } },
+      { kind: 'number', name: 'buoyancy_frequency', unit: '1/s', description: 'ambient buoyancy frequency N', default: 0, range: { ...nonNegative, max: 2 } },
+    ],
+    results: [
+      ...lengthScaleResults.map(([name, , description]) => ({ name, unit: 'm', description: `${description} (omitted when the process is absent)` })),
+      { name: 'froude', unit: '1', description: 'port densimetric Froude number (omitted for a neutrally buoyant jet)' },
+      { name: 'regime', unit: '', description: 'which process dominates where, in words' },
+    ],
+    run(a) {
+      const r = jetLengthScales({ diameter: arg.num(a, 'diameter'), velocity: arg.num(a, 'velocity'), gPrime: arg.num(a, 'g_prime'), current: arg.num(a, 'current'), buoyancyFrequency: arg.num(a, 'buoyancy_frequency') });
+      const results: Record<string, ResultValue> = {};
+      for (const [name, key] of lengthScaleResults) if (Number.isFinite(r[key])) results[name] = num(r[key], 'm');
+      if (Number.isFinite(r.froude)) results.froude = num(r.froude, '1');
+      results.regime = text(r.regime.join(' '));
+      return { results, warnings: r.warnings, sources: [JET_LENGTH_SCALES.source] };
+    },
+  },
+  {
+    id: 'buoyant-jet',
+    title: BUOYANT_JET.title,
+    topic: 'jets',
+    params: [
+      { kind: 'number', name: 'diameter', unit: 'm', description: 'port diameter', range: { ...positive, max: 20 } },
+      { kind: 'number', name: 'velocity', unit: 'm/s', description: 'exit velocity', range: { ...positive, max: 100 } },
+      { kind: 'number', name: 'angle', unit: 'deg', description: 'vertical angle above horizontal', range: { min: -90, max: 90 } },
+      { kind: 'number', name: 'port_depth', unit: 'm', description: 'port depth below the surface', range: { ...positive, max: 11000 } },
+      { kind: 'number', name: 'effluent_density', unit: 'kg/m3', description: 'effluent density', range: { min: 900, max: 1300 } },
+      { kind: 'number', name: 'ambient_density', unit: 'kg/m3', description: 'uniform ambient density (or give file)', optional: true, range: { min: 900, max: 1300 } },
+      { kind: 'profile', name: 'file', description: 'CSV profile of the ambient (or give ambient_density); its deepest sample is taken as the bed', optional: true },
+      { kind: 'number', name: 'current', unit: 'm/s', description: 'current speed, taken along the jet direction (co-flowing: the lower, cautious near-field dilution)', default: 0, range: { ...nonNegative, max: 10 } },
+    ],
+    results: [
+      { name: 'max_rise', unit: 'm', description: 'highest centreline point above the port' },
+      { name: 'return_distance', unit: 'm', description: 'horizontal distance where the centreline falls back to port level (dense jets)' },
+      { name: 'return_dilution', unit: '1', description: 'centreline dilution at the return point' },
+      { name: 'trap_height', unit: 'm', description: 'height above the port of neutral buoyancy, when trapped' },
+      { name: 'surface_dilution', unit: '1', description: 'centreline dilution where the plume reaches the surface' },
+      { name: 'outcome', unit: '', description: 'how the near field ends, in words' },
+    ],
+    run: (a) => runBuoyantJet(a),
+  },
+  {
+    id: 'line-plume',
+    title: LINE_PLUME_RSB1989.title,
+    topic: 'jets',
+    params: [
+      { kind: 'number', name: 'discharge_per_length', unit: 'm2/s', description: 'diffuser discharge per unit length q', range: { ...positive, max: 100 } },
+      { kind: 'number', name: 'g_prime', unit: 'm/s2', description: 'reduced gravity of the effluent (rising)', range: { ...positive, max: 5 } },
+      { kind: 'number', name: 'buoyancy_frequency', unit: '1/s', description: 'buoyancy frequency N of the linear stratification', range: { ...positive, max: 2 } },
+      { kind: 'number', name: 'current', unit: 'm/s', description: 'current perpendicular to the diffuser', default: 0, range: { ...nonNegative, max: 10 } },
+    ],
+    results: [
+      { name: 'rise_height', unit: 'm', description: 'top of the wastefield above the diffuser' },
+      { name: 'dilution', unit: '1', description: 'minimum dilution at the end of the near field' },
+    ],
+    run(a) {
+      const r = linePlumeRobertsSnyderBaumgartner1989(arg.num(a, 'discharge_per_length'), arg.num(a, 'g_prime'), arg.num(a, 'buoyancy_frequency'), arg.num(a, 'current'));
+      return { results: { rise_height: num(r.riseHeight, 'm'), dilution: num(r.dilution, '1') }, warnings: r.warnings, sources: [LINE_PLUME_RSB1989.source] };
+    },
+  },
+  {
+    id: 'required-dilution',
+    title: REQUIRED_DILUTION.title,
+    topic: 'jets',
+    params: [
+      { kind: 'number', name: 'effluent', unit: '1', description: 'effluent concentration (any unit, the same for all three)' },
+      { kind: 'number', name: 'ambient', unit: '1', description: 'ambient (background) concentration' },
+      { kind: 'number', name: 'criterion', unit: '1', description: 'water-quality criterion at the mixing-zone boundary' },
+    ],
+    results: [{ name: 'dilution', unit: '1', description: '(C_e − C_a)/(C_c − C_a), at least 1' }],
+    run(a) {
+      const r = requiredDilution(arg.num(a, 'effluent'), arg.num(a, 'ambient'), arg.num(a, 'criterion'));
+      return { results: { dilution: num(r.value, '1') }, warnings: r.warnings, sources: [REQUIRED_DILUTION.source] };
+    },
+  },
+];

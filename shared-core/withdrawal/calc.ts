@@ -1,4 +1,94 @@
-import type { CalcMethod } from '../calc/types';
+import { num, text } from '../calc/resolve';
+import { arg, type CalcMethod } from '../calc/types';
+import { InputError } from '../core/errors';
+import { positive } from '../core/range';
+import { criticalDischargeCraya1949, CRAYA_1949, SINK_POSITIONS, type SinkKind, type SinkPosition } from './two-layer';
+import { withdrawalLayer, WITHDRAWAL_LINE_SINK, WITHDRAWAL_POINT_SINK } from './layer';
+import { WITHDRAWAL_MEASURED_PROFILE } from './measured';
+import { WITHDRAWAL_VELOCITY } from './outflow';
+import { optimiseRelease, RELEASE_BLEND, type Port } from './blend';
+
+const SINKS = ['line', 'point'] as const;
+
+/** Parses `ports=5:40,30:40` (depth below the surface in m : capacity in m3/s, one pair per port). */
+export function parsePorts(textValue: string): Port[] {
+  const pairs = textValue.split(/[,;]/).map((s) => s.trim()).filter((s) => s !== '');
+  if (pairs.length === 0) throw new InputError('ports', textValue, '', 'depth:capacity pairs, e.g. 5:40,30:40', 'give at least one port as depth:capacity');
+  return pairs.map((pair) => {
+    const m = /^([-+]?\d*\.?\d+(?:[eE][-+]?\d+)?)\s*:\s*([-+]?\d*\.?\d+(?:[eE][-+]?\d+)?)$/.exec(pair);
+    if (!m) throw new InputError('ports', pair, '', 'depth:capacity pairs, e.g. 5:40,30:40', `"${pair}" is not a depth:capacity pair (m : m3/s)`);
+    return { depth: Number(m[1]), capacity: Number(m[2]) };
+  });
+}
 
 /** The withdrawal methods of `gprime calc`. */
-export const withdrawalCalcMethods: CalcMethod[] = [];
+export const withdrawalCalcMethods: CalcMethod[] = [
+  {
+    id: 'withdrawal-two-layer',
+    title: 'Critical discharge of an intake below or above a sharp interface (two layers)',
+    topic: 'withdrawal',
+    params: [
+      { kind: 'number', name: 'g_prime', unit: 'm/s2', description: 'reduced gravity across the interface', range: { ...positive, max: 20 } },
+      { kind: 'number', name: 'interface_distance', unit: 'm', description: 'vertical distance from the intake to the interface', range: { ...positive, max: 1e4 } },
+      { kind: 'choice', name: 'sink', description: 'line = slot across the width, point = orifice', choices: SINKS },
+      { kind: 'number', name: 'width', unit: 'm', description: 'slot width across the channel (line sink only)', optional: true, range: { ...positive, max: 1e5 } },
+      { kind: 'choice', name: 'position', description: 'wall or bed (half-space approach flow), wall-foot (on the bed at the foot of a wall: quarter-space)', choices: SINK_POSITIONS, default: 'wall' },
+    ],
+    results: [{ name: 'critical_discharge', unit: 'm3/s', description: 'discharge at which the far layer starts to be drawn' }],
+    run(a) {
+      const r = criticalDischargeCraya1949(arg.num(a, 'g_prime'), arg.num(a, 'interface_distance'), arg.text<SinkKind>(a, 'sink'), arg.text<SinkPosition>(a, 'position'), arg.optNum(a, 'width'));
+      return { results: { critical_discharge: num(r.value, 'm3/s') }, warnings: r.warnings, sources: [CRAYA_1949.source] };
+    },
+  },
+  {
+    id: 'withdrawal-layer',
+    title: 'Withdrawal-layer thickness in linear stratification',
+    topic: 'withdrawal',
+    params: [
+      { kind: 'number', name: 'buoyancy_frequency', unit: '1/s', description: 'buoyancy frequency N around the intake', range: { ...positive, max: 1 } },
+      { kind: 'number', name: 'discharge', unit: 'm3/s', description: 'intake discharge', range: { ...positive, max: 1e5 } },
+      { kind: 'number', name: 'width', unit: 'm', description: 'slot width across the channel (line sink only)', optional: true, range: { ...positive, max: 1e5 } },
+      { kind: 'choice', name: 'sink', description: 'line = slot across the width, point = orifice', choices: SINKS },
+      { kind: 'number', name: 'reservoir_length', unit: 'm', description: 'reservoir length at the intake level, for the regime (default: inertial assumed)', optional: true, range: { ...positive, max: 1e6 } },
+    ],
+    results: [
+      { name: 'thickness', unit: 'm', description: 'total thickness of the withdrawal layer (twice the half-thickness; before any cut by surface or bed)' },
+      { name: 'regime', unit: '', description: 'inertial or viscous' },
+    ],
+    run(a) {
+      const sink = arg.text<SinkKind>(a, 'sink');
+      const r = withdrawalLayer({ n: arg.num(a, 'buoyancy_frequency'), discharge: arg.num(a, 'discharge'), sink, width: arg.optNum(a, 'width'), length: arg.optNum(a, 'reservoir_length') });
+      const regime = r.regimeAssumed ? 'inertial (assumed: no reservoir length)' : r.regime;
+      return { results: { thickness: num(r.totalThickness, 'm'), regime: text(regime) }, warnings: r.warnings, sources: [(sink === 'line' ? WITHDRAWAL_LINE_SINK : WITHDRAWAL_POINT_SINK).source] };
+    },
+  },
+  {
+    id: 'release-blend',
+    title: 'Port split meeting a release-temperature target on a measured profile',
+    topic: 'withdrawal',
+    params: [
+      { kind: 'profile', name: 'file', description: 'path to a CSV profile at the intake' },
+      { kind: 'text', name: 'ports', description: 'ports as depth:capacity pairs (m below the surface : m3/s), e.g. 5:40,30:40' },
+      { kind: 'number', name: 'release', unit: 'm3/s', description: 'total release', range: { ...positive, max: 1e5 } },
+      { kind: 'number', name: 'target_temperature', unit: 'degC', description: 'wanted release temperature', range: { min: -3, max: 60 } },
+    ],
+    results: [
+      { name: 'temperature', unit: 'degC', description: 'temperature of the blended release (the closest achievable when infeasible)' },
+      { name: 'port_flows', unit: '', description: 'flow of each port' },
+      { name: 'feasible', unit: '', description: 'yes when the target is met' },
+    ],
+    run(a) {
+      const p = arg.profile(a);
+      if (!p) throw new InputError('file', '(missing)', '', 'a CSV profile', 'a profile file is required');
+      const ports = parsePorts(arg.text(a, 'ports'));
+      const r = optimiseRelease(p, ports, arg.num(a, 'release'), { temperature: arg.num(a, 'target_temperature') }, { sink: 'point' });
+      const flows = ports.map((port, i) => `${port.depth} m: ${r.flows[i].toFixed(2)} m3/s`).join('; ');
+      const warnings = ['Ports are treated as orifices (point sinks) without interference between their withdrawal layers.', ...r.warnings];
+      return {
+        results: { temperature: num(r.temperature, 'degC'), port_flows: text(flows), feasible: text(r.feasible ? 'yes' : 'no') },
+        warnings,
+        sources: [RELEASE_BLEND.source, WITHDRAWAL_MEASURED_PROFILE.source, WITHDRAWAL_POINT_SINK.source, WITHDRAWAL_VELOCITY.source],
+      };
+    },
+  },
+];

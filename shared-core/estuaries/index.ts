@@ -1,0 +1,4 @@
+export * from './salt-wedge';
+export * from './richardson';
+export * from './exchange';
+export * from './lock';

@@ -1,0 +1,2 @@
+export * from './two-layer';
+export * from './obstacle';

@@ -1,0 +1,3 @@
+export * from './two-layer';
+export * from './modes';
+export * from './basin';

@@ -1,0 +1,111 @@
+import { GRAVITY } from '../quantities';
+import type { MethodInfo } from '../core/method';
+
+/**
+ * The entrainment closure of the round buoyant-jet model, in TOP-HAT variables (uniform velocity u,
+ * density and concentration over a circle of radius b). Gaussian coefficients from the literature are
+ * converted with α_top-hat = √2 α_Gauss (b_top-hat = √2 b_Gauss, same volume and momentum fluxes).
+ */
+export const ENTRAINMENT = {
+  /** Gaussian jet coefficient 0.0535 ± 0.0025 (Fischer et al. 1979, Table 9.1; from memory) → top-hat */
+  alphaJet: Math.SQRT2 * 0.0535,
+  /** Gaussian plume coefficient 0.0833 ± 0.0042 (Fischer et al. 1979, Table 9.1; from memory) → top-hat */
+  alphaPlume: Math.SQRT2 * 0.0833,
+  /** top-hat crossflow ("forced") entrainment coefficient (Hoult, Fay & Forney 1969; from memory) */
+  betaCrossflow: 0.6,
+  /** concentration-to-velocity width ratio λ of Gaussian profiles (Fischer et al. 1979 §9.1; from memory) */
+  lambda: 1.19,
+} as const;
+
+/** Top-hat local Richardson number of a pure plume, Ri_p = 8α_p/5 (MTT 1956 similarity solution). */
+export const RICHARDSON_PLUME = (8 * ENTRAINMENT.alphaPlume) / 5;
+
+/** Centreline dilution = flux-average dilution × λ²/(1+λ²) for Gaussian profiles of width ratio λ. */
+export const CENTRELINE_TO_AVERAGE = (ENTRAINMENT.lambda ** 2) / (1 + ENTRAINMENT.lambda ** 2);
+
+export const BUOYANT_JET: MethodInfo = {
+  id: 'buoyant-jet',
+  title: 'Round buoyant jet in a stratified flowing ambient (top-hat integral model)',
+  source:
+    'Integral model: Morton, B.R., Taylor, G.I., Turner, J.S. (1956). Turbulent gravitational convection from maintained and ' +
+    'instantaneous sources. Proc. R. Soc. Lond. A 234, 1–23 (entrainment hypothesis); variable entrainment between jet and plume ' +
+    'values after Priestley, C.H.B., Ball, F.K. (1955). Q. J. R. Meteorol. Soc. 81, 144–157, with coefficients α_jet = 0.0535, ' +
+    'α_plume = 0.0833 (Gaussian) of Fischer, H.B. et al. (1979). Mixing in Inland and Coastal Waters, Table 9.1, converted to ' +
+    'top-hat by √2; crossflow entrainment β = 0.6 of Hoult, D.P., Fay, J.A., Forney, L.J. (1969). A theory of plume rise compared ' +
+    'with field observations. J. Air Pollut. Control Assoc. 19, 585–590; centreline/average dilution from Gaussian profiles with ' +
+    'λ = 1.19 (Fischer et al. 1979 §9.1).',
+  equation:
+    'dQ/ds = E = 2πb[α(Ri)|u − u_a·e_s| + β|u_a × e_s|], d(Q u)/ds = E u_a + πb²g′ ẑ, d(Q Δρ_ref)/ds = E(ρ_a(z) − ρ_ref), ' +
+    'α = α_j + (α_p − α_j)·clamp(Ri/Ri_p, 0, 1), Ri = g′ b e_z/(u − u_a·e_s)², Ri_p = 8α_p/5; S_avg = Q/Q₀, S_c = S_avg·λ²/(1+λ²)',
+  validity: {
+    froude: { min: 1, unit: '1', note: 'port densimetric Froude number; below 1 the port may not run full' },
+    angle: { min: -90, max: 90, unit: 'deg' },
+  },
+};
+
+/** State vector of the model, in SI. */
+export interface JetState {
+  x: number; y: number; z: number;
+  /** volume flux [m3/s] */
+  Q: number;
+  /** momentum flux vector Q·u [m4/s2] */
+  Mx: number; My: number; Mz: number;
+  /** Q(ρ_jet − ρ_ref) [kg/s] */
+  R: number;
+  /** Q(T_jet − T_ref) [m3 K/s] */
+  Th: number;
+}
+
+/** The ambient seen at one height, and the constants of a run. */
+export interface ClosureContext {
+  portDepth: number;
+  rhoRef: number;
+  tRef: number;
+  density(d: number): number;
+  temperature?(d: number): number;
+  current(d: number): number;
+}
+
+/** Local jet properties derived from the state. */
+export interface JetLocal {
+  u: number; ex: number; ey: number; ez: number; b: number;
+  /** ρ_jet − ρ_ambient [kg/m3] */
+  densityExcess: number;
+  /** −g Δρ/ρ_ref [m/s2], positive upward */
+  gPrime: number;
+  ambientCurrent: number;
+  entrainment: number;
+}
+
+/** Derived local properties (velocity, direction, radius, buoyancy, entrainment) of a state. */
+export function localJet(s: JetState, c: ClosureContext): JetLocal {
+  const m = Math.hypot(s.Mx, s.My, s.Mz);
+  const u = m / s.Q;
+  const ex = s.Mx / m, ey = s.My / m, ez = s.Mz / m;
+  const b = Math.sqrt(s.Q / (Math.PI * u));
+  const d = c.portDepth - s.z;
+  const densityExcess = c.rhoRef + s.R / s.Q - c.density(d);
+  const gPrime = (-GRAVITY * densityExcess) / c.rhoRef;
+  const ua = c.current(d);
+  const shear = u - ua * ex;
+  const cross = ua * Math.sqrt(Math.max(0, 1 - ex * ex));
+  const ri = (gPrime * b * ez) / Math.max(shear * shear, 1e-30);
+  const f = Math.min(1, Math.max(0, ri / RICHARDSON_PLUME));
+  const alpha = ENTRAINMENT.alphaJet + (ENTRAINMENT.alphaPlume - ENTRAINMENT.alphaJet) * f;
+  const entrainment = 2 * Math.PI * b * (alpha * Math.abs(shear) + ENTRAINMENT.betaCrossflow * cross);
+  return { u, ex, ey, ez, b, densityExcess, gPrime, ambientCurrent: ua, entrainment };
+}
+
+/** Right-hand side d(state)/ds of the model [SI]. */
+export function jetDerivative(s: JetState, c: ClosureContext): JetState {
+  const L = localJet(s, c);
+  const d = c.portDepth - s.z;
+  const E = L.entrainment;
+  return {
+    x: L.ex, y: L.ey, z: L.ez,
+    Q: E,
+    Mx: E * L.ambientCurrent, My: 0, Mz: (s.Q * L.gPrime) / L.u,
+    R: E * (c.density(d) - c.rhoRef),
+    Th: c.temperature ? E * (c.temperature(d) - c.tRef) : 0,
+  };
+}

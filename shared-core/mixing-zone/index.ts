@@ -1,0 +1,3 @@
+export * from './required-dilution';
+export * from './boundary';
+export * from './compliance';

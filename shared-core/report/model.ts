@@ -1,0 +1,183 @@
+import type { Assessment, ComplianceRow, EstimateOutcome } from '../site/assess';
+import type { ResultValue } from '../calc/types';
+import { findCalcMethod } from '../calc/registry';
+import { toDisplay, type UnitSystem } from '../units/units';
+import { chartSpecs, type ChartSpec } from './charts';
+import { formatValue, prettyUnit, readableName } from './format';
+import { methodsForSource } from './methods';
+
+/**
+ * The one report model: everything a calc sheet, a spreadsheet or a chart export shows, built from an
+ * Assessment in a unit system. Pure: the same assessment and units give the same model.
+ */
+
+export interface QuantityRow {
+  name: string;
+  description: string;
+  /** number in the display unit, or text */
+  value: number | string;
+  /** display unit name as used by units.ts ("ft", "m3/s"); '' for text */
+  unit: string;
+  /** the value as typeset: rounded number or the text */
+  shown: string;
+  /** the unit as typeset ("m³/s", "°C"; '' for dimensionless) */
+  shownUnit: string;
+}
+
+export interface MethodText {
+  /** title of the method descriptor, when the source belongs to one */
+  title?: string;
+  equation?: string;
+  source: string;
+}
+
+export interface EstimateSection {
+  /** section number in the report ("3") */
+  number: string;
+  id: string;
+  title: string;
+  method: string;
+  methodTitle: string;
+  feature?: string;
+  condition?: string;
+  status: 'ok' | 'error';
+  error?: string;
+  inputs: QuantityRow[];
+  results: QuantityRow[];
+  methods: MethodText[];
+  warnings: string[];
+  charts: ChartSpec[];
+}
+
+export interface ContentsEntry {
+  number: string;
+  title: string;
+  /** anchor: 'summary', an estimate id, 'compliance', 'references', 'cautions' */
+  anchor: string;
+}
+
+export interface ComplianceTable {
+  header: string[];
+  rows: string[][];
+}
+
+export interface ReportModel {
+  title: string;
+  subtitle: string;
+  units: UnitSystem;
+  titleBlock: { label: string; value: string }[];
+  contents: ContentsEntry[];
+  /** one line per estimate: id, method, key result, number of warnings */
+  summary: { id: string; title: string; where: string; keyResult: string; warnings: number; status: 'ok' | 'error' }[];
+  estimates: EstimateSection[];
+  compliance: ComplianceTable | null;
+  /** every cited source, once, in order of first citation */
+  references: string[];
+  cautions: string[];
+  gprimeVersion: string;
+  siteHash: string;
+}
+
+function quantity(name: string, description: string, v: ResultValue, units: UnitSystem): QuantityRow {
+  if (typeof v.value !== 'number') return { name, description, value: v.value, unit: '', shown: v.value, shownUnit: '' };
+  const d = toDisplay(v.value, v.unit, units);
+  return { name, description, value: d.value, unit: d.unit, shown: formatValue(d.value), shownUnit: prettyUnit(d.unit) };
+}
+
+function quantities(values: Record<string, ResultValue>, describe: (name: string) => string, units: UnitSystem): QuantityRow[] {
+  return Object.entries(values).map(([name, v]) => quantity(name, describe(name), v, units));
+}
+
+function methodTexts(sources: readonly string[]): MethodText[] {
+  return sources.flatMap((source): MethodText[] => {
+    const infos = methodsForSource(source);
+    if (infos.length === 0) return [{ source }];
+    return infos.map((m) => ({ title: m.title, equation: m.equation, source }));
+  });
+}
+
+function section(e: EstimateOutcome, number: string, units: UnitSystem): EstimateSection {
+  const method = findCalcMethod(e.method);
+  const paramText = (n: string) => method?.params.find((p) => p.name === n)?.description ?? readableName(n);
+  const resultText = (n: string) => method?.results.find((r) => r.name === n)?.description ?? readableName(n);
+  return {
+    number,
+    id: e.id,
+    title: e.title,
+    method: e.method,
+    methodTitle: method?.title ?? e.method,
+    feature: e.feature?.name,
+    condition: e.condition?.name,
+    status: e.status,
+    error: e.error,
+    inputs: quantities(e.inputs, paramText, units),
+    results: quantities(e.results, resultText, units),
+    methods: methodTexts(e.sources),
+    warnings: [...e.warnings],
+    charts: chartSpecs(e.series, units, e.id),
+  };
+}
+
+function keyResult(s: EstimateSection): string {
+  if (s.status === 'error') return `not computed: ${s.error ?? 'error'}`;
+  const r = s.results[0];
+  if (!r) return '';
+  return `${r.name} = ${r.shown}${r.shownUnit ? ' ' + r.shownUnit : ''}`;
+}
+
+function complianceTable(rows: readonly ComplianceRow[]): ComplianceTable | null {
+  if (rows.length === 0) return null;
+  const n = (x: number | null) => (x === null ? '—' : formatValue(x));
+  return {
+    header: ['Feature', 'Condition', 'Constituent', 'Unit', 'Required dilution', 'Achieved dilution', 'Margin', 'Verdict', 'Note'],
+    rows: rows.map((r) => [r.feature, r.condition, r.constituent, prettyUnit(r.unit), n(r.requiredDilution), n(r.achievedDilution),
+      r.margin === null ? '—' : `${formatValue(100 * r.margin, 3)} %`, r.verdict, r.note]),
+  };
+}
+
+/** Builds the report model of an assessment in the given unit system. */
+export function buildReportModel(a: Assessment, units: UnitSystem): ReportModel {
+  const estimates = a.estimates.map((e, i) => section(e, String(i + 2), units));
+  const compliance = complianceTable(a.compliance);
+  const references = [...new Set(a.estimates.flatMap((e) => e.sources))];
+  let next = estimates.length + 2;
+  const contents: ContentsEntry[] = [
+    { number: '1', title: 'Summary of estimates', anchor: 'summary' },
+    ...estimates.map((s) => ({ number: s.number, title: `${s.title} (${s.id})`, anchor: s.id })),
+    ...(compliance ? [{ number: String(next++), title: 'Mixing-zone compliance', anchor: 'compliance' }] : []),
+    { number: String(next++), title: 'References', anchor: 'references' },
+    { number: String(next++), title: 'Cautions', anchor: 'cautions' },
+  ];
+  const p = a.project;
+  const unitsLabel = units === 'us' ? 'US customary (ft, cfs, °F, lb/ft³)' : 'SI (m, m³/s, °C, kg/m³)';
+  return {
+    title: p.name,
+    subtitle: `Screening calculation sheet — ${a.waterBody}`,
+    units,
+    titleBlock: [
+      { label: 'Project', value: p.name },
+      { label: 'Site', value: p.site },
+      { label: 'Water body', value: a.waterBody },
+      { label: 'Prepared by', value: p.preparedBy || '—' },
+      { label: 'Checked by', value: p.checkedBy || '—' },
+      { label: 'Date', value: p.date || '—' },
+      { label: 'Revision', value: p.revision || '—' },
+      { label: 'gprime version', value: a.gprimeVersion },
+      { label: 'Site file SHA-256', value: a.siteHash },
+      { label: 'Display units', value: unitsLabel },
+    ],
+    contents,
+    summary: estimates.map((s) => ({ id: s.id, title: s.title, where: [s.feature, s.condition].filter(Boolean).join(' · '), keyResult: keyResult(s), warnings: s.warnings.length, status: s.status })),
+    estimates,
+    compliance,
+    references,
+    cautions: [
+      a.caution,
+      'Every result is computed with the published method named beside it; a warning marks an input outside the range the method was calibrated or validated for, where the result is an extrapolation.',
+      `Values are shown rounded to four significant figures in ${units === 'us' ? 'US customary' : 'SI'} units; the spreadsheet and CSV files hold them at full precision.`,
+      'The same site file (identified by its SHA-256 above) and gprime version give the same numbers and charts.',
+    ],
+    gprimeVersion: a.gprimeVersion,
+    siteHash: a.siteHash,
+  };
+}

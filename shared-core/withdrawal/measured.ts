@@ -1,0 +1,126 @@
+import { InputError } from '../core/errors';
+import { nonNegative, positive, requireInRange } from '../core/range';
+import type { MethodInfo } from '../core/method';
+import { GRAVITY } from '../quantities';
+import { brentRoot } from '../numerics/roots';
+import { interpolateAt, profileBottom, type Profile } from '../profile/profile';
+import { halfThicknessLineSinkImberger1976, halfThicknessPointSinkImbergerPatterson1990, type WithdrawalRegime } from './layer';
+import type { SinkKind } from './two-layer';
+
+export const WITHDRAWAL_MEASURED_PROFILE: MethodInfo = {
+  id: 'withdrawal-limits-bohan-grace1973',
+  title: 'Withdrawal-layer limits on a measured (non-linear) profile',
+  source:
+    'Bohan, J.P., Grace, J.L. Jr. (1973). Selective withdrawal from man-made lakes; hydraulic laboratory investigation. ' +
+    'Tech. Rep. H-73-4, U.S. Army Engineer Waterways Experiment Station, Vicksburg (each limit found separately from the density ' +
+    'difference between the port and that limit); layer formulas of Imberger et al. (1976) and Imberger & Patterson (1990) with the ' +
+    'mean buoyancy frequency between the port and the limit.',
+  equation:
+    'upper limit a_u: a_u = δ(N_u), N_u² = g (ρ_port − ρ(d_port − a_u)) / (ρ_port a_u); lower limit likewise with ρ(d_port + a_l) − ρ_port; ' +
+    'δ(N) the linear-stratification half-thickness; a limit that would pass the surface or the bed stops there',
+  validity: {},
+};
+
+export interface ProfileWithdrawalOptions {
+  sink: SinkKind;
+  /** slot width [m], line sink only */
+  width?: number;
+  /** reservoir length at the intake level [m]; without it the inertial regime is used */
+  length?: number;
+  /** depth of the bed at the intake [m]; default: the deepest profile sample */
+  bottomDepth?: number;
+  /** kinematic viscosity and thermal diffusivity [m2/s] for the viscous regime */
+  nu?: number;
+  kappa?: number;
+}
+
+/** One side (above or below the port) of a withdrawal layer on a measured profile. */
+export interface SideLimit {
+  /** distance from the port to the limit [m] */
+  distance: number;
+  /** |ρ(limit) − ρ(port)| [kg/m3] */
+  densityDifference: number;
+  /** mean buoyancy frequency between port and limit [1/s]; 0 where the water is neutral or unstable */
+  n: number;
+  /** half-thickness the formula gives for that N [m]; Infinity when N = 0; ≥ distance when cut */
+  unboundedHalfThickness: number;
+  /** the surface (upper side) or the bed (lower side) stops the layer */
+  cutByBoundary: boolean;
+  regime: WithdrawalRegime;
+}
+
+export interface ProfileWithdrawal {
+  portDepth: number;
+  discharge: number;
+  /** depth of the upper and lower limits [m] */
+  topDepth: number;
+  bottomDepth: number;
+  upper: SideLimit;
+  lower: SideLimit;
+  method: string;
+  warnings: string[];
+}
+
+/** Validated options shared by the profile methods. */
+export function checkProfileOptions(p: Profile, portDepth: number, discharge: number, o: ProfileWithdrawalOptions): { bed: number } {
+  const bed = requireInRange('bottom_depth', o.bottomDepth ?? profileBottom(p), 'm', { ...positive, max: 11000 });
+  requireInRange('port_depth', portDepth, 'm', { min: 0, max: bed });
+  requireInRange('discharge', discharge, 'm3/s', { ...nonNegative, max: 1e5 });
+  if (o.sink === 'line') {
+    if (o.width === undefined) throw new InputError('width', '(missing)', 'm', '> 0 m', 'a line sink needs the slot width across the channel');
+    requireInRange('width', o.width, 'm', { ...positive, max: 1e5 });
+  }
+  if (o.length !== undefined) requireInRange('reservoir_length', o.length, 'm', { ...positive, max: 1e6 });
+  return { bed };
+}
+
+/** Half-thickness of the linear-stratification formula for the sink [m]; Infinity for N ≤ 0. */
+export function linearHalfThickness(n: number, discharge: number, o: ProfileWithdrawalOptions): { d: number; regime: WithdrawalRegime } {
+  if (!(n > 0)) return { d: Infinity, regime: 'inertial' };
+  const r = o.sink === 'line'
+    ? halfThicknessLineSinkImberger1976(discharge / (o.width as number), n, o.length, o.nu)
+    : halfThicknessPointSinkImbergerPatterson1990(discharge, n, o.length, o.nu, o.kappa);
+  return { d: r.halfThickness, regime: r.regime };
+}
+
+function sideLimit(p: Profile, portDepth: number, discharge: number, o: ProfileWithdrawalOptions, sign: -1 | 1, maxDistance: number): SideLimit {
+  const rhoPort = interpolateAt(p.depth, p.density, portDepth);
+  const drho = (a: number) => sign * (interpolateAt(p.depth, p.density, portDepth + sign * a) - rhoPort);
+  const nAt = (a: number) => { const n2 = (GRAVITY * drho(a)) / (rhoPort * a); return n2 > 0 ? Math.sqrt(n2) : 0; };
+  const side = (a: number, cut: boolean): SideLimit => {
+    const n = nAt(a), lin = linearHalfThickness(n, discharge, o);
+    return { distance: a, densityDifference: Math.abs(drho(a)), n, unboundedHalfThickness: lin.d, cutByBoundary: cut, regime: lin.regime };
+  };
+  if (maxDistance <= 0) return { distance: 0, densityDifference: 0, n: 0, unboundedHalfThickness: 0, cutByBoundary: true, regime: 'inertial' };
+  if (discharge === 0) return side(Math.min(maxDistance, 1e-9), false);
+  const f = (a: number) => { const d = linearHalfThickness(nAt(a), discharge, o).d; return Number.isFinite(d) ? a - d : -maxDistance; };
+  const steps = 400;
+  let prev = maxDistance * 1e-9;
+  for (let k = 1; k <= steps; k++) {
+    const a = (maxDistance * k) / steps;
+    if (f(a) >= 0) {
+      const root = brentRoot(f, prev, a, 1e-9 * maxDistance) ?? a;
+      return side(root, false);
+    }
+    prev = a;
+  }
+  return side(maxDistance, true);
+}
+
+/**
+ * Limits of the withdrawal layer of one port on a measured profile (Bohan & Grace 1973 procedure): each limit is where
+ * the linear-stratification half-thickness, taken with the mean N between port and limit, equals the distance to it.
+ * The surface and the bed stop a limit (flagged `cutByBoundary`); no correction for the squeezed flow is applied.
+ * @param p measured profile; @param portDepth [m] below the surface; @param discharge [m3/s]
+ * @returns limits [m], the N and density difference of each side, and warnings
+ */
+export function withdrawalLimitsBohanGrace1973(p: Profile, portDepth: number, discharge: number, o: ProfileWithdrawalOptions): ProfileWithdrawal {
+  const { bed } = checkProfileOptions(p, portDepth, discharge, o);
+  const upper = sideLimit(p, portDepth, discharge, o, -1, portDepth);
+  const lower = sideLimit(p, portDepth, discharge, o, 1, bed - portDepth);
+  const warnings: string[] = [];
+  if (upper.cutByBoundary && portDepth > 0 && discharge > 0) warnings.push(`The withdrawal layer of the port at ${portDepth} m reaches the surface: water is drawn from the surface down.`);
+  if (lower.cutByBoundary && bed > portDepth && discharge > 0) warnings.push(`The withdrawal layer of the port at ${portDepth} m reaches the bed at ${bed} m.`);
+  if (p.depth[0] > 0 && portDepth - upper.distance < p.depth[0]) warnings.push(`The layer reaches above the shallowest sample (${p.depth[0]} m); the shallowest values are used up to the surface.`);
+  return { portDepth, discharge, topDepth: portDepth - upper.distance, bottomDepth: portDepth + lower.distance, upper, lower, method: WITHDRAWAL_MEASURED_PROFILE.id, warnings: [...p.warnings, ...warnings] };
+}

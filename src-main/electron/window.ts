@@ -1,0 +1,68 @@
+import { BrowserWindow, dialog, session, type BrowserWindowConstructorOptions, type WebContents, type WebPreferences } from 'electron';
+import { windowSettings } from '../../electron.config';
+import { RENDERER_CSP } from '../services/static-files';
+import { APP_ORIGIN } from './ipc-names';
+
+export const APP_URL = `${APP_ORIGIN}/index.html`;
+
+/** The renderer gets no Node, runs sandboxed in its own JavaScript world, and reaches main only through the preload. */
+export function secureWebPreferences(preload: string): WebPreferences {
+  return {
+    preload,
+    contextIsolation: true,
+    sandbox: true,
+    nodeIntegration: false,
+    nodeIntegrationInWorker: false,
+    nodeIntegrationInSubFrames: false,
+    webSecurity: true,
+    allowRunningInsecureContent: false,
+    webviewTag: false,
+    experimentalFeatures: false,
+    navigateOnDragDrop: false,
+    spellcheck: true,
+  };
+}
+
+export function windowOptions(preload: string): BrowserWindowConstructorOptions {
+  return { ...windowSettings, show: false, autoHideMenuBar: false, webPreferences: secureWebPreferences(preload) };
+}
+
+/** Denies navigation away from the app, new windows, webviews and every permission request (camera, …). */
+export function lockDown(contents: WebContents): void {
+  contents.on('will-navigate', (event) => event.preventDefault());
+  contents.on('will-redirect', (event) => event.preventDefault());
+  contents.on('will-attach-webview', (event) => event.preventDefault());
+  contents.setWindowOpenHandler(() => ({ action: 'deny' }));
+  contents.session.setPermissionRequestHandler((_contents, _permission, callback) => callback(false));
+  contents.session.setPermissionCheckHandler(() => false);
+}
+
+/** Adds the CSP to every response the session receives, on top of the header the gprime:// handler sends. */
+export function enforceCsp(): void {
+  session.defaultSession.webRequest.onHeadersReceived((details, callback) => {
+    callback({ responseHeaders: { ...details.responseHeaders, 'Content-Security-Policy': [RENDERER_CSP] } });
+  });
+}
+
+/**
+ * The one workspace window. When the renderer holds unsaved changes it blocks unloading
+ * (beforeunload); main then asks whether to discard them.
+ */
+export function createMainWindow(preload: string): BrowserWindow {
+  const win = new BrowserWindow(windowOptions(preload));
+  lockDown(win.webContents);
+  win.webContents.on('will-prevent-unload', (event) => {
+    const choice = dialog.showMessageBoxSync(win, {
+      type: 'question',
+      buttons: ['Discard changes', 'Keep editing'],
+      defaultId: 1,
+      cancelId: 1,
+      message: 'This site has unsaved changes.',
+      detail: 'Close anyway and discard them?',
+    });
+    if (choice === 0) event.preventDefault();
+  });
+  win.once('ready-to-show', () => win.show());
+  void win.loadURL(APP_URL);
+  return win;
+}

@@ -1,0 +1,45 @@
+import { displayUnit, toDisplay, type UnitSystem } from '../../../shared-core/units/units';
+
+/** Unit names as people read them (m3/s → m³/s, degC → °C). Display only. */
+const PRETTY: Record<string, string> = {
+  degC: '°C', degF: '°F', 'm3/s': 'm³/s', 'kg/m3': 'kg/m³', 'm/s2': 'm/s²', 'm2/s': 'm²/s', m2: 'm²', m3: 'm³', '1/s2': '1/s²',
+  'lb/ft3': 'lb/ft³', 'ft/s2': 'ft/s²', 'ft2/s': 'ft²/s', ft2: 'ft²', ft3: 'ft³', deg: '°', '1': '',
+};
+
+export function prettyUnit(unit: string): string {
+  return PRETTY[unit] ?? unit;
+}
+
+/** A number with about four significant digits, no trailing zeros, exponent form when very large/small. */
+export function formatNumber(v: number, digits = 4): string {
+  if (!Number.isFinite(v)) return String(v);
+  if (v === 0) return '0';
+  const a = Math.abs(v);
+  if (a >= 1e6 || a < 1e-3) return v.toExponential(digits - 1).replace(/\.?0+e/, 'e');
+  const s = v.toPrecision(digits);
+  return s.includes('.') && !s.includes('e') ? s.replace(/\.?0+$/, '') : String(Number(s));
+}
+
+/** An SI value shown in the display system: "65.62 ft". */
+export function showQuantity(value: number, siUnit: string, system: UnitSystem): { text: string; unit: string } {
+  const d = safeDisplay(value, siUnit, system);
+  return { text: formatNumber(d.value), unit: prettyUnit(d.unit) };
+}
+
+/** toDisplay that never throws (an unknown unit stays SI). */
+export function safeDisplay(value: number, siUnit: string, system: UnitSystem): { value: number; unit: string } {
+  try {
+    return toDisplay(value, siUnit, system);
+  } catch {
+    return { value, unit: siUnit };
+  }
+}
+
+export function shownUnit(siUnit: string, system: UnitSystem): string {
+  return prettyUnit(displayUnit(siUnit, system));
+}
+
+/** Underscored result names as words: "max_rise" → "max rise". */
+export function words(name: string): string {
+  return name.replace(/_/g, ' ');
+}

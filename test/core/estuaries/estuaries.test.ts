@@ -1,0 +1,114 @@
+import { describe, expect, it } from 'vitest';
+import fc from 'fast-check';
+import { runCheckValues } from '../../helpers/check-values';
+import {
+  saltWedgeLengthSchijfSchonfeld1953, saltWedgeProfile, saltWedgeLengthCurve, estuarineRichardsonFischer1972, estuaryClass,
+  maximalExchangeContractionArmiFarmer1986, maximalExchangeSillFarmerArmi1986, navigationLockExchange, type SaltWedgeInput,
+} from '../../../shared-core/estuaries';
+import { InputError } from '../../../shared-core/core/errors';
+
+const n = (x: number | string | undefined) => Number(x);
+const wedge = (i: Record<string, number | string>): SaltWedgeInput => ({ riverVelocity: n(i.river_velocity), depth: n(i.depth), gPrime: n(i.g_prime), interfacialFriction: n(i.interfacial_friction) });
+
+runCheckValues('estuaries', 'salt-wedge-schijf-schonfeld-1953', (i) => {
+  const input = wedge(i);
+  if (i.output === 'profile_length') return saltWedgeProfile(input, 40).length;
+  const r = saltWedgeLengthSchijfSchonfeld1953(input);
+  if (i.output === 'length_over_depth') return r.length.value / input.depth;
+  if (i.output === 'length_over_small_f0_limit') return r.length.value / (input.depth / (20 * input.interfacialFriction! * r.riverFroude ** 2));
+  return r.length.value;
+});
+
+const CLASS_INDEX = { 'well mixed': 0, 'partially mixed': 1, 'strongly stratified': 2 } as const;
+runCheckValues('estuaries', 'estuarine-richardson-fischer-1972', (i) => {
+  const r = estuarineRichardsonFischer1972(n(i.g_prime), n(i.river_discharge), n(i.width), n(i.tidal_velocity));
+  return i.output === 'class_index' ? CLASS_INDEX[r.estuaryClass] : r.richardson.value;
+});
+
+runCheckValues('estuaries', 'exchange-contraction-armi-farmer-1986', (i) => {
+  const r = maximalExchangeContractionArmiFarmer1986(n(i.g_prime), n(i.depth), n(i.width));
+  return i.output === 'g2' ? r.compositeFroudeSquared : r.discharge.value;
+});
+
+runCheckValues('estuaries', 'exchange-sill-farmer-armi-1986', (i) => {
+  const r = maximalExchangeSillFarmerArmi1986(n(i.g_prime), n(i.depth), n(i.width));
+  if (i.output === 'g2') return r.compositeFroudeSquared;
+  if (i.output === 'upper_fraction') return r.upperThicknessAtControl / n(i.depth);
+  return r.discharge.value;
+});
+
+runCheckValues('estuaries', 'navigation-lock-exchange', (i) => {
+  const r = navigationLockExchange({ gPrime: n(i.g_prime), length: n(i.length), width: n(i.width), depth: n(i.depth), salinityDifference: n(i.salinity_difference), speed: i.speed as 'ideal' | 'typical' }, [n(i.time)]);
+  return i.output === 'salt' ? r.saltMass[0] : r.volume[0];
+});
+
+describe('salt wedge: invariants', () => {
+  it('wedge length falls as river flow rises', () => {
+    fc.assert(fc.property(fc.double({ min: 1, max: 2000, noNaN: true }), fc.double({ min: 1.01, max: 3, noNaN: true }), (q, k) => {
+      const c = saltWedgeLengthCurve([q, q * k], 200, 8, 0.19);
+      if (c.riverFroude[0] < 1) expect(c.length[1]).toBeLessThan(c.length[0]);
+      else expect(c.length[1]).toBe(0);
+    }));
+  });
+  it('the profile thins the fresh layer monotonically from the tip to the critical section at the mouth', () => {
+    const p = saltWedgeProfile({ riverVelocity: 0.2, depth: 10, gPrime: 0.19 }, 30);
+    expect(p.status).toBe('completed');
+    expect(p.interfaceDepth[0]).toBeCloseTo(10 * p.riverFroude ** (2 / 3), 9);
+    expect(p.interfaceDepth[p.interfaceDepth.length - 1]).toBeCloseTo(10, 9);
+    for (let k = 1; k < p.distance.length; k++) {
+      expect(p.distance[k]).toBeGreaterThan(p.distance[k - 1]);
+      expect(p.interfaceDepth[k]).toBeGreaterThan(p.interfaceDepth[k - 1]);
+    }
+    expect(p.distance.length).toBeGreaterThanOrEqual(31);
+  });
+  it('a friction defined as ½ρC_i u² must be halved: twice f_i halves the length', () => {
+    const a = saltWedgeLengthSchijfSchonfeld1953({ riverVelocity: 0.2, depth: 10, gPrime: 0.19, interfacialFriction: 2e-4 }).length.value;
+    const b = saltWedgeLengthSchijfSchonfeld1953({ riverVelocity: 0.2, depth: 10, gPrime: 0.19, interfacialFriction: 4e-4 }).length.value;
+    expect(a / b).toBeCloseTo(2, 12);
+  });
+  it('no wedge is arrested for F0 ≥ 1, with a warning', () => {
+    const r = saltWedgeLengthSchijfSchonfeld1953({ riverVelocity: 2, depth: 4, gPrime: 0.19 });
+    expect(r.length.value).toBe(0);
+    expect(r.length.warnings.join(' ')).toMatch(/no wedge is arrested/);
+  });
+});
+
+describe('estuaries: other invariants', () => {
+  it('Richardson class follows the number monotonically', () => {
+    const order = ['well mixed', 'partially mixed', 'strongly stratified'];
+    fc.assert(fc.property(fc.double({ min: 1e-4, max: 100, noNaN: true }), fc.double({ min: 1, max: 10, noNaN: true }), (ri, k) => {
+      expect(order.indexOf(estuaryClass(ri * k))).toBeGreaterThanOrEqual(order.indexOf(estuaryClass(ri)));
+    }));
+  });
+  it('exchange rises with g′; the sill passes less than a contraction of the same section', () => {
+    fc.assert(fc.property(fc.double({ min: 1e-3, max: 1, noNaN: true }), fc.double({ min: 1, max: 50, noNaN: true }), (g, h) => {
+      const c = maximalExchangeContractionArmiFarmer1986(g, h, 10).discharge.value;
+      const s = maximalExchangeSillFarmerArmi1986(g, h, 10).discharge.value;
+      expect(s).toBeLessThan(c);
+      expect(maximalExchangeContractionArmiFarmer1986(g * 1.5, h, 10).discharge.value).toBeGreaterThan(c);
+    }), { numRuns: 50 });
+  });
+  it('lock exchange volume rises with open time and never exceeds the chamber', () => {
+    const r = navigationLockExchange({ gPrime: 0.2, length: 150, width: 16, depth: 5, salinityDifference: 28 }, [0, 30, 60, 120, 300, 600, 1200, 3600]);
+    for (let k = 1; k < r.time.length; k++) expect(r.volume[k]).toBeGreaterThan(r.volume[k - 1]);
+    expect(r.volume[r.volume.length - 1]).toBeLessThanOrEqual(r.chamberVolume);
+  });
+});
+
+describe('estuaries: bad input', () => {
+  it('never an uncaught non-InputError, never NaN', () => {
+    fc.assert(fc.property(fc.double(), fc.double(), fc.double(), fc.double(), (u, h, g, f) => {
+      try {
+        const r = saltWedgeLengthSchijfSchonfeld1953({ riverVelocity: u, depth: h, gPrime: g, interfacialFriction: f });
+        expect(Number.isFinite(r.length.value)).toBe(true);
+      } catch (e) { expect(e).toBeInstanceOf(InputError); }
+      try {
+        expect(Number.isFinite(estuarineRichardsonFischer1972(g, u, h, f).richardson.value)).toBe(true);
+      } catch (e) { expect(e).toBeInstanceOf(InputError); }
+      try {
+        expect(Number.isFinite(maximalExchangeSillFarmerArmi1986(g, h, u).discharge.value)).toBe(true);
+      } catch (e) { expect(e).toBeInstanceOf(InputError); }
+    }));
+    expect(() => navigationLockExchange({ gPrime: 0.2, length: 150, width: 16, depth: 5, salinityDifference: 28 }, [-1])).toThrow(InputError);
+  });
+});

@@ -1,0 +1,119 @@
+import { describe, expect, it } from 'vitest';
+import fc from 'fast-check';
+import { InputError } from '../../../shared-core/core/errors';
+import { makeProfile, type Profile } from '../../../shared-core/profile/profile';
+import { criticalDischargeCraya1949 } from '../../../shared-core/withdrawal/two-layer';
+import { withdrawalLayer } from '../../../shared-core/withdrawal/layer';
+import { portOutflow } from '../../../shared-core/withdrawal/outflow';
+import { blendRelease, optimiseRelease } from '../../../shared-core/withdrawal/blend';
+import { parsePorts } from '../../../shared-core/withdrawal/calc';
+
+const point = { sink: 'point' as const };
+
+/** A stable, warm-over-cold profile (all above 4 °C): temperature falls with depth by the given steps. */
+const stableProfile = fc.record({
+  surface: fc.double({ min: 12, max: 28, noNaN: true }),
+  drops: fc.array(fc.double({ min: 0, max: 1, noNaN: true }), { minLength: 4, maxLength: 10 }),
+  depth: fc.double({ min: 10, max: 60, noNaN: true }),
+}).map(({ surface, drops, depth }): Profile => {
+  const total = drops.reduce((a, b) => a + b, 0) || 1;
+  const span = surface - 5;
+  const ds = drops.map((_, i) => ((i + 1) * depth) / drops.length);
+  let t = surface;
+  const temps = drops.map((x) => (t -= (x / total) * span * 0.999));
+  return makeProfile({ depth: [0, ...ds], temperature: [surface, ...temps] });
+});
+
+describe('withdrawal invariants', () => {
+  it('a deeper port never draws warmer or lighter water in a stable profile', () => {
+    fc.assert(fc.property(stableProfile, fc.double({ min: 0.05, max: 0.95, noNaN: true }), fc.double({ min: 0.05, max: 0.95, noNaN: true }), fc.double({ min: 0.5, max: 60, noNaN: true }),
+      (p, f1, f2, q) => {
+        const bottom = p.depth[p.depth.length - 1];
+        const [a, b] = [Math.min(f1, f2) * bottom, Math.max(f1, f2) * bottom];
+        const up = portOutflow(p, a, q, point), down = portOutflow(p, b, q, point);
+        // tolerance 1e-4 °C: two ports a few cm apart inside a mixed surface layer can differ by ~1e-6 °C either way, because
+        // the surface-cut side draws uniformly from the neutral water (far below any measurement)
+        expect(down.temperature).toBeLessThanOrEqual(up.temperature + 1e-4);
+        expect(down.density).toBeGreaterThanOrEqual(up.density - 1e-5);
+      }), { numRuns: 60 });
+  });
+
+  it('every column of a blend lies between the ports’ outflows', () => {
+    fc.assert(fc.property(stableProfile, fc.array(fc.double({ min: 0, max: 30, noNaN: true }), { minLength: 3, maxLength: 3 }), (p, flows) => {
+      fc.pre(flows.some((q) => q > 1e-3));
+      const bottom = p.depth[p.depth.length - 1];
+      const ports = [0.1, 0.5, 0.9].map((f) => ({ depth: f * bottom, capacity: 30 }));
+      const r = blendRelease(p, ports, flows, point);
+      r.columns.forEach((c, k) => {
+        const open = r.ports.filter((_, i) => flows[i] > 0).map((o) => o.columns[k].value);
+        expect(c.value).toBeGreaterThanOrEqual(Math.min(...open) - 1e-9);
+        expect(c.value).toBeLessThanOrEqual(Math.max(...open) + 1e-9);
+      });
+    }), { numRuns: 40 });
+  });
+
+  it('the optimiser never exceeds a port’s capacity, meets the release, and is feasible exactly inside the achievable range', () => {
+    fc.assert(fc.property(stableProfile, fc.array(fc.double({ min: 1, max: 40, noNaN: true }), { minLength: 2, maxLength: 3 }), fc.double({ min: 0.05, max: 1, noNaN: true }), fc.double({ min: 4, max: 30, noNaN: true }),
+      (p, caps, share, target) => {
+        const bottom = p.depth[p.depth.length - 1];
+        const ports = caps.map((c, i) => ({ depth: ((i + 0.5) / caps.length) * bottom, capacity: c }));
+        const release = share * caps.reduce((a, b) => a + b, 0);
+        const r = optimiseRelease(p, ports, release, { temperature: target }, point);
+        r.flows.forEach((q, i) => { expect(q).toBeGreaterThanOrEqual(0); expect(q).toBeLessThanOrEqual(ports[i].capacity * (1 + 1e-12)); });
+        expect(r.flows.reduce((a, b) => a + b, 0)).toBeCloseTo(release, 6);
+        if (r.feasible) expect(Math.abs(r.temperature - target)).toBeLessThan(2e-3);
+        else expect(target < r.achievable.min || target > r.achievable.max).toBe(true);
+        expect(Number.isFinite(r.temperature)).toBe(true);
+      }), { numRuns: 25 });
+  });
+
+  it('a band target is met anywhere inside the band', () => {
+    const p = makeProfile({ depth: [0, 5, 10, 20, 40], temperature: [24, 23, 15, 10, 8] });
+    const r = optimiseRelease(p, [{ depth: 3, capacity: 20 }, { depth: 30, capacity: 20 }], 20, { min: 14, max: 16 }, point);
+    expect(r.feasible).toBe(true);
+    expect(r.temperature).toBeGreaterThanOrEqual(14 - 1e-3);
+    expect(r.temperature).toBeLessThanOrEqual(16 + 1e-3);
+  });
+
+  it('the critical discharge rises with g′ and with the interface distance; the layer thickens with discharge', () => {
+    fc.assert(fc.property(fc.double({ min: 1e-3, max: 0.5, noNaN: true }), fc.double({ min: 0.5, max: 30, noNaN: true }), (g, h) => {
+      expect(criticalDischargeCraya1949(g * 1.1, h, 'point').value).toBeGreaterThan(criticalDischargeCraya1949(g, h, 'point').value);
+      expect(criticalDischargeCraya1949(g, h * 1.1, 'line', 'wall', 10).value).toBeGreaterThan(criticalDischargeCraya1949(g, h, 'line', 'wall', 10).value);
+      expect(withdrawalLayer({ n: g, discharge: h * 2, sink: 'point', length: 2000 }).totalThickness)
+        .toBeGreaterThanOrEqual(withdrawalLayer({ n: g, discharge: h, sink: 'point', length: 2000 }).totalThickness);
+    }));
+  });
+});
+
+describe('withdrawal bad input', () => {
+  const p = makeProfile({ depth: [0, 10, 20], temperature: [20, 15, 10] });
+  const bad = [NaN, -1, 0, Infinity];
+  it('throws InputError, never anything else', () => {
+    for (const x of bad) {
+      expect(() => criticalDischargeCraya1949(x, 5, 'point')).toThrow(InputError);
+      expect(() => criticalDischargeCraya1949(0.01, x, 'point')).toThrow(InputError);
+      expect(() => withdrawalLayer({ n: x, discharge: 1, sink: 'point' })).toThrow(InputError);
+      expect(() => withdrawalLayer({ n: 0.01, discharge: x, sink: 'point' })).toThrow(InputError);
+      expect(() => optimiseRelease(p, [{ depth: 5, capacity: x }], 1, { temperature: 15 }, point)).toThrow(InputError);
+    }
+    expect(() => criticalDischargeCraya1949(0.01, 5, 'line')).toThrow(InputError);
+    expect(() => withdrawalLayer({ n: 0.01, discharge: 1, sink: 'line' })).toThrow(InputError);
+    expect(() => portOutflow(p, 25, 1, point)).toThrow(InputError);
+    expect(() => optimiseRelease(p, [{ depth: 5, capacity: 10 }], 11, { temperature: 15 }, point)).toThrow(InputError);
+    expect(() => blendRelease(p, [{ depth: 5, capacity: 10 }], [12], point)).toThrow(InputError);
+    expect(() => blendRelease(p, [{ depth: 5, capacity: 10 }], [0], point)).toThrow(InputError);
+    for (const t of ['', '5', '5:', 'a:b', '5:40,x']) expect(() => parsePorts(t)).toThrow(InputError);
+    expect(parsePorts(' 5:40, 30:12.5 ')).toEqual([{ depth: 5, capacity: 40 }, { depth: 30, capacity: 12.5 }]);
+  });
+
+  it('any finite port depth and discharge gives a finite outflow or an InputError', () => {
+    fc.assert(fc.property(fc.double({ min: -5, max: 30 }), fc.double({ min: -1, max: 1e3 }), (d, q) => {
+      try {
+        const o = portOutflow(p, d, q, point);
+        o.columns.forEach((c) => expect(Number.isFinite(c.value)).toBe(true));
+      } catch (e) {
+        expect(e).toBeInstanceOf(InputError);
+      }
+    }));
+  });
+});

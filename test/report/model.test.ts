@@ -1,0 +1,134 @@
+import { readdirSync, readFileSync, statSync } from 'node:fs';
+import { join, resolve } from 'node:path';
+import { describe, expect, it } from 'vitest';
+import { buildReportModel, chartSpecs, formatValue, LINE_STYLES, METHOD_CATALOGUE, methodsForSource } from '../../shared-core/report';
+import { assessSite, type Assessment } from '../../shared-core/site';
+import { readSiteFile, GPRIME_VERSION } from '../../src-main/services/site-file';
+
+const ROOT = resolve(import.meta.dirname, '..', '..');
+const assess = (file: string): Assessment => {
+  const l = readSiteFile(join(ROOT, 'examples', file));
+  return assessSite(l.site, { gprimeVersion: GPRIME_VERSION, siteHash: l.hash });
+};
+const quillmere = assess('quillmere-reservoir.gpsite');
+
+// Exact conversion factors: NIST SP 811 (2008), Appendix B.8/B.9 (1 ft = 0.3048 m exactly; 1 ft³ = 0.028316846592 m³;
+// 1 lb = 0.45359237 kg) and the Fahrenheit scale t/°F = 1.8 t/°C + 32 (NIST SP 811 §B.9 temperature note).
+const FT = 0.3048;
+const CFS = 0.028316846592;
+
+describe('report numbers (four significant figures, NIST SP 811 §7.9 style powers of ten)', () => {
+  it.each([
+    [997.4920726935004, '997.5'], [0.0043648999631674314, '0.004365'], [0.00043648999631674314, '4.365×10⁻⁴'], [21341.232477831985, '21341'], [-0.5, '−0.5'],
+    [4.130675268290227, '4.131'], [2.5e7, '2.5×10⁷'], [0, '0'], [Infinity, '∞'], [Number.NaN, 'not a number'],
+  ])('%s → %s', (x, text) => expect(formatValue(x)).toBe(text));
+});
+
+describe('report model', () => {
+  it('is deterministic: the same assessment gives the same model', () => {
+    expect(buildReportModel(assess('quillmere-reservoir.gpsite'), 'si')).toEqual(buildReportModel(quillmere, 'si'));
+  });
+
+  it('has a title block with project, people, date, revision, version and the site-file hash', () => {
+    const m = buildReportModel(quillmere, 'si');
+    const block = Object.fromEntries(m.titleBlock.map((r) => [r.label, r.value]));
+    expect(block).toMatchObject({
+      Project: quillmere.project.name, Site: quillmere.project.site, 'Prepared by': quillmere.project.preparedBy,
+      'Checked by': quillmere.project.checkedBy, Date: quillmere.project.date, Revision: quillmere.project.revision,
+      'gprime version': GPRIME_VERSION, 'Site file SHA-256': quillmere.siteHash,
+    });
+    expect(m.cautions[0]).toBe(quillmere.caution);
+  });
+
+  it('lists summary, every estimate, references and cautions in the contents, numbered in order', () => {
+    const m = buildReportModel(quillmere, 'si');
+    expect(m.contents.map((c) => c.anchor)).toEqual(['summary', ...quillmere.estimates.map((e) => e.id), 'references', 'cautions']);
+    expect(m.contents.map((c) => c.number)).toEqual(m.contents.map((_, i) => String(i + 1)));
+  });
+
+  it('converts inputs and results to US customary units with the exact NIST factors', () => {
+    const si = quillmere.estimates.find((e) => e.id === 'layer-upper')!;
+    const us = buildReportModel(quillmere, 'us').estimates.find((e) => e.id === 'layer-upper')!;
+    const q = Object.fromEntries(us.inputs.map((r) => [r.name, r]));
+    expect(q.discharge.unit).toBe('cfs');
+    expect(q.discharge.value).toBeCloseTo((si.inputs.discharge.value as number) / CFS, 9);
+    expect(q.reservoir_length.value).toBeCloseTo((si.inputs.reservoir_length.value as number) / FT, 9);
+    const thickness = us.results.find((r) => r.name === 'thickness')!;
+    expect(thickness.shownUnit).toBe('ft');
+    expect(thickness.value).toBeCloseTo((si.results.thickness.value as number) / FT, 9);
+    const blend = buildReportModel(quillmere, 'us').estimates.find((e) => e.id === 'release-summer')!;
+    const t = blend.inputs.find((r) => r.name === 'target_temperature')!;
+    expect(t.shownUnit).toBe('°F');
+    expect(t.value).toBeCloseTo(1.8 * 13.88888888888889 + 32, 9); // the site gives 57 °F
+  });
+
+  it('draws profile charts with depth on the vertical axis, downwards, with units of the display system', () => {
+    const charts = buildReportModel(quillmere, 'us').estimates[0].charts;
+    expect(charts.length).toBeGreaterThanOrEqual(4);
+    for (const c of charts) {
+      expect(c.y).toMatchObject({ label: 'Depth', unit: 'ft', reverse: true, title: 'Depth (ft)' });
+      expect(c.x.reverse).toBe(false);
+    }
+    const temp = charts.find((c) => c.title === 'Temperature')!;
+    expect(temp.x.title).toBe('Temperature (°F)');
+    const si = quillmere.estimates[0].series.find((s) => s.title === 'Temperature')!;
+    expect(temp.datasets[0].points[0].y).toBeCloseTo(si.x.values[0] / FT, 9);
+    expect(temp.datasets[0].points[0].x).toBeCloseTo(1.8 * si.y[0].values[0] + 32, 9);
+    expect(new Set(charts.map((c) => c.id)).size).toBe(charts.length);
+  });
+
+  it('renders any series generically: one chart per unit, gaps for non-finite values, depth as y drawn downwards', () => {
+    const charts = chartSpecs([
+      {
+        title: 'Front position', x: { label: 'Time', unit: 's', values: [0, 10, 20] },
+        y: [{ label: 'Benjamin', unit: 'm', values: [0, 5, 9] }, { label: 'Shin', unit: 'm', values: [0, 4, Number.NaN] }, { label: 'Speed', unit: 'm/s', values: [0.5, 0.45, 0.4] }],
+        caption: 'Front position against time',
+      },
+      { title: 'Plume path', x: { label: 'Distance', unit: 'm', values: [0, 1, 2] }, y: [{ label: 'Centreline depth', unit: 'm', values: [20, 18, 17] }], depthAxis: true },
+    ], 'si', 'e1');
+    expect(charts.map((c) => c.title)).toEqual(['Front position: Benjamin, Shin', 'Front position: Speed', 'Plume path']);
+    expect(charts[0].datasets.map((d) => d.style)).toEqual([0, 1]);
+    expect(charts[0].datasets[1].points[2]).toEqual({ x: 20, y: null });
+    expect(charts[0].table.rows[2]).toEqual([20, 9, null]);
+    expect(charts[2].x).toMatchObject({ title: 'Distance (m)', reverse: false });
+    expect(charts[2].y).toMatchObject({ title: 'Centreline depth (m)', reverse: true });
+    expect(charts[2].caption).toBe('Centreline depth against distance');
+  });
+
+  it('uses line styles that differ in dash pattern and marker, not only in colour (grayscale printing)', () => {
+    const dashes = LINE_STYLES.map((s) => s.dash.join(','));
+    const markers = LINE_STYLES.map((s) => s.marker);
+    expect(new Set(dashes).size).toBe(LINE_STYLES.length);
+    expect(new Set(markers).size).toBe(LINE_STYLES.length);
+  });
+
+  it('shows an estimate that could not be computed, and a compliance table when rows exist', () => {
+    const a: Assessment = {
+      ...quillmere,
+      estimates: [{ ...quillmere.estimates[0], status: 'error', error: 'file: no profile', results: {}, series: [] }],
+      compliance: [{ feature: 'Outfall', condition: 'Late summer', constituent: 'ammonia', unit: 'mg/L', requiredDilution: 10.4, achievedDilution: 12.48, margin: 0.2, verdict: 'meets', note: '' }],
+    };
+    const m = buildReportModel(a, 'si');
+    expect(m.summary[0]).toMatchObject({ status: 'error', keyResult: 'not computed: file: no profile' });
+    expect(m.compliance?.rows[0]).toEqual(['Outfall', 'Late summer', 'ammonia', 'mg/L', '10.4', '12.48', '20 %', 'meets', '']);
+    expect(m.contents.map((c) => c.anchor)).toContain('compliance');
+  });
+});
+
+describe('method equations come from the MethodInfo descriptors', () => {
+  function files(dir: string): string[] {
+    return readdirSync(dir).flatMap((n) => (statSync(join(dir, n)).isDirectory() ? files(join(dir, n)) : n.endsWith('.ts') ? [join(dir, n)] : []));
+  }
+  it('the catalogue holds every exported MethodInfo of shared-core', () => {
+    const declared = files(join(ROOT, 'shared-core')).flatMap((f) =>
+      [...readFileSync(f, 'utf8').matchAll(/export const \w+\s*:\s*MethodInfo\s*=\s*\{\s*id:\s*'([^']+)'/g)].map((m) => m[1]));
+    const known = new Set(METHOD_CATALOGUE.map((m) => m.id));
+    expect(declared.filter((id) => !known.has(id))).toEqual([]);
+  });
+  it('every source cited by the demo sites has its equation', () => {
+    for (const a of [quillmere, assess('amsel-estuary.gpsite')]) {
+      const missing = a.estimates.flatMap((e) => e.sources).filter((s) => methodsForSource(s).length === 0);
+      expect(missing).toEqual([]);
+    }
+  });
+});
