@@ -1,8 +1,8 @@
 import { num, text } from '../calc/resolve';
-import { arg, type CalcMethod } from '../calc/types';
+import { arg, type CalcMethod, type Series } from '../calc/types';
 import { positive } from '../core/range';
 import { GRAVITY } from '../quantities';
-import { DEFAULT_INTERFACIAL_FRICTION, SCHIJF_SCHONFELD_1953, saltWedgeLengthSchijfSchonfeld1953 } from './salt-wedge';
+import { DEFAULT_INTERFACIAL_FRICTION, SCHIJF_SCHONFELD_1953, saltWedgeLengthSchijfSchonfeld1953, saltWedgeProfile } from './salt-wedge';
 import { FISCHER_1972, estuarineRichardsonFischer1972 } from './richardson';
 import { ARMI_FARMER_1986, FARMER_ARMI_1986, maximalExchangeContractionArmiFarmer1986, maximalExchangeSillFarmerArmi1986 } from './exchange';
 
@@ -25,8 +25,15 @@ export const estuaryCalcMethods: CalcMethod[] = [
       { name: 'river_froude', unit: '1', description: 'F0 = U0/√(g′H)' },
     ],
     run(a) {
-      const r = saltWedgeLengthSchijfSchonfeld1953({ riverVelocity: arg.num(a, 'river_velocity'), depth: arg.num(a, 'depth'), gPrime: arg.num(a, 'g_prime'), interfacialFriction: arg.num(a, 'interfacial_friction') });
-      return { results: { length: num(r.length.value, 'm'), river_froude: num(r.riverFroude, '1') }, warnings: r.length.warnings, sources: [SCHIJF_SCHONFELD_1953.source] };
+      const input = { riverVelocity: arg.num(a, 'river_velocity'), depth: arg.num(a, 'depth'), gPrime: arg.num(a, 'g_prime'), interfacialFriction: arg.num(a, 'interfacial_friction') };
+      const r = saltWedgeLengthSchijfSchonfeld1953(input);
+      const profile = saltWedgeProfile(input);
+      const series: Series[] = profile.distance.length ? [{
+        title: 'Salt-wedge interface', x: { label: 'Distance landward from the mouth', unit: 'm', values: profile.distance },
+        y: [{ label: 'Interface depth', unit: 'm', values: profile.interfaceDepth }], depthAxis: true,
+        caption: 'Depth of the interface between river water and the salt wedge, mouth to tip',
+      }] : [];
+      return { results: { length: num(r.length.value, 'm'), river_froude: num(r.riverFroude, '1') }, warnings: [...r.length.warnings, ...profile.warnings], sources: [SCHIJF_SCHONFELD_1953.source], series };
     },
   },
   {

@@ -1,5 +1,6 @@
 import { num, text } from '../calc/resolve';
-import { arg, type CalcMethod } from '../calc/types';
+import { arg, type CalcMethod, type Series } from '../calc/types';
+import { sampleFront, type FrontSeries } from './front-pieces';
 import { positive } from '../core/range';
 import { GRAVITY } from '../quantities';
 import { kinematicViscosityWater } from '../water/transport';
@@ -68,12 +69,24 @@ export const gravityCurrentCalcMethods: CalcMethod[] = [
         totalDepth: arg.optNum(a, 'total_depth') ?? lockDepth,
         geometry: arg.text<SpreadingGeometry>(a, 'geometry'), kinematicViscosity: arg.num(a, 'kinematic_viscosity'),
       });
-      const s = lockReleaseFrontAt(model, arg.num(a, 'time'));
+      const time = arg.num(a, 'time');
+      const s = lockReleaseFrontAt(model, time);
       return {
         results: { front_position: num(s.position, 'm'), front_speed: num(s.speed, 'm/s'), phase: text(s.phase) },
+        series: frontSeriesCharts(sampleFront(model.pieces, Array.from({ length: 121 }, (_, i) => (time * 2 * i) / 120 || 0), [], [])),
         warnings: model.warnings,
         sources: [LOCK_RELEASE_HS1980.source, HUPPERT_1982.source],
       };
     },
   },
 ];
+
+/** Chart curves of a release: front position and front speed against time. */
+export function frontSeriesCharts(f: FrontSeries): Series[] {
+  const time = { label: 'Time since release', unit: 's', values: [...f.time] };
+  const phases = f.transitions.map((t) => `${t.phase} from ${Math.round(t.time)} s`).join(', ');
+  return [
+    { title: 'Front position', x: time, y: [{ label: 'Front position', unit: 'm', values: [...f.position] }], caption: `Front distance from the back wall against time${phases ? ` (${phases})` : ''}` },
+    { title: 'Front speed', x: time, y: [{ label: 'Front speed', unit: 'm/s', values: [...f.speed] }], caption: 'Front speed against time' },
+  ];
+}

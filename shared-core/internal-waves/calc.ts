@@ -1,12 +1,12 @@
 import { num, text } from '../calc/resolve';
-import { arg, type CalcArgs, type CalcMethod, type ResultSpec } from '../calc/types';
+import { arg, type CalcArgs, type CalcMethod, type ResultSpec, type Series } from '../calc/types';
 import { InputError } from '../core/errors';
 import { positive } from '../core/range';
 import {
-  INTERFACIAL_DISPERSION_FREE_SURFACE, SOLITARY_WAVE_KDV, polarityText, solitaryWaveKdv, twoLayerFreeSurfaceCelerities,
+  INTERFACIAL_DISPERSION_FREE_SURFACE, SOLITARY_WAVE_KDV, dispersionCurve, polarityText, solitaryWaveKdv, twoLayerFreeSurfaceCelerities,
   type TwoLayer,
 } from './two-layer';
-import { VERTICAL_MODES, constantN2Column, verticalModesFromN2, verticalModesFromProfile } from './modes';
+import { VERTICAL_MODES, constantN2Column, verticalModesFromN2, verticalModesFromProfile, type VerticalModes } from './modes';
 import {
   INTERNAL_SEICHE_TWO_LAYER, WEDDERBURN_NUMBER, WIND_STRESS_LARGE_POND_1981, internalSeichePeriodTwoLayer, upwellingRiskStatement,
   wedderburnNumber, windStressLargePond1981,
@@ -62,7 +62,7 @@ export const internalWaveCalcMethods: CalcMethod[] = [
       const sources = [INTERFACIAL_DISPERSION_FREE_SURFACE.source, SOLITARY_WAVE_KDV.source];
       return {
         results: { celerity: num(linear + (sw.celerity - sw.linearCelerity), 'm/s'), long_wave_celerity: num(longWave, 'm/s'), polarity: text(polarityText(sw.polarity)) },
-        warnings, sources,
+        warnings, sources, series: [dispersionSeries(s)],
       };
     },
   },
@@ -85,7 +85,7 @@ export const internalWaveCalcMethods: CalcMethod[] = [
       if (!p && (N === undefined || H === undefined)) throw new InputError(N === undefined ? 'buoyancy_frequency' : 'depth', '(missing)', N === undefined ? '1/s' : 'm', 'a profile file, or both buoyancy_frequency and depth', 'give a profile file, or both buoyancy_frequency and depth');
       const r = p ? verticalModesFromProfile(p, { modes }) : verticalModesFromN2(constantN2Column(N!, H!), H!, { modes });
       const results = Object.fromEntries(r.modes.map((m) => [`celerity_${m.n}`, num(m.celerity, 'm/s')]));
-      return { results, warnings: r.warnings, sources: [VERTICAL_MODES.source] };
+      return { results, warnings: r.warnings, sources: [VERTICAL_MODES.source], series: [modeShapeSeries(r)] };
     },
   },
   {
@@ -129,3 +129,22 @@ export const internalWaveCalcMethods: CalcMethod[] = [
     },
   },
 ];
+
+/** Chart curve: interfacial phase speed against wavelength, rigid lid and free surface. */
+export function dispersionSeries(s: TwoLayer): Series {
+  const pts = dispersionCurve(s);
+  return {
+    title: 'Interfacial wave dispersion', x: { label: 'Wavelength', unit: 'm', values: pts.map((p) => p.wavelength) },
+    y: [{ label: 'Phase speed, rigid lid', unit: 'm/s', values: pts.map((p) => p.rigidLid) }, { label: 'Phase speed, free surface', unit: 'm/s', values: pts.map((p) => p.interfacial) }],
+    caption: 'Two-layer interfacial phase speed against wavelength (long waves on the right)',
+  };
+}
+
+/** Chart curve: vertical-displacement shapes of the modes against depth. */
+export function modeShapeSeries(r: VerticalModes): Series {
+  return {
+    title: 'Vertical mode shapes', x: { label: 'Depth', unit: 'm', values: [...r.depth] },
+    y: r.modes.map((m) => ({ label: `Mode ${m.n} displacement (c = ${m.celerity.toFixed(3)} m/s)`, unit: '1', values: [...m.displacement] })),
+    depthAxis: true, caption: 'Vertical-displacement structure of each mode, scaled to a maximum of 1',
+  };
+}

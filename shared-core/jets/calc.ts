@@ -4,10 +4,10 @@ import { InputError } from '../core/errors';
 import { positive, nonNegative } from '../core/range';
 import { JET_LENGTH_SCALES, jetLengthScales } from './length-scales';
 import { BUOYANT_JET } from './closure';
-import { buoyantJetTrajectory, type BuoyantJetInput } from './buoyant-jet';
+import { buoyantJetTrajectory, JET_PATH_COLUMNS, type BuoyantJetInput, type JetPath, type JetTrajectory } from './buoyant-jet';
 import { LINE_PLUME_RSB1989, linePlumeRobertsSnyderBaumgartner1989 } from './line-plume';
 import { REQUIRED_DILUTION, requiredDilution } from '../mixing-zone/required-dilution';
-import type { ResultValue } from '../calc/types';
+import type { ResultValue, Series } from '../calc/types';
 
 const lengthScaleResults = [
   ['l_q', 'lQ', 'Q/√M: distance over which the port geometry matters'],
@@ -18,8 +18,8 @@ const lengthScaleResults = [
   ['l_strat_buoyancy', 'lStratBuoyancy', '(|B|/N³)^¼: stratification scale of a plume'],
 ] as const;
 
-/** Runs the buoyant-jet model for the CLI and reports the headline results. */
-function runBuoyantJet(a: CalcArgs): CalcOutput {
+/** The model input from resolved buoyant-jet arguments (shared by the calc method and the compliance table). */
+export function buoyantJetInputFromArgs(a: CalcArgs): BuoyantJetInput {
   const profile = arg.profile(a);
   const rhoA = arg.optNum(a, 'ambient_density');
   if ((profile === undefined) === (rhoA === undefined)) {
@@ -30,7 +30,21 @@ function runBuoyantJet(a: CalcArgs): CalcOutput {
     portDepth: arg.num(a, 'port_depth'), effluentDensity: arg.num(a, 'effluent_density'),
     ambient: profile ? { kind: 'profile', profile } : { kind: 'uniform', density: rhoA as number }, current: arg.num(a, 'current'),
   };
-  const t = buoyantJetTrajectory(input);
+  return input;
+}
+
+/** Chart curves of a trajectory: the centreline in the vertical section and dilution along the path. */
+export function jetPathSeries(t: JetTrajectory): Series[] {
+  const col = (k: keyof JetPath) => ({ ...JET_PATH_COLUMNS[k], values: [...(t.path[k] ?? [])] });
+  return [
+    { title: 'Plume centreline', x: col('horizontalDistance'), y: [col('depth')], depthAxis: true, caption: `Centreline path in the vertical section (${t.outcomeText})` },
+    { title: 'Dilution along the path', x: col('horizontalDistance'), y: [col('dilutionCentreline'), col('dilutionAverage')], caption: 'Centreline and flux-average dilution against horizontal distance from the port' },
+  ];
+}
+
+/** Runs the buoyant-jet model for the CLI and reports the headline results. */
+function runBuoyantJet(a: CalcArgs): CalcOutput {
+  const t = buoyantJetTrajectory(buoyantJetInputFromArgs(a));
   const results: Record<string, ResultValue> = { max_rise: num(t.maxRise, 'm') };
   const ev = (k: string) => t.events.find((e) => e.kind === k);
   const ret = ev('return to port level');
@@ -40,7 +54,7 @@ function runBuoyantJet(a: CalcArgs): CalcOutput {
   const surf = ev('surface contact');
   if (t.outcome === 'surfaces' && surf) results.surface_dilution = num(surf.dilutionCentreline, '1');
   results.outcome = text(t.outcomeText);
-  return { results, warnings: t.warnings, sources: [BUOYANT_JET.source] };
+  return { results, warnings: t.warnings, sources: [BUOYANT_JET.source], series: jetPathSeries(t) };
 }
 
 /** The jets and mixing-zone methods of `gprime calc`. */

@@ -7,6 +7,7 @@ import { ProfileError } from '../profile/profile';
 import { boundArgs } from './bindings';
 import { makeContext } from './context';
 import type { Estimate, Site } from './schema';
+import { siteCompliance } from './compliance';
 
 export interface EstimateOutcome {
   id: string;
@@ -107,6 +108,6 @@ export function assessSite(site: Site, meta: { gprimeVersion: string; siteHash: 
     units: site.units,
     caution: SCREENING_CAUTION,
     estimates: site.estimates.map((e, i) => runEstimate(site, e, i)),
-    compliance: [],
+    compliance: siteCompliance(site),
   };
 }

@@ -1,11 +1,12 @@
 import { num, text } from '../calc/resolve';
-import { arg, type CalcMethod } from '../calc/types';
+import { arg, type CalcMethod, type Series } from '../calc/types';
 import { InputError } from '../core/errors';
 import { positive } from '../core/range';
 import { criticalDischargeCraya1949, CRAYA_1949, SINK_POSITIONS, type SinkKind, type SinkPosition } from './two-layer';
 import { withdrawalLayer, WITHDRAWAL_LINE_SINK, WITHDRAWAL_POINT_SINK } from './layer';
 import { WITHDRAWAL_MEASURED_PROFILE } from './measured';
-import { WITHDRAWAL_VELOCITY } from './outflow';
+import { WITHDRAWAL_VELOCITY, withdrawalVelocityProfile } from './outflow';
+import type { Profile } from '../profile/profile';
 import { optimiseRelease, RELEASE_BLEND, type Port } from './blend';
 
 const SINKS = ['line', 'point'] as const;
@@ -86,9 +87,29 @@ export const withdrawalCalcMethods: CalcMethod[] = [
       const warnings = ['Ports are treated as orifices (point sinks) without interference between their withdrawal layers.', ...r.warnings];
       return {
         results: { temperature: num(r.temperature, 'degC'), port_flows: text(flows), feasible: text(r.feasible ? 'yes' : 'no') },
+        series: releaseSeries(p, ports, r.flows),
         warnings,
         sources: [RELEASE_BLEND.source, WITHDRAWAL_MEASURED_PROFILE.source, WITHDRAWAL_POINT_SINK.source, WITHDRAWAL_VELOCITY.source],
       };
     },
   },
 ];
+
+/** Chart curves of a release split: the flow of each port, and each open port's outflow per metre of depth. */
+export function releaseSeries(p: Profile, ports: readonly Port[], flows: readonly number[]): Series[] {
+  const out: Series[] = [{
+    title: 'Port flows', x: { label: 'Port depth', unit: 'm', values: ports.map((q) => q.depth) },
+    y: [{ label: 'Port flow', unit: 'm3/s', values: [...flows] }, { label: 'Port capacity', unit: 'm3/s', values: ports.map((q) => q.capacity) }],
+    depthAxis: true, caption: 'Flow of each port in the release split, with its capacity',
+  }];
+  ports.forEach((port, i) => {
+    if (!(flows[i] > 0)) return;
+    const v = withdrawalVelocityProfile(p, port.depth, flows[i], { sink: 'point' });
+    out.push({
+      title: `Withdrawal at the port at ${port.depth} m`, x: { label: 'Depth', unit: 'm', values: v.depth },
+      y: [{ label: 'Outflow per metre of depth', unit: 'm2/s', values: v.fluxPerDepth }], depthAxis: true,
+      caption: `Velocity distribution in the withdrawal layer of the port at ${port.depth} m (${flows[i].toFixed(2)} m³/s)`,
+    });
+  });
+  return out;
+}

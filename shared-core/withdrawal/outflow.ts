@@ -9,22 +9,29 @@ export const WITHDRAWAL_VELOCITY: MethodInfo = {
     'Bohan, J.P., Grace, J.L. Jr. (1973). Selective withdrawal from man-made lakes. Tech. Rep. H-73-4, U.S. Army Engineer ' +
     'Waterways Experiment Station (normalised velocity v/v_max = 1 − (Δρ/Δρ_limit)² on each side of the port; form from memory). ' +
     'Outflow quality: conservation of mass and of each constituent, c̄ = ∫ v c dd / ∫ v dd (Fischer et al. 1979, Ch. 6).',
-  equation: 'v/v_max = 1 − (Δρ(d)/Δρ_limit)², Δρ = |ρ(d) − ρ_port|; a side cut by the surface or the bed: v/v_max = 1 − (a/δ)²; c̄ = ∫ v c dd / ∫ v dd',
+  equation: 'v/v_max = 1 − max((Δρ/Δρ_limit)², (a/a_limit)²), Δρ = |ρ(d) − ρ_port|, a = |d − d_port| (the two terms coincide in linear stratification); a side cut by the surface or the bed: v/v_max = 1 − (a/δ)²; c̄ = ∫ v c dd / ∫ v dd',
   validity: {},
 };
 
-/** Normalised velocity v/v_max in [0, 1] at depth d for a port's withdrawal layer. */
+/**
+ * Normalised velocity v/v_max in [0, 1] at depth d for a port's withdrawal layer:
+ * 1 − max((Δρ/Δρ_limit)², (a/a_limit)²). In linear stratification both terms are the same parabola (Bohan & Grace 1973);
+ * in neutral (mixed) water the distance term keeps the velocity falling away from the port, so a port drawing from a
+ * mixed layer does not draw its far end as strongly as its own level. A side stopped by the surface or the bed falls off
+ * over its unbounded half-thickness, but at most over the longer of the two sides (so neutral water, whose unbounded
+ * half-thickness is infinite, is weighted like the layer on the other side; continuous as N → 0).
+ */
 export function relativeVelocity(p: Profile, w: ProfileWithdrawal, d: number): number {
   if (d < w.topDepth || d > w.bottomDepth) return 0;
-  const side: SideLimit = d < w.portDepth ? w.upper : w.lower;
+  const [side, other]: SideLimit[] = d < w.portDepth ? [w.upper, w.lower] : [w.lower, w.upper];
   const a = Math.abs(d - w.portDepth);
-  let s: number;
-  if (side.distance === 0) s = 1;
-  else if (side.cutByBoundary) s = Number.isFinite(side.unboundedHalfThickness) ? 1 - (a / side.unboundedHalfThickness) ** 2 : 1;
-  else {
+  if (side.distance === 0) return 1;
+  const reach = side.cutByBoundary ? Math.min(side.unboundedHalfThickness, Math.max(side.distance, other.distance)) : side.distance;
+  let s = 1 - (a / reach) ** 2;
+  if (!side.cutByBoundary && side.densityDifference > 0) {
     const rhoPort = interpolateAt(p.depth, p.density, w.portDepth);
     const drho = Math.abs(interpolateAt(p.depth, p.density, d) - rhoPort);
-    s = side.densityDifference > 0 ? 1 - (drho / side.densityDifference) ** 2 : 1 - (a / side.distance) ** 2;
+    s = Math.min(s, 1 - (drho / side.densityDifference) ** 2);
   }
   return Math.min(1, Math.max(0, s));
 }

@@ -17,6 +17,13 @@ export function summariseAssessment(a: Assessment): string {
     lines.push(`• ${e.id} (${e.method}${where ? `; ${where}` : ''}): ${key} = ${value}${r.unit && r.unit !== '1' ? ' ' + r.unit : ''}` +
       (e.warnings.length ? `  [${e.warnings.length} warning${e.warnings.length > 1 ? 's' : ''}]` : ''));
   }
+  if (a.compliance.length) {
+    lines.push('', 'Mixing-zone compliance (required vs achieved dilution at the boundary):');
+    for (const r of a.compliance) {
+      const f = (x: number | null) => (x === null ? '—' : formatNumber(x));
+      lines.push(`  ${r.verdict.padEnd(13)} ${r.feature}, ${r.condition}, ${r.constituent}: required ${f(r.requiredDilution)}, achieved ${f(r.achievedDilution)}`);
+    }
+  }
   lines.push('', a.caution);
   return lines.join('\n');
 }

@@ -115,7 +115,7 @@ export async function buildPdf(model: ReportModel, charts: ReadonlyMap<string, C
   }
   if (model.compliance) {
     startSection('compliance', `${entry('compliance').number}  Mixing-zone compliance`);
-    const widths = [0.12, 0.1, 0.1, 0.06, 0.1, 0.1, 0.08, 0.1, 0.24];
+    const widths = [0.12, 0.115, 0.135, 0.065, 0.1, 0.1, 0.08, 0.08, 0.185];
     w.table(model.compliance.header.map((h, i) => ({ header: h, width: widths[i], align: i >= 4 && i <= 6 ? 'right' : 'left' })), model.compliance.rows, 8);
   }
   startSection('references', `${entry('references').number}  References`);

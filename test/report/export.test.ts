@@ -128,7 +128,7 @@ describe('tables round-trip to the numbers of `assess`', () => {
   it('the workbook has a sheet per estimate whose results equal `assess` exactly', async () => {
     const wb = new ExcelJS.Workbook();
     await wb.xlsx.readFile(join(out, 'quillmere-reservoir.xlsx'));
-    expect(wb.worksheets.map((w) => w.name)).toEqual(['Report', ...assessment.estimates.map((e) => e.id)]);
+    expect(wb.worksheets.map((w) => w.name)).toEqual(['Report', ...assessment.estimates.map((e) => e.id), ...(assessment.compliance.length ? ['Compliance'] : [])]);
     const report = wb.getWorksheet('Report')!;
     const cells = report.getSheetValues().flat().map(String);
     expect(cells).toContain(assessment.siteHash);

@@ -42,7 +42,7 @@ describe('report model', () => {
 
   it('lists summary, every estimate, references and cautions in the contents, numbered in order', () => {
     const m = buildReportModel(quillmere, 'si');
-    expect(m.contents.map((c) => c.anchor)).toEqual(['summary', ...quillmere.estimates.map((e) => e.id), 'references', 'cautions']);
+    expect(m.contents.map((c) => c.anchor)).toEqual(['summary', ...quillmere.estimates.map((e) => e.id), ...(quillmere.compliance.length ? ['compliance'] : []), 'references', 'cautions']);
     expect(m.contents.map((c) => c.number)).toEqual(m.contents.map((_, i) => String(i + 1)));
   });
 

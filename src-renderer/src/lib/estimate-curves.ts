@@ -1,4 +1,3 @@
-import type { Series } from '../../../shared-core/calc/types';
 import type { EstimateOutcome } from '../../../shared-core/site/assess';
 import { conditionProfile } from '../../../shared-core/site/context';
 import type { Site } from '../../../shared-core/site/schema';
@@ -8,8 +7,7 @@ import type { Profile } from '../../../shared-core/profile/profile';
 import { readQuantity } from './quantity';
 
 /**
- * What an estimate draws into the section, and chart curves for methods whose calc output carries no
- * series yet. Everything here is computed by shared-core functions; this module only arranges it.
+ * What an estimate draws into the section. Chart curves come with each estimate's outcome. Everything here is computed by shared-core functions; this module only arranges it.
  */
 export type SectionMark =
   | { kind: 'band'; featureId: string; port: number; top: number; bottom: number; label: string }
@@ -20,8 +18,6 @@ export type SectionMark =
 export interface EstimateDrawing {
   estimateId: string;
   marks: SectionMark[];
-  /** extra chart curves (used when the method gives none) */
-  series: Series[];
   /** drawn dashed: the result lies outside its method's validity */
   outside: string[];
 }
@@ -55,18 +51,14 @@ function plume(site: Site, o: EstimateOutcome): Partial<EstimateDrawing> {
   const featureId = o.feature?.id ?? '';
   return {
     marks: [{ kind: 'path', featureId, x: p.horizontalDistance, depth: p.depth, radius: p.radius, label: o.title, end: { x: p.horizontalDistance[last], depth: p.depth[last], label: t.outcome } }],
-    series: [
-      { title: 'Plume centreline', x: { label: 'Depth', unit: 'm', values: p.depth }, y: [{ label: 'Horizontal distance from the port', unit: 'm', values: p.horizontalDistance }], depthAxis: true, caption: 'Centreline path in the vertical section' },
-      { title: 'Dilution along the path', x: { label: 'Horizontal distance from the port', unit: 'm', values: p.horizontalDistance }, y: [{ label: 'Centreline dilution', unit: '1', values: p.dilutionCentreline }, { label: 'Average dilution', unit: '1', values: p.dilutionAverage }], caption: 'Dilution against horizontal distance' },
-    ],
   };
 }
 
-/** Port flows as the release-blend method writes them: "5 m: 4.58 m3/s; 15 m: 4.14 m3/s". */
+/** Port depths and flows from the release-blend method's 'Port flows' curve. */
 function portFlows(o: EstimateOutcome): { depth: number; flow: number }[] {
-  const text = o.results.port_flows?.value;
-  if (typeof text !== 'string') return [];
-  return [...text.matchAll(/([\d.eE+-]+) m: ([\d.eE+-]+) m3\/s/g)].map((m) => ({ depth: Number(m[1]), flow: Number(m[2]) }));
+  const s = o.series.find((c) => c.title === 'Port flows');
+  if (!s) return [];
+  return s.x.values.map((depth, i) => ({ depth, flow: s.y[0].values[i] }));
 }
 
 function withdrawalBands(site: Site, o: EstimateOutcome): Partial<EstimateDrawing> {
@@ -74,14 +66,12 @@ function withdrawalBands(site: Site, o: EstimateOutcome): Partial<EstimateDrawin
   const featureId = o.feature?.id ?? '';
   if (!profile) return {};
   const marks: SectionMark[] = [];
-  const series: Series[] = [];
   portFlows(o).forEach(({ depth, flow }, port) => {
     if (!(flow > 0)) return;
     const v = withdrawalVelocityProfile(profile, depth, flow, { sink: 'point' });
     marks.push({ kind: 'band', featureId, port, top: v.limits.topDepth, bottom: v.limits.bottomDepth, label: `port at ${depth.toFixed(1)} m` });
-    series.push({ title: `Withdrawal at the port at ${depth.toFixed(1)} m`, x: { label: 'Depth', unit: 'm', values: v.depth }, y: [{ label: 'Outflow per metre of depth', unit: 'm2/s', values: v.fluxPerDepth }], depthAxis: true, caption: 'Velocity distribution in the withdrawal layer' });
   });
-  return { marks, series };
+  return { marks };
 }
 
 function layerBand(site: Site, o: EstimateOutcome): Partial<EstimateDrawing> {
@@ -110,11 +100,11 @@ const OUTSIDE = /outside the range|extrapolat|not valid|beyond/i;
 
 /** Drawing and extra curves of one estimate; never throws (a failed drawing is simply left out). */
 export function drawEstimate(site: Site, o: EstimateOutcome): EstimateDrawing {
-  const base: EstimateDrawing = { estimateId: o.id, marks: [], series: [], outside: o.warnings.filter((w) => OUTSIDE.test(w)) };
+  const base: EstimateDrawing = { estimateId: o.id, marks: [], outside: o.warnings.filter((w) => OUTSIDE.test(w)) };
   if (o.status !== 'ok') return base;
   try {
     const extra = BUILDERS[o.method]?.(site, o) ?? {};
-    return { ...base, marks: extra.marks ?? [], series: o.series.length ? [] : (extra.series ?? []) };
+    return { ...base, marks: extra.marks ?? [] };
   } catch {
     return base;
   }

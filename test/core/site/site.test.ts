@@ -72,4 +72,22 @@ describe('site document', () => {
     expect(blend.error).toMatch(/features\[0\]\.release/);
     expect(a.estimates.find((e) => e.id === 'strat-summer')!.status).toBe('ok');
   });
+
+  it('builds the mixing-zone compliance table for every outfall × condition × constituent', () => {
+    const a = assessSite(loadSite(read(DEMOS[0])), { gprimeVersion: 't', siteHash: 'h' });
+    expect(a.compliance).toHaveLength(4); // 1 outfall × 2 conditions × 2 constituents
+    const ammonia = a.compliance.find((r) => r.constituent === 'Ammonia-N' && r.condition === 'Early winter')!;
+    // required dilution by mass balance S = (Ce − Ca)/(Cc − Ca) (US EPA 1991, Technical Support Document, §4.3 — worked by hand)
+    expect(ammonia.requiredDilution).toBeCloseTo((12 - 0.05) / (1.2 - 0.05), 10);
+    expect(ammonia.achievedDilution).toBeGreaterThan(1);
+    expect(['meets', 'does not meet', 'cannot tell']).toContain(ammonia.verdict);
+    expect(ammonia.margin).toBeCloseTo(ammonia.achievedDilution! / ammonia.requiredDilution! - 1, 12);
+  });
+
+  it('a condition the plume model cannot run for gives "cannot tell" rows naming the reason', () => {
+    const doc = JSON.parse(read(DEMOS[0]));
+    doc.features[2].diameter = '0.5 kg';
+    const a = assessSite(loadSite(JSON.stringify(doc)), { gprimeVersion: 't', siteHash: 'h' });
+    expect(a.compliance.every((r) => r.verdict === 'cannot tell' && /features\[2\]\.diameter/.test(r.note))).toBe(true);
+  });
 });
