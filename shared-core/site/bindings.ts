@@ -46,8 +46,8 @@ function intakePorts(ctx: EstimateContext, i: Intake): string {
 function inflowGPrime(ctx: EstimateContext, f: Inflow): number | undefined {
   if (!ctx.profile) return undefined;
   const salinity = siOptional(`${at(ctx)}.salinity`, f.salinity, 'PSU') ?? 0;
-  const rho = waterDensity({ temperature: si(`${at(ctx)}.temperature`, f.temperature, 'degC'), salinity, sediment: siOptional(`${at(ctx)}.sediment`, f.sediment, 'kg/m3') ?? 0, eos: salinity > 0 ? 'eos80' : 'fresh' }).value;
-  return (GRAVITY * (rho - ctx.profile.density[0])) / rho;
+  const rho = waterDensity({ temperature: si(`${at(ctx)}.temperature`, f.temperature, 'degC'), salinity, sediment: siOptional(`${at(ctx)}.sediment`, f.sediment, 'kg/m3') ?? 0, eos: salinity > 0 && ctx.profile.eos === 'fresh' ? 'eos80' : ctx.profile.eos }).value;
+  return (GRAVITY * (rho - ctx.profile.density[0])) / ctx.profile.density[0]; // ambient (surface) density as reference, as in the river-inflow chain
 }
 
 function channelArgs(ctx: EstimateContext, c: Channel) {
@@ -94,6 +94,15 @@ const BINDINGS: Record<string, Binding> = {
     const f = feature(ctx, 'inflow');
     if (!f) return {};
     return { discharge: si(`${at(ctx)}.discharge`, f.discharge, 'm3/s'), width: si(`${at(ctx)}.width`, f.width, 'm'), g_prime: inflowGPrime(ctx, f) };
+  },
+  underflow: (ctx) => {
+    const f = feature(ctx, 'inflow');
+    if (!f) return { file: ctx.profile };
+    return {
+      file: ctx.profile, discharge: si(`${at(ctx)}.discharge`, f.discharge, 'm3/s'), width: si(`${at(ctx)}.width`, f.width, 'm'),
+      temperature: si(`${at(ctx)}.temperature`, f.temperature, 'degC'), salinity: siOptional(`${at(ctx)}.salinity`, f.salinity, 'PSU'),
+      sediment: siOptional(`${at(ctx)}.sediment`, f.sediment, 'kg/m3'), bed_slope: siOptional(`${at(ctx)}.bedSlope`, f.bedSlope, '1'),
+    };
   },
   'jet-length-scales': (ctx) => {
     const o = feature(ctx, 'outfall');

@@ -39,7 +39,7 @@ export function blankFeature(kind: FeatureKind, id: string, depth: number): Feat
 export const SUGGESTED: Record<FeatureKind, string[]> = {
   intake: ['withdrawal-layer', 'release-blend'],
   outfall: ['buoyant-jet'],
-  inflow: ['plunge-depth'],
+  inflow: ['plunge-depth', 'underflow'],
   channel: ['exchange-flow'],
 };
 
