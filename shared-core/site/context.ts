@@ -1,10 +1,11 @@
+import { GRAVITY } from '../quantities';
 import { parseQuantity } from '../units/units';
 import { profileFromTable } from '../profile/csv';
 import { twoLayerFit, n2Profile, type TwoLayerFit } from '../profile/stratification';
 import { interpolateAt, type Profile } from '../profile/profile';
 import type { Condition, Feature, QuantityInput, Site } from './schema';
 
-/** A quantity of the site document in SI; the field path names the place in the document. */
+/** A quantity of the site file in SI; the field path names its place in the file. */
 export function si(field: string, q: QuantityInput, unit: string): number {
   return typeof q === 'number' ? q : parseQuantity(field, q, unit);
 }
@@ -44,7 +45,7 @@ export function buoyancyFrequencyAt(p: Profile, depth: number): number {
 /** Depth-mean buoyancy frequency between two depths [1/s] from the density difference. */
 export function meanBuoyancyFrequency(p: Profile, top: number, bottom: number): number {
   const r1 = interpolateAt(p.depth, p.density, top), r2 = interpolateAt(p.depth, p.density, bottom);
-  return Math.sqrt(Math.max(0, (9.80665 * (r2 - r1)) / (((r1 + r2) / 2) * Math.max(bottom - top, 1e-9))));
+  return Math.sqrt(Math.max(0, (GRAVITY * (r2 - r1)) / (((r1 + r2) / 2) * Math.max(bottom - top, 1e-9))));
 }
 
 export function makeContext(site: Site, conditionId: string | undefined, featureId: string | undefined): EstimateContext {
