@@ -39,6 +39,14 @@ export interface Series {
   caption?: string;
 }
 
+/**
+ * Whether a depth chart holds depth in x (a profile: values drawn across, depth down the side) rather
+ * than in y (a section: distance across, depth down). Either way depth is drawn downwards.
+ */
+export function depthInX(s: Series): boolean {
+  return !!s.depthAxis && /depth/i.test(s.x.label);
+}
+
 export interface CalcOutput {
   results: Record<string, ResultValue>;
   warnings: string[];

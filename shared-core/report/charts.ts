@@ -1,4 +1,4 @@
-import type { Series, SeriesAxis } from '../calc/types';
+import { depthInX, type Series, type SeriesAxis } from '../calc/types';
 import { displayUnit, toDisplay, type UnitSystem } from '../units/units';
 import { prettyUnit, slug } from './format';
 
@@ -47,7 +47,6 @@ export interface ChartSpec {
   table: { header: string[]; rows: (number | null)[][] };
 }
 
-const DEPTH_LIKE = /depth/i;
 
 function axisTitle(label: string, unit: string): string {
   return unit ? `${label} (${unit})` : label;
@@ -79,8 +78,7 @@ export function chartSpecs(series: readonly Series[], units: UnitSystem, prefix:
       const xs = display(s.x.values, s.x.unit, units);
       const columns = group.map((g) => display(g.values, g.unit, units));
       // depthAxis: depth is drawn on the vertical axis, downwards, whichever side of the series holds it
-      const depthIsX = !!s.depthAxis && DEPTH_LIKE.test(s.x.label);
-      const swap = depthIsX;
+      const swap = depthInX(s);
       const along = { label: s.x.label, unit: xUnit };
       const across = { label: groupLabel(s, group), unit: yUnit };
       const h = swap ? across : along;

@@ -27,14 +27,26 @@ export function windowOptions(preload: string): BrowserWindowConstructorOptions 
   return { ...windowSettings, show: false, autoHideMenuBar: false, webPreferences: secureWebPreferences(preload) };
 }
 
-/** Denies navigation away from the app, new windows, webviews and every permission request (camera, …). */
+/** The one permission the renderer gets: writing to the clipboard ("Copy image", "Copy table"), from the app's own pages. */
+export function permissionAllowed(permission: string, url: string | undefined): boolean {
+  if (permission !== 'clipboard-sanitized-write' || !url) return false;
+  try {
+    const u = new URL(url);
+    // the origin of a custom scheme is opaque to WHATWG URL: compare scheme and host
+    return `${u.protocol}//${u.host}` === APP_ORIGIN;
+  } catch {
+    return false;
+  }
+}
+
+/** Denies navigation away from the app, new windows, webviews and every permission but clipboard writing. */
 export function lockDown(contents: WebContents): void {
   contents.on('will-navigate', (event) => event.preventDefault());
   contents.on('will-redirect', (event) => event.preventDefault());
   contents.on('will-attach-webview', (event) => event.preventDefault());
   contents.setWindowOpenHandler(() => ({ action: 'deny' }));
-  contents.session.setPermissionRequestHandler((_contents, _permission, callback) => callback(false));
-  contents.session.setPermissionCheckHandler(() => false);
+  contents.session.setPermissionRequestHandler((_contents, permission, callback, details) => callback(permissionAllowed(permission, details?.requestingUrl)));
+  contents.session.setPermissionCheckHandler((_contents, permission, requestingOrigin) => permissionAllowed(permission, requestingOrigin));
 }
 
 /** Adds the CSP to every response the session receives, on top of the header the gprime:// handler sends. */

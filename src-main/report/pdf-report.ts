@@ -22,6 +22,9 @@ const QUANTITY_COLUMNS = (first: string): TableColumn[] => [
   { header: 'Unit', width: 0.12 },
 ];
 
+/** The title block; its value column holds a 64-digit SHA-256 on one line on A4 and Letter. */
+export const TITLE_COLUMNS: TableColumn[] = [{ header: 'Title block', width: 0.21 }, { header: '', width: 0.79 }];
+
 const quantityRow = (q: QuantityRow) => [q.name, q.description, q.shown, q.shownUnit];
 
 function documentDate(text: string): Date {
@@ -93,7 +96,7 @@ export async function buildPdf(model: ReportModel, charts: ReadonlyMap<string, C
   const w = new PdfWriter(doc, fonts, model.units === 'us' ? LETTER : A4);
   w.text(model.title, { size: 18, bold: true, after: 2 });
   w.text(model.subtitle, { size: 12, color: MUTED, after: 10 });
-  w.table([{ header: 'Title block', width: 0.26 }, { header: '', width: 0.74 }], model.titleBlock.map((r) => [r.label, r.value]), 9);
+  w.table(TITLE_COLUMNS, model.titleBlock.map((r) => [r.label, r.value]), 9);
   w.box(model.cautions[0]);
   w.heading('Contents', 2, 40);
   const toc: { entry: ReportModel['contents'][number]; at: Reserved }[] = model.contents.map((entry) => ({ entry, at: w.reserveLine(10) }));

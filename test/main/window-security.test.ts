@@ -79,9 +79,30 @@ describe('the workspace window', () => {
     }
     expect(wc.openHandler({ url: 'https://example.org/' })).toEqual({ action: 'deny' });
     const callback = vi.fn();
-    wc.permissionRequest(wc, 'media', callback);
+    wc.permissionRequest(wc, 'media', callback, { requestingUrl: APP_URL, isMainFrame: true });
     expect(callback).toHaveBeenCalledWith(false);
-    expect(wc.permissionCheck(wc, 'clipboard-read')).toBe(false);
+    expect(wc.permissionCheck(wc, 'clipboard-read', 'gprime://app/')).toBe(false);
+  });
+
+  it('grants clipboard writing (Copy image, Copy table) to the app\'s own pages and nothing else', () => {
+    createMainWindow('/p.cjs');
+    const wc = h.windows[0].webContents;
+    const asked = (permission: string, requestingUrl?: string) => {
+      const callback = vi.fn();
+      wc.permissionRequest(wc, permission, callback, requestingUrl === undefined ? undefined : { requestingUrl, isMainFrame: true });
+      return callback.mock.calls[0][0];
+    };
+    expect(asked('clipboard-sanitized-write', APP_URL)).toBe(true);
+    expect(wc.permissionCheck(wc, 'clipboard-sanitized-write', 'gprime://app/')).toBe(true);
+    expect(wc.permissionCheck(wc, 'clipboard-sanitized-write', 'gprime://app')).toBe(true);
+    // reading the clipboard, other permissions, other origins and a missing origin stay denied
+    expect(asked('clipboard-read', APP_URL)).toBe(false);
+    expect(asked('notifications', APP_URL)).toBe(false);
+    expect(asked('clipboard-sanitized-write', 'https://example.org/')).toBe(false);
+    expect(asked('clipboard-sanitized-write', 'gprime://other/index.html')).toBe(false);
+    expect(asked('clipboard-sanitized-write')).toBe(false);
+    expect(wc.permissionCheck(wc, 'clipboard-sanitized-write', 'file:///')).toBe(false);
+    expect(wc.permissionCheck(wc, 'clipboard-sanitized-write', '')).toBe(false);
   });
 
   it('asks before discarding unsaved changes and closes only when the user agrees', () => {

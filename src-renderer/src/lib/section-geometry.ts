@@ -58,3 +58,38 @@ export interface PlacedMark {
   /** why the result lies outside its method's validity (drawn dashed) */
   outside: string[];
 }
+
+/** One row of a basin's outline: the width at `depth` [m] as a fraction of the surface width. */
+export interface BasinWidth {
+  depth: number;
+  fraction: number;
+}
+
+/**
+ * Schematic cross-section of a basin from its area–depth (hypsographic) table, down to the bed at
+ * `bedDepth` [m]. Our choice, stated: the plan outline at each depth is taken as a scaled copy of the
+ * surface outline, so the width at depth d is the surface width times √(A(d)/A(0)), and the section is
+ * drawn symmetric about its centre line. It shows how the basin narrows with depth; it is not a surveyed
+ * section. Between rows the width follows the straight line between them; below the last row the width
+ * is held down to the bed. Returns undefined (the caller draws a flat bed) when the table is not usable:
+ * fewer than two rows, the first not at the surface, depths not increasing, an area negative or not finite,
+ * or no area at the surface.
+ */
+export function basinWidths(table: readonly { depth: number; area: number }[], bedDepth: number): BasinWidth[] | undefined {
+  if (table.length < 2 || !(bedDepth > 0) || table[0].depth !== 0 || !(table[0].area > 0)) return undefined;
+  if (table.some((r, i) => !Number.isFinite(r.area) || r.area < 0 || !Number.isFinite(r.depth) || (i > 0 && !(r.depth > table[i - 1].depth)))) return undefined;
+  const rows = table.map((r) => ({ depth: r.depth, fraction: Math.sqrt(r.area / table[0].area) }));
+  const above = rows.filter((r) => r.depth < bedDepth);
+  const next = rows[above.length];
+  if (!next) return [...above, { depth: bedDepth, fraction: above[above.length - 1].fraction }];
+  const prev = above[above.length - 1];
+  const t = (bedDepth - prev.depth) / (next.depth - prev.depth);
+  return [...above, { depth: bedDepth, fraction: prev.fraction + t * (next.fraction - prev.fraction) }];
+}
+
+/** Polygon "x,y …" of the water in a basin outline, centred on `cx`, `halfWidth` px at the surface. */
+export function basinPolygon(widths: readonly BasinWidth[], cx: number, halfWidth: number, sy: (d: number) => number): string {
+  const left = widths.map((w) => `${(cx - w.fraction * halfWidth).toFixed(1)},${sy(w.depth).toFixed(1)}`);
+  const right = widths.map((w) => `${(cx + w.fraction * halfWidth).toFixed(1)},${sy(w.depth).toFixed(1)}`).reverse();
+  return [...left, ...right].join(' ');
+}

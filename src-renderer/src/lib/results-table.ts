@@ -1,0 +1,33 @@
+import type { EstimateOutcome } from '../../../shared-core/site/assess';
+import type { ResultValue } from '../../../shared-core/calc/types';
+import type { UnitSystem } from '../../../shared-core/units/units';
+import { SCREENING_CAUTION } from '../../../shared-core/core/caution';
+import { showQuantity, words } from './format';
+
+/** Tabs and line breaks would split a spreadsheet cell: they become spaces. */
+const cell = (s: string): string => s.replace(/[\t\r\n]+/g, ' ').trim();
+
+function rows(values: Record<string, ResultValue>, system: UnitSystem): string[] {
+  return Object.entries(values).map(([name, v]) => {
+    if (typeof v.value !== 'number') return [words(name), cell(v.value), ''].join('\t');
+    const shown = showQuantity(v.value, v.unit, system);
+    return [words(name), shown.text, shown.unit].map(cell).join('\t');
+  });
+}
+
+/**
+ * An estimate's results and inputs as tab-separated text that pastes into a spreadsheet: one
+ * name / value / unit row per quantity, in the display units and digits the workspace shows, then its
+ * warnings, method, sources and the screening caution, so a pasted table never loses them.
+ */
+export function resultsTableText(o: EstimateOutcome, system: UnitSystem, methodTitle = ''): string {
+  const where = [o.feature?.name, o.condition?.name].filter(Boolean).join(' · ');
+  const lines = [[cell(o.title), cell(where)].join('\t'), ['result', 'value', 'unit'].join('\t'), ...rows(o.results, system)];
+  if (o.status === 'error') lines.push(['cannot compute', cell(o.error ?? '')].join('\t'));
+  lines.push('', ['input', 'value', 'unit'].join('\t'), ...rows(o.inputs, system), '');
+  lines.push(...o.warnings.map((w) => ['warning', cell(w)].join('\t')));
+  lines.push(['method', cell(methodTitle ? `${o.method}: ${methodTitle}` : o.method)].join('\t'));
+  lines.push(...o.sources.map((s) => ['source', cell(s)].join('\t')));
+  lines.push(['caution', SCREENING_CAUTION].join('\t'));
+  return `${lines.join('\n')}\n`;
+}
