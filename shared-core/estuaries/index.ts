@@ -2,3 +2,4 @@ export * from './salt-wedge';
 export * from './richardson';
 export * from './exchange';
 export * from './lock';
+export * from './exchange-net-flow';

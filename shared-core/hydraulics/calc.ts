@@ -1,6 +1,13 @@
 import { num, text } from '../calc/resolve';
 import { arg, type CalcMethod } from '../calc/types';
+import { InputError } from '../core/errors';
+import { positive } from '../core/range';
 import { STRATIFIED_OBSTACLE_FLOW, stratifiedObstacleFlow } from './obstacle';
+import { CURTAIN_WALL_WITHDRAWAL, INTERNAL_HYDRAULIC_JUMP, curtainWallWithdrawalMax, internalHydraulicJump } from './two-layer';
+import { INTERNAL_JUMP_FINITE_DEPTH, internalJumpFiniteDepth } from './jump-finite-depth';
+import { WEIR_SKIMMING_WITHDRAWAL, weirSkimmingWithdrawalMax } from './weir-withdrawal';
+
+const G_PRIME = { kind: 'number', name: 'g_prime', unit: 'm/s2', description: 'reduced gravity between the layers', range: { min: 1e-6, max: 20 } } as const;
 
 /** The hydraulics methods of `gprime calc`. */
 export const hydraulicsCalcMethods: CalcMethod[] = [
@@ -26,6 +33,59 @@ export const hydraulicsCalcMethods: CalcMethod[] = [
       return {
         results: { froude: num(r.froude, '1'), lee_wavelength: num(r.leeWavelength, 'm'), blocked: text(r.blocked ? 'yes' : 'no') },
         warnings, sources: [STRATIFIED_OBSTACLE_FLOW.source],
+      };
+    },
+  },
+  {
+    id: 'internal-jump',
+    title: 'Internal hydraulic jump of a dense bottom layer (deep upper layer, or a channel of finite depth)',
+    topic: 'hydraulics',
+    params: [
+      { kind: 'number', name: 'discharge_per_width', unit: 'm2/s', description: 'discharge per unit width q of the dense layer', range: { min: 1e-9, max: 1e4 } },
+      { kind: 'number', name: 'upstream_thickness', unit: 'm', description: 'thickness y1 of the fast (supercritical) dense layer before the jump', range: { min: 1e-3, max: 11000 } },
+      G_PRIME,
+      { kind: 'number', name: 'total_depth', unit: 'm', description: 'total depth D of the channel; if given, the finite-depth jump with a rigid lid is used', optional: true, range: { min: 2e-3, max: 1e7 } },
+      { kind: 'number', name: 'upper_discharge', unit: 'm2/s', description: 'upper-layer discharge per width, positive with the dense layer (finite depth only; default −q: return flow of a closed channel, no net flow)', optional: true, range: { min: -1e4, max: 1e4 } },
+    ],
+    results: [
+      { name: 'downstream_thickness', unit: 'm', description: 'conjugate thickness y2 (energy conserved in the upper layer when D is given)' },
+      { name: 'downstream_thickness_alt', unit: 'm', description: 'y2 with the interfacial-pressure closure (equal to y2 for a deep upper layer)' },
+      { name: 'head_loss', unit: 'm', description: 'energy lost per unit dense-layer discharge, in reduced-gravity head' },
+      { name: 'froude', unit: '1', description: 'upstream layer Froude number q/√(g′y1³)' },
+    ],
+    run(a) {
+      const [q, y1, g, D, qu] = [arg.num(a, 'discharge_per_width'), arg.num(a, 'upstream_thickness'), arg.num(a, 'g_prime'), arg.optNum(a, 'total_depth'), arg.optNum(a, 'upper_discharge')];
+      if (D === undefined && qu !== undefined) throw new InputError('upper_discharge', qu, 'm2/s', 'only with total_depth', 'an upper-layer discharge needs the total depth of the channel (total_depth)');
+      const deep = D === undefined ? internalHydraulicJump(q, y1, g) : undefined;
+      const r = deep ? { ...deep, downstreamThicknessInterfacialPressure: deep.downstreamThickness } : internalJumpFiniteDepth(q, y1, g, D!, qu);
+      return {
+        results: { downstream_thickness: num(r.downstreamThickness, 'm'), downstream_thickness_alt: num(r.downstreamThicknessInterfacialPressure, 'm'), head_loss: num(r.headLoss, 'm'), froude: num(r.froude, '1') },
+        warnings: r.warnings, sources: [(deep ? INTERNAL_HYDRAULIC_JUMP : INTERNAL_JUMP_FINITE_DEPTH).source],
+      };
+    },
+  },
+  {
+    id: 'skimming-withdrawal',
+    title: 'Largest discharge of one layer under a curtain wall or over a weir before the other layer is drawn',
+    topic: 'hydraulics',
+    params: [
+      G_PRIME,
+      { kind: 'choice', name: 'structure', description: 'curtain-wall: dense lower layer drawn under a wall; weir: light upper layer skimmed over a crest', choices: ['curtain-wall', 'weir'] },
+      { kind: 'number', name: 'opening', unit: 'm', description: 'curtain wall: lip height above the bed; weir: crest depth below the upstream water surface', range: { min: 1e-3, max: 11000 } },
+      { kind: 'number', name: 'interface_distance', unit: 'm', description: 'upstream interface: height above the bed (curtain wall) or depth below the surface (weir); larger than the opening', range: { min: 1e-3, max: 11000 } },
+      { kind: 'number', name: 'width', unit: 'm', description: 'width of the opening across the flow', default: 1, range: { ...positive, max: 1e5 } },
+    ],
+    results: [
+      { name: 'max_discharge_per_width', unit: 'm2/s', description: 'largest discharge per width that takes water of the near layer only' },
+      { name: 'max_discharge', unit: 'm3/s', description: 'the same times the width' },
+    ],
+    run(a) {
+      const weir = arg.text(a, 'structure') === 'weir';
+      const [g, opening, interfaceDistance, width] = [arg.num(a, 'g_prime'), arg.num(a, 'opening'), arg.num(a, 'interface_distance'), arg.num(a, 'width')];
+      const r = weir ? weirSkimmingWithdrawalMax(g, opening, interfaceDistance) : curtainWallWithdrawalMax(g, opening, interfaceDistance);
+      return {
+        results: { max_discharge_per_width: num(r.value, 'm2/s'), max_discharge: num(r.value * width, 'm3/s') },
+        warnings: r.warnings, sources: [(weir ? WEIR_SKIMMING_WITHDRAWAL : CURTAIN_WALL_WITHDRAWAL).source],
       };
     },
   },

@@ -1,2 +1,4 @@
 export * from './two-layer';
 export * from './obstacle';
+export * from './jump-finite-depth';
+export * from './weir-withdrawal';

@@ -1,11 +1,9 @@
-import { InputError } from '../core/errors';
-import { requireInRange, positive } from '../core/range';
-import { solveOde, type OdeEvent, type OdeStatus } from '../numerics/ode';
-import { GRAVITY } from '../quantities';
-import { ambientFunctions, type AmbientWater, type Current } from './ambient';
-import { jetDerivative, localJet, CENTRELINE_TO_AVERAGE, type ClosureContext, type JetState } from './closure';
-import { jetLengthScales, type JetLengthScales } from './length-scales';
+import type { OdeStatus } from '../numerics/ode';
+import type { AmbientWater, Current } from './ambient';
+import { localJet, CENTRELINE_TO_AVERAGE, type JetState } from './closure';
+import type { JetLengthScales } from './length-scales';
 import { describeOutcome, pathWarnings, type JetOutcome } from './outcome';
+import { prepareJetRun, traceStretch, type JetRun, type Stretch } from './trace';
 
 export interface BuoyantJetInput {
   /** port diameter [m] */
@@ -95,9 +93,6 @@ export interface JetTrajectory {
   warnings: string[];
 }
 
-const IDX = ['x', 'y', 'z', 'Q', 'Mx', 'My', 'Mz', 'R', 'Th'] as const;
-const deg = Math.PI / 180;
-
 /**
  * Trajectory and dilution of a round buoyant jet (top-hat integral model; closure in `BUOYANT_JET`).
  * Integrates in s/D with Dormand–Prince 5(4) (numerics/ode.ts) on scaled fluxes; continues through a
@@ -107,69 +102,22 @@ const deg = Math.PI / 180;
  * @validity Fr ≥ 1; free jet (no boundary attachment); Boussinesq (|Δρ|/ρ ≪ 1)
  */
 export function buoyantJetTrajectory(input: BuoyantJetInput): JetTrajectory {
-  const D = requireInRange('diameter', input.diameter, 'm', { ...positive, max: 20 });
-  const U = requireInRange('velocity', input.velocity, 'm/s', { ...positive, max: 100 });
-  const phi = requireInRange('angle', input.angle, 'deg', { min: -90, max: 90 }) * deg;
-  const theta = requireInRange('horizontal_angle', input.horizontalAngle ?? 0, 'deg', { min: -180, max: 180 }) * deg;
-  const H = requireInRange('port_depth', input.portDepth, 'm', { ...positive, max: 11000 });
-  const rhoE = requireInRange('effluent_density', input.effluentDensity, 'kg/m3', { min: 900, max: 1300 });
-  const amb = ambientFunctions(input.ambient, input.current ?? 0, input.bedDepth);
-  // a profile or water depth shallower than the port means the port sits on the bed
-  const bed = input.bedDepth === undefined && amb.bedDepth !== undefined ? Math.max(amb.bedDepth, H) : amb.bedDepth;
-  if (bed !== undefined && bed < H) throw new InputError('bed_depth', bed, 'm', `≥ port_depth (${H} m)`, 'the bed must not be above the port');
-  const spacing = input.portSpacing === undefined ? undefined : requireInRange('port_spacing', input.portSpacing, 'm', positive);
-  const tE = input.effluentTemperature === undefined ? undefined : requireInRange('effluent_temperature', input.effluentTemperature, 'degC', { min: -3, max: 100 });
-  const sMax = input.maxPath === undefined ? Math.max(100 * D, 50 * H) : requireInRange('max_path', input.maxPath, 'm', positive);
+  const run = prepareJetRun(input);
+  return assembleTrajectory(run, [traceStretch(run, { geometry: 'round', start: run.start, sStart: 0 })], input.ambient);
+}
 
-  const rhoRef = amb.density(H), tRef = amb.temperature?.(H) ?? 0;
-  const ctx: ClosureContext = { portDepth: H, rhoRef, tRef, density: amb.density, temperature: amb.temperature, current: amb.current };
-  const Q0 = (Math.PI * D * D * U) / 4, M0 = Q0 * U;
-  const rhoScale = Math.max(Math.abs(rhoE - rhoRef), 0.01), tScale = tE === undefined ? 1 : Math.max(Math.abs(tE - tRef), 0.01);
-  const scale = [D, D, D, Q0, M0, M0, M0, Q0 * rhoScale, Q0 * tScale];
-  const toState = (v: readonly number[]): JetState => Object.fromEntries(IDX.map((k, i) => [k, v[i] * scale[i]])) as unknown as JetState;
-  const e0 = [Math.cos(phi) * Math.cos(theta), Math.cos(phi) * Math.sin(theta), Math.sin(phi)];
-  const s0: JetState = { x: 0, y: 0, z: 0, Q: Q0, Mx: M0 * e0[0], My: M0 * e0[1], Mz: M0 * e0[2], R: Q0 * (rhoE - rhoRef), Th: tE === undefined ? 0 : Q0 * (tE - tRef) };
-  const rhs = (_t: number, v: readonly number[]) => {
-    const ds = jetDerivative(toState(v), ctx);
-    return IDX.map((k, i) => (ds[k] * D) / scale[i]);
+/**
+ * Joins stretches (a round jet, then possibly a merged plane plume) into one trajectory: path columns, events, outcome
+ * and warnings. Dilution refers to each stretch's own reference flux (Q0, or Q0/spacing per unit length), so it is
+ * continuous where plumes merge. After merging the round-plume centreline/average ratio is kept (see DIFFUSER_PLUME).
+ */
+export function assembleTrajectory(run: JetRun, stretches: readonly Stretch[], ambient: AmbientWater): JetTrajectory {
+  const { H, tE, tRef, amb } = run;
+  const pointAt = (st: Stretch, state: JetState, s: number) => {
+    const L = localJet(state, st.ctx), Sa = state.Q / st.qRef;
+    return { s, x: state.x, y: state.y, z: state.z, depth: H - state.z, horizontalDistance: Math.hypot(state.x, state.y), radius: L.b, dilutionCentreline: Math.max(1, Sa * CENTRELINE_TO_AVERAGE), dilutionAverage: Sa, L, state };
   };
-  const gPort = (-GRAVITY * (rhoE - rhoRef)) / rhoRef;
-  const scales = jetLengthScales({ diameter: D, velocity: U, gPrime: Math.max(-5, Math.min(5, gPort)), current: amb.current(H) });
-  const returnTerminal = bed === undefined || bed === H;
-  const edge = (v: readonly number[], sign: number) => { const s = toState(v), L = localJet(s, ctx); return s.z + sign * L.b * Math.sqrt(Math.max(0, 1 - L.ez * L.ez)); };
-  const events: OdeEvent[] = [
-    { name: 'surface contact', g: (_t, v) => v[2] * D - H, direction: 'rising', terminal: true },
-    { name: 'return to port level', g: (_t, v) => v[2], direction: 'falling', terminal: returnTerminal },
-    { name: 'maximum rise', g: (_t, v) => v[6], direction: 'falling', terminal: true },
-    { name: 'lowest point', g: (_t, v) => v[6], direction: 'rising', terminal: true },
-    { name: 'neutral buoyancy', g: (_t, v) => localJet(toState(v), ctx).densityExcess, direction: 'either' },
-    { name: 'momentum spent', g: (_t, v) => Math.hypot(v[4], v[5], v[6]) / v[3] - 1e-3, direction: 'falling', terminal: true },
-    { name: 'edge reaches surface', g: (_t, v) => edge(v, 1) - H, direction: 'rising' },
-  ];
-  if (bed !== undefined && bed > H) {
-    events.push({ name: 'bed contact', g: (_t, v) => v[2] * D + (bed - H), direction: 'falling', terminal: true });
-    events.push({ name: 'edge reaches bed', g: (_t, v) => edge(v, -1) + (bed - H), direction: 'falling' });
-  }
-  if (spacing !== undefined) events.push({ name: 'plumes merge', g: (_t, v) => 2 * localJet(toState(v), ctx).b - spacing, direction: 'rising' });
-
-  // integrate in segments: a turning point ends the path only when the jet is trapped (neutral buoyancy passed)
-  const ts: number[] = [], ys: number[][] = [], fired: { name: string; t: number; y: number[] }[] = [];
-  let start = 0, y0: number[] = IDX.map((k, i) => s0[k] / scale[i]), evaluations = 0, status: OdeStatus = 'completed', message = '';
-  for (let seg = 0; seg < 8; seg++) {
-    const sol = solveOde(rhs, start, y0, sMax / D, { rtol: 1e-8, atol: 1e-10, h0: 0.01, maxSteps: 20000, events });
-    evaluations += sol.evaluations; status = sol.status; message = sol.message;
-    const skip = ts.length ? 1 : 0;
-    ts.push(...sol.t.slice(skip)); ys.push(...sol.y.slice(skip)); fired.push(...sol.events);
-    const last = sol.events[sol.events.length - 1];
-    const turning = sol.status === 'terminal-event' && (last.name === 'maximum rise' || last.name === 'lowest point');
-    if (!turning || fired.some((e) => e.name === 'neutral buoyancy')) break;
-    start = last.t; y0 = last.y;
-  }
-  const pointAt = (v: readonly number[], t: number) => {
-    const s = toState(v), L = localJet(s, ctx), Sa = s.Q / Q0;
-    return { s: t * D, x: s.x, y: s.y, z: s.z, depth: H - s.z, horizontalDistance: Math.hypot(s.x, s.y), radius: L.b, dilutionCentreline: Math.max(1, Sa * CENTRELINE_TO_AVERAGE), dilutionAverage: Sa, L, state: s };
-  };
-  const pts = ys.map((v, i) => pointAt(v, ts[i]));
+  const pts = stretches.flatMap((st, k) => st.states.map((v, i) => pointAt(st, v, st.s[i])).slice(k > 0 ? 1 : 0));
   const path: JetPath = {
     s: pts.map((p) => p.s), x: pts.map((p) => p.x), y: pts.map((p) => p.y), z: pts.map((p) => p.z), depth: pts.map((p) => p.depth),
     horizontalDistance: pts.map((p) => p.horizontalDistance), radius: pts.map((p) => p.radius),
@@ -177,15 +125,21 @@ export function buoyantJetTrajectory(input: BuoyantJetInput): JetTrajectory {
     densityExcess: pts.map((p) => p.L.densityExcess),
     ...(tE !== undefined && amb.temperature ? { temperatureExcess: pts.map((p) => tRef + p.state.Th / p.state.Q - amb.temperature!(p.depth)) } : {}),
   };
-  const jetEvents: JetEvent[] = fired.map((e) => {
-    const { L: _l, state: _s, ...p } = pointAt(e.y, e.t);
+  const events: JetEvent[] = stretches.flatMap((st) => st.fired.map((e) => {
+    const { L: _l, state: _s, ...p } = pointAt(st, e.state, e.s);
     return { kind: e.name as JetEventKind, ...p };
-  });
-  if (status === 'terminal-event') jetEvents.push({ ...jetEvents[jetEvents.length - 1], kind: 'end of near field' });
+  }));
+  const last = stretches[stretches.length - 1];
+  const status = last.status, message = last.message;
+  if (status === 'terminal-event') events.push({ ...events[events.length - 1], kind: 'end of near field' });
   const maxRise = Math.max(...path.z);
-  const outcome = describeOutcome(jetEvents, status, maxRise, path, bed === undefined ? undefined : bed - H);
-  const warnings = [...amb.warnings, ...scales.warnings, ...pathWarnings({ events: jetEvents, status, message, scales, angleDeg: input.angle, dense: rhoE > rhoRef, current: amb.current(H), velocity: U, profileBottom: profileBottom(input.ambient), portDepth: H })];
-  return { status, message, evaluations, path, events: jetEvents, outcome: outcome.kind, outcomeText: outcome.text, maxRise, scales, warnings };
+  const outcome = describeOutcome(events, status, maxRise, path, run.bed === undefined ? undefined : run.bed - H);
+  const warnings = [...amb.warnings, ...run.scales.warnings, ...pathWarnings({
+    events, status, message, scales: run.scales, angleDeg: run.angleDeg, dense: run.rhoE > run.rhoRef, current: amb.current(H), velocity: run.U,
+    profileBottom: profileBottom(ambient), portDepth: H, merged: stretches.some((st) => st.geometry === 'plane'),
+  })];
+  const evaluations = stretches.reduce((n, st) => n + st.evaluations, 0);
+  return { status, message, evaluations, path, events, outcome: outcome.kind, outcomeText: outcome.text, maxRise, scales: run.scales, warnings };
 }
 
 function profileBottom(a: AmbientWater): number | undefined {

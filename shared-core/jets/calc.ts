@@ -6,8 +6,9 @@ import { JET_LENGTH_SCALES, jetLengthScales } from './length-scales';
 import { BUOYANT_JET } from './closure';
 import { buoyantJetTrajectory, JET_PATH_COLUMNS, type BuoyantJetInput, type JetPath, type JetTrajectory } from './buoyant-jet';
 import { LINE_PLUME_RSB1989, linePlumeRobertsSnyderBaumgartner1989 } from './line-plume';
+import { DIFFUSER_PLUME, diffuserPlume, type DiffuserInput } from './diffuser';
 import { REQUIRED_DILUTION, requiredDilution } from '../mixing-zone/required-dilution';
-import type { ResultValue, Series } from '../calc/types';
+import type { ParamSpec, ResultValue, Series } from '../calc/types';
 
 const lengthScaleResults = [
   ['l_q', 'lQ', 'Q/√M: distance over which the port geometry matters'],
@@ -33,6 +34,17 @@ export function buoyantJetInputFromArgs(a: CalcArgs): BuoyantJetInput {
   return input;
 }
 
+/** The merged-diffuser input from resolved diffuser-plume arguments (shared by the calc method and the compliance table). */
+export function diffuserInputFromArgs(a: CalcArgs): DiffuserInput {
+  const ports = arg.optNum(a, 'ports'), length = arg.optNum(a, 'diffuser_length');
+  let spacing = arg.optNum(a, 'spacing');
+  if (spacing === undefined && length !== undefined) {
+    if (ports === undefined || ports < 2) throw new InputError('ports', ports ?? '(missing)', '1', '≥ 2 with diffuser_length', 'the spacing follows from diffuser_length only with the number of ports (at least 2)');
+    spacing = length / (ports - 1);
+  }
+  return { ...buoyantJetInputFromArgs(a), spacing, ports, currentAngle: arg.optNum(a, 'current_angle') };
+}
+
 /** Chart curves of a trajectory: the centreline in the vertical section and dilution along the path. */
 export function jetPathSeries(t: JetTrajectory): Series[] {
   const col = (k: keyof JetPath) => ({ ...JET_PATH_COLUMNS[k], values: [...(t.path[k] ?? [])] });
@@ -41,6 +53,18 @@ export function jetPathSeries(t: JetTrajectory): Series[] {
     { title: 'Dilution along the path', x: col('horizontalDistance'), y: [col('dilutionCentreline'), col('dilutionAverage')], caption: 'Centreline and flux-average dilution against horizontal distance from the port' },
   ];
 }
+
+/** Parameters of one port and its ambient, shared by buoyant-jet and diffuser-plume. */
+const jetPortParams: ParamSpec[] = [
+  { kind: 'number', name: 'diameter', unit: 'm', description: 'port diameter', range: { ...positive, max: 20 } },
+  { kind: 'number', name: 'velocity', unit: 'm/s', description: 'exit velocity', range: { ...positive, max: 100 } },
+  { kind: 'number', name: 'angle', unit: 'deg', description: 'vertical angle above horizontal', range: { min: -90, max: 90 } },
+  { kind: 'number', name: 'port_depth', unit: 'm', description: 'port depth below the surface', range: { ...positive, max: 11000 } },
+  { kind: 'number', name: 'effluent_density', unit: 'kg/m3', description: 'effluent density', range: { min: 900, max: 1300 } },
+  { kind: 'number', name: 'ambient_density', unit: 'kg/m3', description: 'uniform ambient density (or give file)', optional: true, range: { min: 900, max: 1300 } },
+  { kind: 'profile', name: 'file', description: 'CSV profile of the ambient (or give ambient_density); its deepest sample is taken as the bed', optional: true },
+  { kind: 'number', name: 'current', unit: 'm/s', description: 'current speed, taken along the jet direction (co-flowing: the lower, cautious near-field dilution)', default: 0, range: { ...nonNegative, max: 10 } },
+];
 
 /** Runs the buoyant-jet model for the CLI and reports the headline results. */
 function runBuoyantJet(a: CalcArgs): CalcOutput {
@@ -55,6 +79,26 @@ function runBuoyantJet(a: CalcArgs): CalcOutput {
   if (t.outcome === 'surfaces' && surf) results.surface_dilution = num(surf.dilutionCentreline, '1');
   results.outcome = text(t.outcomeText);
   return { results, warnings: t.warnings, sources: [BUOYANT_JET.source], series: jetPathSeries(t) };
+}
+
+/** Runs the merged-diffuser model for the CLI: regime, merging point, rise and governing dilution. */
+function runDiffuserPlume(a: CalcArgs): CalcOutput {
+  const r = diffuserPlume(diffuserInputFromArgs(a));
+  const results: Record<string, ResultValue> = { regime: text(r.regimeText) };
+  if (r.merge) {
+    results.merge_height = num(r.merge.z, 'm');
+    results.merge_distance = num(r.merge.horizontalDistance, 'm');
+    results.merge_dilution = num(r.merge.dilutionCentreline, '1');
+  }
+  Object.assign(results, { rise_height: num(r.riseHeight, 'm'), dilution: num(r.dilution, '1'), dilution_average: num(r.dilutionAverage, '1') });
+  results.single_port_dilution = num(r.isolated.path.dilutionCentreline[r.isolated.path.dilutionCentreline.length - 1], '1');
+  results.outcome = text((r.governing === 'merged' ? r.merged : r.isolated).outcomeText);
+  const single = r.isolated.path;
+  const series: Series[] = [...jetPathSeries(r.merged), {
+    title: 'Single-port dilution', x: { ...JET_PATH_COLUMNS.horizontalDistance, values: [...single.horizontalDistance] },
+    y: [{ ...JET_PATH_COLUMNS.dilutionCentreline, values: [...single.dilutionCentreline] }], caption: 'Centreline dilution of one port without neighbours, for comparison',
+  }];
+  return { results, warnings: r.warnings, sources: [DIFFUSER_PLUME.source, BUOYANT_JET.source], series };
 }
 
 /** The jets and mixing-zone methods of `gprime calc`. */
@@ -88,16 +132,7 @@ export const jetCalcMethods: CalcMethod[] = [
     id: 'buoyant-jet',
     title: BUOYANT_JET.title,
     topic: 'jets',
-    params: [
-      { kind: 'number', name: 'diameter', unit: 'm', description: 'port diameter', range: { ...positive, max: 20 } },
-      { kind: 'number', name: 'velocity', unit: 'm/s', description: 'exit velocity', range: { ...positive, max: 100 } },
-      { kind: 'number', name: 'angle', unit: 'deg', description: 'vertical angle above horizontal', range: { min: -90, max: 90 } },
-      { kind: 'number', name: 'port_depth', unit: 'm', description: 'port depth below the surface', range: { ...positive, max: 11000 } },
-      { kind: 'number', name: 'effluent_density', unit: 'kg/m3', description: 'effluent density', range: { min: 900, max: 1300 } },
-      { kind: 'number', name: 'ambient_density', unit: 'kg/m3', description: 'uniform ambient density (or give file)', optional: true, range: { min: 900, max: 1300 } },
-      { kind: 'profile', name: 'file', description: 'CSV profile of the ambient (or give ambient_density); its deepest sample is taken as the bed', optional: true },
-      { kind: 'number', name: 'current', unit: 'm/s', description: 'current speed, taken along the jet direction (co-flowing: the lower, cautious near-field dilution)', default: 0, range: { ...nonNegative, max: 10 } },
-    ],
+    params: jetPortParams,
     results: [
       { name: 'max_rise', unit: 'm', description: 'highest centreline point above the port' },
       { name: 'return_distance', unit: 'm', description: 'horizontal distance where the centreline falls back to port level (dense jets)' },
@@ -107,6 +142,30 @@ export const jetCalcMethods: CalcMethod[] = [
       { name: 'outcome', unit: '', description: 'how the near field ends, in words' },
     ],
     run: (a) => runBuoyantJet(a),
+  },
+  {
+    id: 'diffuser-plume',
+    title: DIFFUSER_PLUME.title,
+    topic: 'jets',
+    params: [
+      ...jetPortParams,
+      { kind: 'number', name: 'spacing', unit: 'm', description: 'port spacing along the diffuser (or give diffuser_length and ports)', optional: true, range: { ...positive, max: 1e4 } },
+      { kind: 'number', name: 'ports', unit: '1', description: 'number of ports (1: a single port)', optional: true, range: { min: 1, max: 500 } },
+      { kind: 'number', name: 'diffuser_length', unit: 'm', description: 'length from the first to the last port', optional: true, range: { ...positive, max: 1e5 } },
+      { kind: 'number', name: 'current_angle', unit: 'deg', description: 'angle between the current and the diffuser axis (90: across it, the case modelled)', optional: true, range: { min: 0, max: 90 } },
+    ],
+    results: [
+      { name: 'regime', unit: '', description: 'whether the plumes merge and which regime governs, in words' },
+      { name: 'merge_height', unit: 'm', description: 'height above the ports where neighbouring plumes merge, negative below (omitted when they do not)' },
+      { name: 'merge_distance', unit: 'm', description: 'horizontal distance from the ports where they merge' },
+      { name: 'merge_dilution', unit: '1', description: 'centreline dilution where they merge' },
+      { name: 'rise_height', unit: 'm', description: 'highest centreline point above the ports (governing path; 0 for a sinking plume)' },
+      { name: 'dilution', unit: '1', description: 'governing centreline dilution at the end of the near field: the smaller of merged and single-port' },
+      { name: 'dilution_average', unit: '1', description: 'flux-average dilution there' },
+      { name: 'single_port_dilution', unit: '1', description: 'centreline dilution of one port without neighbours, at the end of its near field' },
+      { name: 'outcome', unit: '', description: 'how the near field ends, in words' },
+    ],
+    run: (a) => runDiffuserPlume(a),
   },
   {
     id: 'line-plume',

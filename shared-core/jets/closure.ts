@@ -20,6 +20,24 @@ export const ENTRAINMENT = {
 /** Top-hat local Richardson number of a pure plume, Ri_p = 8α_p/5 (MTT 1956 similarity solution). */
 export const RICHARDSON_PLUME = (8 * ENTRAINMENT.alphaPlume) / 5;
 
+/**
+ * Entrainment of a plane (line) jet or plume per unit length, in TOP-HAT variables (half-width b, q = 2bu);
+ * Gaussian coefficients converted with the same √2 (b_top-hat = √(π/2) b_Gauss, u_top-hat = u_max/√2).
+ */
+export const PLANE_ENTRAINMENT = {
+  /** Gaussian plane-jet coefficient 0.052 (Fischer et al. 1979, Table 9.1; from memory) → top-hat */
+  alphaJet: Math.SQRT2 * 0.052,
+  /** Gaussian plane-plume coefficient 0.11 (consensus value of Richardson & Hunt 2022, J. Fluid Mech. 934, A11, 0.11 ± 15 %;
+   *  taken as the Gaussian-profile value, which also follows from the plane-plume spreading rate of Fischer et al. 1979; from memory) → top-hat */
+  alphaPlume: Math.SQRT2 * 0.11,
+} as const;
+
+/** Top-hat local Richardson number of a pure plane plume, Ri_p = α_p (similarity solution u³ = f/(2α)). */
+export const RICHARDSON_PLANE_PLUME = PLANE_ENTRAINMENT.alphaPlume;
+
+/** Jet geometry: a round jet from one port, or a plane (line) plume per unit length of a diffuser after its plumes merge. */
+export type JetGeometry = 'round' | 'plane';
+
 /** Centreline dilution = flux-average dilution × λ²/(1+λ²) for Gaussian profiles of width ratio λ. */
 export const CENTRELINE_TO_AVERAGE = (ENTRAINMENT.lambda ** 2) / (1 + ENTRAINMENT.lambda ** 2);
 
@@ -58,6 +76,8 @@ export interface JetState {
 
 /** The ambient seen at one height, and the constants of a run. */
 export interface ClosureContext {
+  /** default 'round'; 'plane' takes the fluxes per unit length and entrains on both faces, without crossflow (forced) entrainment */
+  geometry?: JetGeometry;
   portDepth: number;
   rhoRef: number;
   tRef: number;
@@ -82,7 +102,8 @@ export function localJet(s: JetState, c: ClosureContext): JetLocal {
   const m = Math.hypot(s.Mx, s.My, s.Mz);
   const u = m / s.Q;
   const ex = s.Mx / m, ey = s.My / m, ez = s.Mz / m;
-  const b = Math.sqrt(s.Q / (Math.PI * u));
+  const plane = c.geometry === 'plane';
+  const b = plane ? s.Q / (2 * u) : Math.sqrt(s.Q / (Math.PI * u));
   const d = c.portDepth - s.z;
   const densityExcess = c.rhoRef + s.R / s.Q - c.density(d);
   const gPrime = (-GRAVITY * densityExcess) / c.rhoRef;
@@ -90,9 +111,10 @@ export function localJet(s: JetState, c: ClosureContext): JetLocal {
   const shear = u - ua * ex;
   const cross = ua * Math.sqrt(Math.max(0, 1 - ex * ex));
   const ri = (gPrime * b * ez) / Math.max(shear * shear, 1e-30);
-  const f = Math.min(1, Math.max(0, ri / RICHARDSON_PLUME));
-  const alpha = ENTRAINMENT.alphaJet + (ENTRAINMENT.alphaPlume - ENTRAINMENT.alphaJet) * f;
-  const entrainment = 2 * Math.PI * b * (alpha * Math.abs(shear) + ENTRAINMENT.betaCrossflow * cross);
+  const k = plane ? PLANE_ENTRAINMENT : ENTRAINMENT;
+  const f = Math.min(1, Math.max(0, ri / (plane ? RICHARDSON_PLANE_PLUME : RICHARDSON_PLUME)));
+  const alpha = k.alphaJet + (k.alphaPlume - k.alphaJet) * f;
+  const entrainment = plane ? 2 * alpha * Math.abs(shear) : 2 * Math.PI * b * (alpha * Math.abs(shear) + ENTRAINMENT.betaCrossflow * cross);
   return { u, ex, ey, ez, b, densityExcess, gPrime, ambientCurrent: ua, entrainment };
 }
 

@@ -59,7 +59,7 @@ export function linePlumeRobertsSnyderBaumgartner1989(q: number, gPrime: number,
 /**
  * A multiport diffuser seen as a line source: discharge per unit length q = Q_port/spacing [m2/s].
  * Neighbouring round plumes merge where their width reaches the spacing (see the 'plumes merge' event of
- * buoyantJetTrajectory); beyond it the line-plume estimate applies.
+ * buoyantJetTrajectory); diffuserPlume() (diffuser.ts) follows the merged plume as a line plume from there.
  */
 export function diffuserLineSource(portDischarge: number, spacing: number): number {
   return requireInRange('port_discharge', portDischarge, 'm3/s', positive) / requireInRange('port_spacing', spacing, 'm', positive);

@@ -58,6 +58,8 @@ export interface WarningContext {
   velocity: number;
   profileBottom?: number;
   portDepth: number;
+  /** the path continues as a merged (plane) plume after the plumes merge */
+  merged?: boolean;
 }
 
 /** Warnings where the model leaves its validity along this path. */
@@ -72,7 +74,8 @@ export function pathWarnings(c: WarningContext): string[] {
   if (bedEdge) w.push(`The plume's lower edge touches the bed ${m(bedEdge.horizontalDistance)} m from the port: it may attach to the bed, which a free-jet model does not describe.`);
   if (c.dense && c.angleDeg < 15) w.push('A dense jet aimed less than 15° above horizontal close to the bed may attach to the bed (wall jet); the free-jet result may overstate its dilution.');
   const merge = find('plumes merge');
-  if (merge) w.push(`Neighbouring plumes merge ${m(merge.s)} m along the path (centreline dilution ${s(merge.dilutionCentreline)}): beyond it the single-port dilution is too high; use the line-plume estimate.`);
+  if (merge && !c.merged) w.push(`Neighbouring plumes merge ${m(merge.s)} m along the path (centreline dilution ${s(merge.dilutionCentreline)}): beyond it the single-port dilution is too high; use the merged-diffuser estimate.`);
+  if (merge && c.merged) w.push(`Neighbouring plumes merge ${m(merge.s)} m along the path (centreline dilution ${s(merge.dilutionCentreline)}); beyond it the path is that of a line plume with the merged fluxes per unit diffuser length.`);
   if (c.current > c.velocity) w.push('The current is faster than the jet: the jet is swept downstream at once and the near-field result depends mostly on the crossflow entrainment coefficient.');
   if (c.dense && c.angleDeg > 15 && c.angleDeg < 80) {
     w.push('Integral models of this kind under-predict the dilution of inclined dense jets measured in the laboratory by tens of percent (Roberts, Ferrier & Daviero 1997; Kikkert, Davidson & Nokes 2007); the dilutions here err on the low side.');

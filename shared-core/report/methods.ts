@@ -19,18 +19,24 @@ import * as waves2 from '../internal-waves/two-layer';
 import * as waves3 from '../internal-waves/basin';
 import * as hydraulics1 from '../hydraulics/obstacle';
 import * as hydraulics2 from '../hydraulics/two-layer';
+import * as estuary5 from '../estuaries/exchange-net-flow';
+import * as hydraulics3 from '../hydraulics/jump-finite-depth';
+import * as hydraulics4 from '../hydraulics/weir-withdrawal';
 import * as withdrawal1 from '../withdrawal/outflow';
 import * as withdrawal2 from '../withdrawal/blend';
 import * as withdrawal3 from '../withdrawal/measured';
 import * as withdrawal4 from '../withdrawal/layer';
 import * as withdrawal5 from '../withdrawal/two-layer';
+import * as withdrawal6 from '../withdrawal/interference';
 import * as jets1 from '../jets/length-scales';
 import * as jets2 from '../jets/closure';
 import * as jets3 from '../jets/line-plume';
+import * as jets4 from '../jets/diffuser';
 import * as inflows1 from '../inflows/underflow';
 import * as inflows2 from '../inflows/entrainment';
 import * as inflows3 from '../inflows/plunge';
 import * as mixing from '../mixing-zone/required-dilution';
+import * as uncertainty from '../uncertainty/propagate';
 
 /**
  * The MethodInfo descriptors of shared-core, collected from the modules that declare them. The calc
@@ -39,9 +45,9 @@ import * as mixing from '../mixing-zone/required-dilution';
  */
 const MODULES: readonly Record<string, unknown>[] = [
   water1, water2, water3, water4, water5, water6, profile, gravity1, gravity2, gravity3, gravity4,
-  estuary1, estuary2, estuary3, estuary4, waves1, waves2, waves3, hydraulics1, hydraulics2,
-  withdrawal1, withdrawal2, withdrawal3, withdrawal4, withdrawal5, jets1, jets2, jets3,
-  inflows1, inflows2, inflows3, mixing,
+  estuary1, estuary2, estuary3, estuary4, estuary5, waves1, waves2, waves3, hydraulics1, hydraulics2, hydraulics3, hydraulics4,
+  withdrawal1, withdrawal2, withdrawal3, withdrawal4, withdrawal5, withdrawal6, jets1, jets2, jets3, jets4,
+  inflows1, inflows2, inflows3, mixing, uncertainty,
 ];
 
 function isMethodInfo(x: unknown): x is MethodInfo {

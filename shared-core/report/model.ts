@@ -47,6 +47,20 @@ export interface EstimateSection {
   methods: MethodText[];
   warnings: string[];
   charts: ChartSpec[];
+  /** Monte Carlo bands of the results, when the estimate states input uncertainties */
+  uncertainty?: UncertaintySection;
+}
+
+/** The uncertainty block of a section, in display units. */
+export interface UncertaintySection {
+  /** e.g. "90 % band from 1000 Monte Carlo draws (1000 computed)" */
+  caption: string;
+  coverage: number;
+  /** each varied input: nominal value and its standard uncertainty */
+  inputs: { name: string; nominal: string; standardUncertainty: string; unit: string }[];
+  /** per numeric result: nominal, low, median and high, typeset, with the numbers in display units */
+  rows: { name: string; unit: string; shown: [string, string, string, string]; values: [number, number, number, number] }[];
+  warnings: string[];
 }
 
 export interface ContentsEntry {
@@ -88,6 +102,32 @@ function quantities(values: Record<string, ResultValue>, describe: (name: string
   return Object.entries(values).map(([name, v]) => quantity(name, describe(name), v, units));
 }
 
+/** A spread (difference) in display units: an offset unit such as °F converts without its offset. */
+function spreadToDisplay(u: number, siUnit: string, units: UnitSystem): number {
+  return toDisplay(u, siUnit, units).value - toDisplay(0, siUnit, units).value;
+}
+
+function uncertaintySection(e: EstimateOutcome, units: UnitSystem): UncertaintySection | undefined {
+  const r = e.uncertainty;
+  if (!r) return undefined;
+  const pc = Math.round(r.coverage * 100);
+  return {
+    caption: `${pc} % band (probabilistically symmetric) from ${r.evaluated} of ${r.samples} Monte Carlo draws; inputs vary as normal distributions with the standard uncertainties below`,
+    coverage: r.coverage,
+    inputs: r.inputs.map((i) => {
+      const nominal = e.inputs[i.name];
+      const siUnit = nominal?.unit ?? '1';
+      const d = typeof nominal?.value === 'number' ? toDisplay(nominal.value, siUnit, units) : undefined;
+      return { name: i.name, nominal: d ? formatValue(d.value) : '', standardUncertainty: formatValue(spreadToDisplay(i.standardUncertainty, siUnit, units)), unit: prettyUnit(d?.unit ?? siUnit) };
+    }),
+    rows: r.bands.map((b) => {
+      const values = [b.nominal, b.low, b.median, b.high].map((v) => toDisplay(v, b.unit, units).value) as [number, number, number, number];
+      return { name: b.name, unit: prettyUnit(toDisplay(0, b.unit, units).unit), shown: values.map((v) => formatValue(v)) as [string, string, string, string], values };
+    }),
+    warnings: [...r.warnings],
+  };
+}
+
 function methodTexts(sources: readonly string[]): MethodText[] {
   return sources.flatMap((source): MethodText[] => {
     const infos = methodsForSource(source);
@@ -115,6 +155,7 @@ function section(e: EstimateOutcome, number: string, units: UnitSystem): Estimat
     methods: methodTexts(e.sources),
     warnings: [...e.warnings],
     charts: chartSpecs(e.series, units, e.id),
+    ...(e.uncertainty ? { uncertainty: uncertaintySection(e, units) } : {}),
   };
 }
 

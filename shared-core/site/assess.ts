@@ -8,6 +8,7 @@ import { boundArgs } from './bindings';
 import { makeContext } from './context';
 import type { Estimate, Site } from './schema';
 import { siteCompliance } from './compliance';
+import { bandsFromTyped, MONTE_CARLO_JCGM101, type UncertaintyResult } from '../uncertainty';
 
 export interface EstimateOutcome {
   id: string;
@@ -25,6 +26,8 @@ export interface EstimateOutcome {
   series: Series[];
   /** why the estimate could not be computed (status 'error') */
   error?: string;
+  /** uncertainty bands of the results, when the estimate states input uncertainties */
+  uncertainty?: UncertaintyResult;
 }
 
 /** One row of the mixing-zone compliance table: a constituent of an outfall under one condition. */
@@ -90,7 +93,8 @@ export function runEstimate(site: Site, e: Estimate, index: number): EstimateOut
     const out = runCalc(method, raw);
     const inputs = describeInputs(method, resolveArgs(method, raw), ctx.condition?.name);
     const warnings = [...(ctx.profile?.warnings ?? []), ...out.warnings];
-    return { ...base, feature, condition, status: 'ok', inputs, results: out.results, warnings: [...new Set(warnings)], sources: out.sources, series: out.series ?? [] };
+    const uncertainty = e.uncertainty && Object.keys(e.uncertainty).length ? bandsFromTyped(method, raw, e.uncertainty) : undefined;
+    return { ...base, feature, condition, status: 'ok', inputs, results: out.results, warnings: [...new Set(warnings)], sources: out.sources, series: out.series ?? [], ...(uncertainty ? { uncertainty, sources: [...out.sources, MONTE_CARLO_JCGM101.source] } : {}) };
   } catch (err) {
     if (err instanceof InputError || err instanceof ProfileError) return fail(err.message);
     throw err;

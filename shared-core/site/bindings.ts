@@ -124,6 +124,11 @@ const BINDINGS: Record<string, Binding> = {
       current: ctx.condition && siOptional(`conditions[${ctx.conditionIndex}].current`, ctx.condition.current, 'm/s'),
     };
   },
+  'diffuser-plume': (ctx) => {
+    const o = feature(ctx, 'outfall');
+    if (!o) return { file: ctx.profile };
+    return { ...BINDINGS['buoyant-jet'](ctx), ports: o.ports, spacing: siOptional(`${at(ctx)}.spacing`, o.spacing, 'm') };
+  },
   'line-plume': (ctx) => {
     const o = feature(ctx, 'outfall');
     if (!o || !ctx.profile) return {};

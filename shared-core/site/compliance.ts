@@ -3,8 +3,9 @@ import { resolveArgs } from '../calc/resolve';
 import { InputError } from '../core/errors';
 import { ProfileError } from '../profile/profile';
 import { buoyantJetTrajectory } from '../jets/buoyant-jet';
-import { buoyantJetInputFromArgs } from '../jets/calc';
-import { dilutionAtBoundary } from '../mixing-zone/boundary';
+import { buoyantJetInputFromArgs, diffuserInputFromArgs } from '../jets/calc';
+import { diffuserPlume } from '../jets/diffuser';
+import { dilutionAtBoundary, type BoundaryDilution, type MixingZoneBoundary } from '../mixing-zone/boundary';
 import { complianceTable } from '../mixing-zone/compliance';
 import { boundArgs } from './bindings';
 import { makeContext, si } from './context';
@@ -15,11 +16,13 @@ import type { Site } from './schema';
  * Mixing-zone compliance of every outfall with constituents, under every ambient condition: the buoyant-jet
  * model (feature + condition bindings) gives the centreline dilution at the mixing-zone boundary, measured
  * horizontally from the port; complianceTable() compares it with each constituent's required dilution.
+ * An outfall with several ports uses the merged-diffuser model (diffuser-plume): the smaller of the merged and the
+ * single-port dilutions at the boundary; without a port spacing it cannot tell.
  * A condition the model cannot run for gives 'cannot tell' rows with the reason.
  */
 export function siteCompliance(site: Site): ComplianceRow[] {
-  const method = findCalcMethod('buoyant-jet');
-  if (!method) return [];
+  const method = findCalcMethod('buoyant-jet'), diffuser = findCalcMethod('diffuser-plume');
+  if (!method || !diffuser) return [];
   const rows: ComplianceRow[] = [];
   site.features.forEach((feature, index) => {
     if (feature.kind !== 'outfall' || feature.constituents.length === 0) return;
@@ -27,9 +30,16 @@ export function siteCompliance(site: Site): ComplianceRow[] {
       const base = { feature: feature.name, condition: condition.name };
       try {
         const ctx = makeContext(site, condition.id, feature.id);
-        const t = buoyantJetTrajectory(buoyantJetInputFromArgs(resolveArgs(method, boundArgs(method.id, ctx))));
         const distance = si(`features[${index}].mixingZone.distance`, feature.mixingZone.distance, 'm');
-        const boundary = dilutionAtBoundary(t, { distance, measure: 'horizontal' });
+        const edge: MixingZoneBoundary = { distance, measure: 'horizontal' };
+        let boundary: BoundaryDilution;
+        if (feature.ports > 1) {
+          const d = diffuserPlume(diffuserInputFromArgs(resolveArgs(diffuser, boundArgs(diffuser.id, ctx))));
+          const [a, b] = [dilutionAtBoundary(d.merged, edge), dilutionAtBoundary(d.isolated, edge)];
+          boundary = a.dilutionCentreline <= b.dilutionCentreline ? a : b;
+        } else {
+          boundary = dilutionAtBoundary(buoyantJetTrajectory(buoyantJetInputFromArgs(resolveArgs(method, boundArgs(method.id, ctx)))), edge);
+        }
         const table = complianceTable([{ name: condition.name, dilution: boundary }], feature.constituents);
         for (const r of table.rows) {
           rows.push({

@@ -5,7 +5,7 @@ import { z } from 'zod';
  * in SI or the text the user typed with its unit ("30 ft", "450 cfs"): what the user typed is kept as typed.
  */
 export const SITE_FORMAT = 'gprime-site';
-export const SITE_VERSION = 2;
+export const SITE_VERSION = 3;
 
 const id = z.string().min(1).max(64).regex(/^[A-Za-z0-9_.-]+$/, 'use letters, digits, "_", "-" or "." only');
 const name = z.string().min(1).max(200);
@@ -104,6 +104,8 @@ export const estimateSchema = z.object({
   condition: id.optional(),
   /** explicit parameters; they override what the feature and condition supply */
   params: z.record(z.string(), z.union([z.number().finite(), z.string()])).default({}),
+  /** standard uncertainties (one standard deviation) of numeric inputs, as typed: "10%", "0.5 ft", "0.002" */
+  uncertainty: z.record(z.string(), z.string().max(40)).optional(),
   title: z.string().max(200).optional(),
 });
 

@@ -3,15 +3,17 @@ import { nonNegative, positive, requireInRange } from '../core/range';
 import type { MethodInfo } from '../core/method';
 import { brentRoot } from '../numerics/roots';
 import type { Profile } from '../profile/profile';
-import { portOutflow, type OutflowColumn, type PortOutflow } from './outflow';
+import type { OutflowColumn, PortOutflow } from './outflow';
 import type { ProfileWithdrawalOptions } from './measured';
+import { combinedOutflows, directOutflow, interferenceGroups, memoisedOutflow, type InterferenceGroup, type InterferenceMode, type OutflowFunction } from './interference';
 
 export const RELEASE_BLEND: MethodInfo = {
   id: 'release-blend-flow-weighted',
   title: 'Blended release of several ports and the split that meets a temperature target',
   source:
     'Mixing of the port outflows by conservation of mass, heat and constituents (Fischer et al. 1979, Ch. 6); each port’s outflow ' +
-    'from its own withdrawal layer (Bohan & Grace 1973), ports treated as independent (no interference between layers).',
+    'from its own withdrawal layer (Bohan & Grace 1973); ports either independent or, where their layers overlap, combined ' +
+    '(see withdrawal-interference-combined).',
   equation: 'c_release = Σ Q_i c̄_i(Q_i) / Σ Q_i, 0 ≤ Q_i ≤ capacity_i, Σ Q_i = release',
   validity: {},
 };
@@ -22,10 +24,18 @@ export interface Port {
   capacity: number;
 }
 
+/** Options of a blend: the sink of the ports and how overlapping layers are treated (default 'independent'). */
+export interface BlendOptions extends ProfileWithdrawalOptions {
+  interference?: InterferenceMode;
+}
+
 export interface BlendResult {
   /** port flows [m3/s] in the order of the ports */
   flows: number[];
+  /** each port's outflow; with combined interference, its layer is computed at its group's total flow */
   ports: PortOutflow[];
+  /** open ports drawing one combined withdrawal (combined mode), or whose layers overlap (independent mode) */
+  groups: InterferenceGroup[];
   /** flow-weighted temperature [degC] and density [kg/m3] of the release */
   temperature: number;
   density: number;
@@ -42,22 +52,38 @@ function checkPorts(ports: readonly Port[]): void {
   });
 }
 
+/** Each port's outflow for a split, with the interference groups and their warnings. */
+function releaseOutflows(ports: readonly Port[], flows: readonly number[], o: BlendOptions, outflow: OutflowFunction): { outs: PortOutflow[]; groups: InterferenceGroup[]; warnings: string[] } {
+  const depths = ports.map((port) => port.depth);
+  const name = (g: InterferenceGroup) => g.ports.map((i) => `${formatNumber(depths[i])} m`).join(', ').replace(/, ([^,]*)$/, ' and $1');
+  if (o.interference === 'combined') {
+    const { outflows, groups } = combinedOutflows(depths, flows, outflow);
+    const warnings = groups.filter((g) => g.ports.length > 1).map((g) =>
+      `The ports at ${name(g)} interfere (their withdrawal layers overlap): they are taken as one withdrawal of ${formatNumber(g.flow)} m3/s ` +
+      `from ${formatNumber(g.topDepth)} m to ${formatNumber(g.bottomDepth)} m, each port drawing on a layer computed at that combined flow.`);
+    return { outs: outflows, groups, warnings };
+  }
+  const outs = ports.map((port, i) => outflow(port.depth, flows[i]));
+  const groups = interferenceGroups(depths, flows, outflow, 1);
+  const warnings = groups.filter((g) => g.ports.length > 1).map((g) => `The withdrawal layers of the ports at ${name(g)} overlap, but each is computed as if the other ports were closed (interference ignored).`);
+  return { outs, groups, warnings };
+}
+
 /**
  * Blended release for a given split among ports. Each flow must lie within its port's capacity.
  * @param flows [m3/s] per port; @returns flow-weighted temperature, density and every profile column
  */
-export function blendRelease(p: Profile, ports: readonly Port[], flows: readonly number[], o: ProfileWithdrawalOptions): BlendResult {
+export function blendRelease(p: Profile, ports: readonly Port[], flows: readonly number[], o: BlendOptions, outflow: OutflowFunction = directOutflow(p, o)): BlendResult {
   checkPorts(ports);
   if (flows.length !== ports.length) throw new InputError('flows', flows.length, '', `${ports.length} values`, `give one flow per port (${ports.length})`);
   flows.forEach((q, i) => requireInRange(`flows[${i + 1}]`, q, 'm3/s', { min: 0, max: ports[i].capacity }));
   const total = flows.reduce((a, b) => a + b, 0);
   if (!(total > 0)) throw new InputError('flows', total, 'm3/s', '> 0 m3/s in total', 'at least one port must be open');
-  const outs = ports.map((port, i) => portOutflow(p, port.depth, flows[i], o));
+  const { outs, groups, warnings: interference } = releaseOutflows(ports, flows, o, outflow);
   const columns = outs[0].columns.map((c, k) => ({ name: c.name, unit: c.unit, value: outs.reduce((s, out, i) => s + flows[i] * out.columns[k].value, 0) / total }));
   const get = (name: string) => columns.find((c) => c.name === name)!.value;
-  const warnings = [...new Set(outs.flatMap((o2, i) => (flows[i] > 0 ? o2.warnings : [])))];
-  if (ports.filter((_, i) => flows[i] > 0).length > 1) warnings.push('Each port’s withdrawal layer is computed as if the other ports were closed; layers of nearby open ports interfere.');
-  return { flows: [...flows], ports: outs, temperature: get('temperature'), density: get('density'), columns, warnings };
+  const warnings = [...new Set([...outs.flatMap((o2, i) => (flows[i] > 0 ? o2.warnings : [])), ...interference])];
+  return { flows: [...flows], ports: outs, groups, temperature: get('temperature'), density: get('density'), columns, warnings };
 }
 
 /** Target of the optimiser: one temperature, or a band [min, max] [degC]. */
@@ -69,23 +95,22 @@ export interface OptimisedRelease extends BlendResult {
   achievable: { min: number; max: number };
 }
 
-const temperatureOf = (p: Profile, ports: readonly Port[], flows: number[], o: ProfileWithdrawalOptions, release: number) =>
-  ports.reduce((s, port, i) => s + (flows[i] > 0 ? flows[i] * portOutflow(p, port.depth, flows[i], o).temperature : 0), 0) / release;
+/** Release temperature of a split [degC] (port outflows memoised over one optimisation). */
+type TemperatureOf = (flows: number[]) => number;
 
 /** Split that drives the release temperature to its extreme (sign −1: coldest, +1: warmest). */
-function extremeSplit(p: Profile, ports: readonly Port[], release: number, o: ProfileWithdrawalOptions, sign: -1 | 1): number[] {
-  const nominal = ports.map((port) => portOutflow(p, port.depth, Math.min(port.capacity, release), o).temperature);
+function extremeSplit(ports: readonly Port[], release: number, temperatureOf: TemperatureOf, outflow: OutflowFunction, sign: -1 | 1): number[] {
+  const nominal = ports.map((port) => outflow(port.depth, Math.min(port.capacity, release)).temperature);
   const order = ports.map((_, i) => i).sort((a, b) => sign * (nominal[b] - nominal[a]));
   const flows = ports.map(() => 0);
   let left = release;
   for (const i of order) { flows[i] = Math.min(ports[i].capacity, left); left -= flows[i]; }
   // refine: move flow between each pair of ports by a golden-section search (the port outflows depend on their flows)
-  const score = (f: number[]) => sign * temperatureOf(p, ports, f, o, release);
+  const score = (f: number[]) => sign * temperatureOf(f);
   for (let sweep = 0; sweep < 2; sweep++) {
     for (let i = 0; i < ports.length; i++) for (let j = i + 1; j < ports.length; j++) {
-      const lo = -Math.min(flows[i], ports[j].capacity - flows[j]), hi = Math.min(flows[j], ports[i].capacity - flows[i]);
+      const { lo, hi, at } = pairMove(ports, flows, i, j);
       if (!(hi - lo > 1e-9 * release)) continue;
-      const at = (t: number) => { const f = [...flows]; f[i] = clamp(f[i] + t, 0, ports[i].capacity); f[j] = clamp(f[j] - t, 0, ports[j].capacity); return f; };
       const best = goldenMax((t) => score(at(t)), lo, hi);
       if (score(at(best)) > score(flows)) flows.splice(0, flows.length, ...at(best));
     }
@@ -105,36 +130,83 @@ function goldenMax(f: (t: number) => number, a: number, b: number): number {
   return ends.reduce((m, e) => (e.v > m.v ? e : m)).t;
 }
 
+/** Moving flow t from port j to port i of a split, each kept within its capacity. */
+function pairMove(ports: readonly Port[], base: readonly number[], i: number, j: number) {
+  const lo = -Math.min(base[i], ports[j].capacity - base[j]), hi = Math.min(base[j], ports[i].capacity - base[i]);
+  const at = (t: number) => { const f = [...base]; f[i] = clamp(f[i] + t, 0, ports[i].capacity); f[j] = clamp(f[j] - t, 0, ports[j].capacity); return f; };
+  return { lo, hi, at };
+}
+
+/**
+ * A point of [lo, hi] where f meets the goal within tol: Brent's method on the whole interval, then on each of 16 pieces
+ * (the release temperature jumps where ports begin to interfere, and Brent's method then converges on the jump).
+ * `closest` is the point evaluated whose value came nearest the goal.
+ */
+function meetGoal(f: (t: number) => number, lo: number, hi: number, goal: number, tol: number): { t?: number; closest: number; miss: number } {
+  let closest = lo, miss = Infinity;
+  const g = (t: number) => { const d = f(t) - goal; if (Math.abs(d) < miss) { miss = Math.abs(d); closest = t; } return d; };
+  const attempt = (a: number, b: number) => { const r = brentRoot(g, a, b, 1e-10 * (hi - lo)); return r !== undefined && Math.abs(g(r)) <= tol ? r : undefined; };
+  let t = attempt(lo, hi);
+  for (let k = 0; t === undefined && k < 16; k++) t = attempt(lo + ((hi - lo) * k) / 16, lo + ((hi - lo) * (k + 1)) / 16);
+  return { t, closest, miss };
+}
+
 /**
  * Finds port flows (each within its capacity, summing to the release) whose blended temperature meets the target or lies in
  * the band. The coldest and warmest splits bound what is achievable; between them the flows are interpolated linearly
- * (a path that keeps every port within capacity) and the target is found by Brent's method. When the target cannot be met,
- * `feasible` is false and the closest achievable split is returned.
+ * (a path that keeps every port within capacity) and the target is found by Brent's method. Where the target falls in a
+ * jump of the release temperature (ports starting to interfere, combined mode), flow is moved between each pair of ports
+ * from the closest split to find another crossing. When the target cannot be met, `feasible` is false and the closest
+ * achievable split is returned.
  * @param release [m3/s] total release; @returns the split, its blend, feasibility and the achievable range [degC]
  */
-export function optimiseRelease(p: Profile, ports: readonly Port[], release: number, target: ReleaseTarget, o: ProfileWithdrawalOptions): OptimisedRelease {
+export function optimiseRelease(p: Profile, ports: readonly Port[], release: number, target: ReleaseTarget, o: BlendOptions): OptimisedRelease {
   checkPorts(ports);
   const capacity = ports.reduce((s, port) => s + port.capacity, 0);
   requireInRange('release', release, 'm3/s', { ...positive, max: capacity });
   const band = 'temperature' in target
     ? { min: requireInRange('target_temperature', target.temperature, 'degC', { min: -3, max: 60 }), max: target.temperature }
     : { min: requireInRange('target_min', target.min, 'degC', { min: -3, max: 60 }), max: requireInRange('target_max', target.max, 'degC', { min: target.min, max: 60 }) };
-  const cold = extremeSplit(p, ports, release, o, -1), warm = extremeSplit(p, ports, release, o, 1);
-  const tCold = temperatureOf(p, ports, cold, o, release), tWarm = temperatureOf(p, ports, warm, o, release);
+  const outflow = memoisedOutflow(p, o);
+  const temperatureOf: TemperatureOf = (f) => releaseOutflows(ports, f, o, outflow).outs.reduce((s, out, i) => s + f[i] * out.temperature, 0) / release;
+  const cold = extremeSplit(ports, release, temperatureOf, outflow, -1), warm = extremeSplit(ports, release, temperatureOf, outflow, 1);
+  const tCold = temperatureOf(cold), tWarm = temperatureOf(warm);
   const achievable = { min: Math.min(tCold, tWarm), max: Math.max(tCold, tWarm) };
   const goal = clamp((band.min + band.max) / 2, achievable.min, achievable.max);
+  const tol = 1e-3;
   const path = (t: number) => cold.map((q, i) => clamp((1 - t) * q + t * warm[i], 0, ports[i].capacity));
   let flows: number[];
+  let jump = false;
   if (goal <= tCold + 1e-9 || tWarm - tCold < 1e-9) flows = cold;
   else if (goal >= tWarm - 1e-9) flows = warm;
-  else flows = path(brentRoot((t) => temperatureOf(p, ports, path(t), o, release) - goal, 0, 1, 1e-10) ?? 0.5);
-  const blend = blendRelease(p, ports, flows, o);
-  const tol = 1e-3;
+  else {
+    const onPath = meetGoal((x) => temperatureOf(path(x)), 0, 1, goal, tol / 2);
+    if (onPath.t !== undefined) flows = path(onPath.t);
+    else {
+      const other = pairSearch(ports, path(onPath.closest), release, temperatureOf, goal, tol / 2);
+      flows = other ?? path(onPath.closest);
+      jump = other === undefined;
+    }
+  }
+  const blend = blendRelease(p, ports, flows, o, outflow);
   const feasible = blend.temperature >= band.min - tol && blend.temperature <= band.max + tol;
   const warnings = [...blend.warnings];
   if (!feasible) {
     const wanted = band.min === band.max ? `${formatNumber(band.min)} °C` : `${formatNumber(band.min)}–${formatNumber(band.max)} °C`;
-    warnings.push(`The target ${wanted} cannot be met at a release of ${formatNumber(release)} m3/s: the ports give ${achievable.min.toFixed(2)}–${achievable.max.toFixed(2)} °C; the closest achievable split is reported.`);
+    warnings.push(jump && goal > achievable.min && goal < achievable.max
+      ? `The target ${wanted} lies in a jump of the release temperature where ports start to interfere: no split found gives it; the closest split found is reported.`
+      : `The target ${wanted} cannot be met at a release of ${formatNumber(release)} m3/s: the ports give ${achievable.min.toFixed(2)}–${achievable.max.toFixed(2)} °C; the closest achievable split is reported.`);
   }
   return { ...blend, feasible, achievable, warnings };
+}
+
+/** A split meeting the goal found by moving flow between one pair of ports, starting from `base`. */
+function pairSearch(ports: readonly Port[], base: readonly number[], release: number, temperatureOf: TemperatureOf, goal: number, tol: number): number[] | undefined {
+  for (let i = 0; i < ports.length; i++) for (let j = i + 1; j < ports.length; j++) {
+    const move = pairMove(ports, base, i, j);
+    if (!(move.hi - move.lo > 1e-9 * release)) continue;
+    const r = meetGoal((x) => temperatureOf(move.at(x)), move.lo, move.hi, goal, tol).t;
+    if (r !== undefined) return move.at(r);
+  }
+  return undefined;
 }

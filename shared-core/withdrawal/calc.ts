@@ -8,8 +8,10 @@ import { WITHDRAWAL_MEASURED_PROFILE } from './measured';
 import { WITHDRAWAL_VELOCITY, withdrawalVelocityProfile } from './outflow';
 import type { Profile } from '../profile/profile';
 import { optimiseRelease, RELEASE_BLEND, type Port } from './blend';
+import { groupFluxProfile, WITHDRAWAL_INTERFERENCE, type InterferenceGroup, type InterferenceMode } from './interference';
 
 const SINKS = ['line', 'point'] as const;
+const INTERFERENCE = ['combined', 'independent'] as const;
 
 /** Parses `ports=5:40,30:40` (depth below the surface in m : capacity in m3/s, one pair per port). */
 export function parsePorts(textValue: string): Port[] {
@@ -72,6 +74,7 @@ export const withdrawalCalcMethods: CalcMethod[] = [
       { kind: 'text', name: 'ports', description: 'ports as depth:capacity pairs (m below the surface : m3/s), e.g. 5:40,30:40' },
       { kind: 'number', name: 'release', unit: 'm3/s', description: 'total release', range: { ...positive, max: 1e5 } },
       { kind: 'number', name: 'target_temperature', unit: 'degC', description: 'wanted release temperature', range: { min: -3, max: 60 } },
+      { kind: 'choice', name: 'interference', description: 'combined = open ports whose withdrawal layers overlap draw one combined withdrawal; independent = each port alone', choices: INTERFERENCE, default: 'combined' },
     ],
     results: [
       { name: 'temperature', unit: 'degC', description: 'temperature of the blended release (the closest achievable when infeasible)' },
@@ -82,28 +85,34 @@ export const withdrawalCalcMethods: CalcMethod[] = [
       const p = arg.profile(a);
       if (!p) throw new InputError('file', '(missing)', '', 'a CSV profile', 'a profile file is required');
       const ports = parsePorts(arg.text(a, 'ports'));
-      const r = optimiseRelease(p, ports, arg.num(a, 'release'), { temperature: arg.num(a, 'target_temperature') }, { sink: 'point' });
+      const interference = arg.text<InterferenceMode>(a, 'interference');
+      const r = optimiseRelease(p, ports, arg.num(a, 'release'), { temperature: arg.num(a, 'target_temperature') }, { sink: 'point', interference });
       const flows = ports.map((port, i) => `${port.depth} m: ${r.flows[i].toFixed(2)} m3/s`).join('; ');
-      const warnings = ['Ports are treated as orifices (point sinks) without interference between their withdrawal layers.', ...r.warnings];
+      const warnings = [`Ports are treated as orifices (point sinks); ${interference === 'combined' ? 'ports whose withdrawal layers overlap are combined (from memory, see the sources)' : 'interference between their withdrawal layers is ignored'}.`, ...r.warnings];
       return {
         results: { temperature: num(r.temperature, 'degC'), port_flows: text(flows), feasible: text(r.feasible ? 'yes' : 'no') },
-        series: releaseSeries(p, ports, r.flows),
+        series: releaseSeries(p, ports, r.flows, interference === 'combined' ? r.groups : []),
         warnings,
-        sources: [RELEASE_BLEND.source, WITHDRAWAL_MEASURED_PROFILE.source, WITHDRAWAL_POINT_SINK.source, WITHDRAWAL_VELOCITY.source],
+        sources: [RELEASE_BLEND.source, ...(interference === 'combined' ? [WITHDRAWAL_INTERFERENCE.source] : []), WITHDRAWAL_MEASURED_PROFILE.source, WITHDRAWAL_POINT_SINK.source, WITHDRAWAL_VELOCITY.source],
       };
     },
   },
 ];
 
-/** Chart curves of a release split: the flow of each port, and each open port's outflow per metre of depth. */
-export function releaseSeries(p: Profile, ports: readonly Port[], flows: readonly number[]): Series[] {
+/**
+ * Chart curves of a release split: the flow of each port, and each open port's (or interfering group's) outflow per metre
+ * of depth. `groups` are the combined withdrawals (empty: every port alone).
+ */
+export function releaseSeries(p: Profile, ports: readonly Port[], flows: readonly number[], groups: readonly InterferenceGroup[] = []): Series[] {
   const out: Series[] = [{
     title: 'Port flows', x: { label: 'Port depth', unit: 'm', values: ports.map((q) => q.depth) },
     y: [{ label: 'Port flow', unit: 'm3/s', values: [...flows] }, { label: 'Port capacity', unit: 'm3/s', values: ports.map((q) => q.capacity) }],
     depthAxis: true, caption: 'Flow of each port in the release split, with its capacity',
   }];
+  const depths = ports.map((q) => q.depth);
+  const combined = groups.filter((g) => g.ports.length > 1);
   ports.forEach((port, i) => {
-    if (!(flows[i] > 0)) return;
+    if (!(flows[i] > 0) || combined.some((g) => g.ports.includes(i))) return;
     const v = withdrawalVelocityProfile(p, port.depth, flows[i], { sink: 'point' });
     out.push({
       title: `Withdrawal at the port at ${port.depth} m`, x: { label: 'Depth', unit: 'm', values: v.depth },
@@ -111,5 +120,14 @@ export function releaseSeries(p: Profile, ports: readonly Port[], flows: readonl
       caption: `Velocity distribution in the withdrawal layer of the port at ${port.depth} m (${flows[i].toFixed(2)} m³/s)`,
     });
   });
+  for (const g of combined) {
+    const v = groupFluxProfile(p, depths, flows, g, { sink: 'point' });
+    const names = g.ports.map((i) => `${depths[i]} m`).join(', ');
+    out.push({
+      title: `Combined withdrawal of the ports at ${names}`, x: { label: 'Depth', unit: 'm', values: v.depth },
+      y: [{ label: 'Outflow per metre of depth', unit: 'm2/s', values: v.fluxPerDepth }], depthAxis: true,
+      caption: `Flow-weighted sum of the velocity distributions of the interfering ports at ${names} (${g.flow.toFixed(2)} m³/s in all)`,
+    });
+  }
   return out;
 }

@@ -14,7 +14,9 @@ export function summariseAssessment(a: Assessment): string {
     }
     const [key, r] = Object.entries(e.results)[0] ?? ['', { value: '', unit: '' }];
     const value = typeof r.value === 'number' ? formatNumber(r.value) : r.value;
-    lines.push(`• ${e.id} (${e.method}${where ? `; ${where}` : ''}): ${key} = ${value}${r.unit && r.unit !== '1' ? ' ' + r.unit : ''}` +
+    const band = e.uncertainty?.bands.find((b) => b.name === key);
+    const bandText = band ? ` (${Math.round(e.uncertainty!.coverage * 100)} % band ${formatNumber(band.low)} … ${formatNumber(band.high)})` : '';
+    lines.push(`• ${e.id} (${e.method}${where ? `; ${where}` : ''}): ${key} = ${value}${r.unit && r.unit !== '1' ? ' ' + r.unit : ''}${bandText}` +
       (e.warnings.length ? `  [${e.warnings.length} warning${e.warnings.length > 1 ? 's' : ''}]` : ''));
   }
   if (a.compliance.length) {

@@ -8,6 +8,9 @@ const USAGE = `gprime — screening estimates for stratified flows and density c
 
 Usage:
   gprime calc <method> name=value … [--json]   run one estimate (values in SI or with units: depth=30ft)
+  gprime calc <method> … --sigma name=u [--sigma …] [--samples N] [--seed N] [--coverage p]
+                                                add an uncertainty band (u: one standard deviation,
+                                                e.g. g_prime=0.002, depth=1ft, velocity=10%)
   gprime calc --list [--json]                   list every method, its parameters and results
   gprime assess <site file> [--json]            evaluate every estimate of a site file
   gprime assess <site file> --out <folder> [--format pdf,png,svg,csv,xlsx] [--units si|us]

@@ -4,7 +4,11 @@ import { runCheckValues } from '../../helpers/check-values';
 import {
   saltWedgeLengthSchijfSchonfeld1953, saltWedgeProfile, saltWedgeLengthCurve, estuarineRichardsonFischer1972, estuaryClass,
   maximalExchangeContractionArmiFarmer1986, maximalExchangeSillFarmerArmi1986, navigationLockExchange, type SaltWedgeInput,
+  exchangeWithNetFlowArmiFarmer1986, MAXIMAL_EXCHANGE_LIMIT,
 } from '../../../shared-core/estuaries';
+import { compositeFroudeArmi1986 } from '../../../shared-core/hydraulics/two-layer';
+import { findCalcMethod } from '../../../shared-core/calc/registry';
+import { runCalc } from '../../../shared-core/calc/resolve';
 import { InputError } from '../../../shared-core/core/errors';
 
 const n = (x: number | string | undefined) => Number(x);
@@ -35,6 +39,17 @@ runCheckValues('estuaries', 'exchange-sill-farmer-armi-1986', (i) => {
   if (i.output === 'g2') return r.compositeFroudeSquared;
   if (i.output === 'upper_fraction') return r.upperThicknessAtControl / n(i.depth);
   return r.discharge.value;
+});
+
+runCheckValues('estuaries', 'exchange-contraction-net-flow-armi-farmer-1986', (i) => {
+  const r = exchangeWithNetFlowArmiFarmer1986(n(i.g_prime), n(i.depth), n(i.width), n(i.net_discharge));
+  switch (i.output) {
+    case 'upper': return r.upperDischarge.value;
+    case 'lower': return r.lowerDischarge.value;
+    case 'virtual_width': return r.virtualControlWidth ?? NaN;
+    case 'upper_at_narrows': return r.upperThicknessAtNarrows ?? NaN;
+    default: return r.flushingDischarge;
+  }
 });
 
 runCheckValues('estuaries', 'navigation-lock-exchange', (i) => {
@@ -95,6 +110,75 @@ describe('estuaries: other invariants', () => {
   });
 });
 
+describe('exchange with net flow (Armi & Farmer 1986): invariants', () => {
+  const scale = (g: number, h: number, b: number) => b * Math.sqrt(g * h ** 3);
+  const arbitrary = [fc.double({ min: 1e-3, max: 1, noNaN: true }), fc.double({ min: 5, max: 100, noNaN: true }), fc.double({ min: 1, max: 1e4, noNaN: true })] as const;
+  it('the layer fluxes differ by the net flow; E and G² = 1 agree at both controls', () => {
+    fc.assert(fc.property(...arbitrary, fc.double({ min: -0.999, max: 0.999, noNaN: true }), (g, h, b, f) => {
+      const q0 = f * MAXIMAL_EXCHANGE_LIMIT * scale(g, h, b);
+      const r = exchangeWithNetFlowArmiFarmer1986(g, h, b, q0);
+      expect(Math.abs(r.upperDischarge.value - r.lowerDischarge.value - q0)).toBeLessThanOrEqual(1e-9 * scale(g, h, b));
+      expect(Math.abs(r.energyAtNarrows! - r.energyAtVirtualControl!)).toBeLessThanOrEqual(1e-9 * g * h);
+      const h1 = r.upperThicknessAtNarrows!, h2 = h - h1;
+      const G = compositeFroudeArmi1986(r.upperDischarge.value / (b * h1), -r.lowerDischarge.value / (b * h2), h1, h2, g).value;
+      expect(G).toBeCloseTo(1, 9);
+      const hv1 = r.upperThicknessAtVirtualControl!, bv = r.virtualControlWidth!;
+      const u1 = r.upperDischarge.value / (bv * hv1), u2 = r.lowerDischarge.value / (bv * (h - hv1));
+      expect(u1 / u2).toBeCloseTo(1, 9);
+      expect(compositeFroudeArmi1986(u1, -u2, hv1, h - hv1, g).value).toBeCloseTo(1, 9);
+    }), { numRuns: 200 });
+  });
+  it('rising net flow raises the with-flow layer, lowers the opposing one and moves the virtual control outwards', () => {
+    fc.assert(fc.property(fc.double({ min: 0, max: 0.99, noNaN: true }), fc.double({ min: 1.001, max: 1.5, noNaN: true }), (f, k) => {
+      const q = f * MAXIMAL_EXCHANGE_LIMIT * scale(0.02, 10, 50), q2 = Math.min(q * k + 1e-6, 0.999 * MAXIMAL_EXCHANGE_LIMIT * scale(0.02, 10, 50));
+      const a = exchangeWithNetFlowArmiFarmer1986(0.02, 10, 50, q), c = exchangeWithNetFlowArmiFarmer1986(0.02, 10, 50, q2);
+      expect(c.upperDischarge.value).toBeGreaterThan(a.upperDischarge.value);
+      expect(c.lowerDischarge.value).toBeLessThan(a.lowerDischarge.value);
+      expect(c.virtualControlWidth!).toBeGreaterThanOrEqual(a.virtualControlWidth!);
+      expect(a.virtualControlWidth!).toBeGreaterThanOrEqual(50 * (1 - 1e-9));
+    }), { numRuns: 200 });
+  });
+  it('reversing the net flow swaps the layers', () => {
+    fc.assert(fc.property(fc.double({ min: -0.99, max: 0.99, noNaN: true }), (f) => {
+      const q = f * MAXIMAL_EXCHANGE_LIMIT * scale(0.05, 8, 30);
+      const a = exchangeWithNetFlowArmiFarmer1986(0.05, 8, 30, q), c = exchangeWithNetFlowArmiFarmer1986(0.05, 8, 30, -q);
+      expect(c.upperDischarge.value).toBeCloseTo(a.lowerDischarge.value, 9);
+      expect(c.upperThicknessAtNarrows!).toBeCloseTo(8 - a.upperThicknessAtNarrows!, 9);
+    }), { numRuns: 50 });
+  });
+  it('without net flow it agrees with the zero-net-flow function', () => {
+    const a = exchangeWithNetFlowArmiFarmer1986(0.03, 12, 40, 0), c = maximalExchangeContractionArmiFarmer1986(0.03, 12, 40);
+    expect(a.upperDischarge.value / c.discharge.value - 1).toBeLessThan(1e-12);
+    expect(a.lowerDischarge.value / c.discharge.value - 1).toBeLessThan(1e-12);
+    expect(a.upperThicknessAtNarrows).toBeCloseTo(6, 12);
+  });
+  it('beyond the end of maximal exchange the flow is one-way, with zero exchange and a clear text', () => {
+    const r = exchangeWithNetFlowArmiFarmer1986(0.02, 10, 50, -0.8 * scale(0.02, 10, 50));
+    expect(r.regime).toBe('one-way');
+    expect(r.upperDischarge.value).toBe(0);
+    expect(r.lowerDischarge.value).toBeCloseTo(0.8 * scale(0.02, 10, 50), 9);
+    expect(r.warnings.join(' ')).toMatch(/one-way flow, no exchange/);
+  });
+  it('a virtual control wider than the channel ends makes the exchange submaximal', () => {
+    const q0 = 0.4 * scale(0.02, 10, 50);
+    const free = exchangeWithNetFlowArmiFarmer1986(0.02, 10, 50, q0);
+    const r = exchangeWithNetFlowArmiFarmer1986(0.02, 10, 50, q0, 0.9 * free.virtualControlWidth!);
+    expect(r.regime).toBe('submaximal');
+    expect(r.warnings.join(' ')).toMatch(/submaximal/);
+    expect(exchangeWithNetFlowArmiFarmer1986(0.02, 10, 50, q0, 1.1 * free.virtualControlWidth!).regime).toBe('maximal');
+  });
+  it('calc: net_discharge for a contraction, refused for a sill; the series spans the maximal-exchange range', () => {
+    const m = findCalcMethod('exchange-flow')!;
+    const out = runCalc(m, { g_prime: '0.02', depth: '10', width: '50', net_discharge: '30' });
+    const { upper_layer_discharge: up, lower_layer_discharge: low, exchange_discharge: ex } = out.results;
+    expect((up.value as number) - (low.value as number)).toBeCloseTo(30, 9);
+    expect(ex.value).toBe(low.value);
+    expect(out.series![0].x.values[0]).toBeCloseTo(-MAXIMAL_EXCHANGE_LIMIT * scale(0.02, 10, 50), 9);
+    expect(() => runCalc(m, { g_prime: '0.02', depth: '10', width: '50', control: 'sill', net_discharge: '30' })).toThrow(/not implemented/);
+    expect(runCalc(m, { g_prime: '0.02', depth: '10', width: '50', control: 'sill' }).results.exchange_discharge.value).toBeGreaterThan(0);
+  });
+});
+
 describe('estuaries: bad input', () => {
   it('never an uncaught non-InputError, never NaN', () => {
     fc.assert(fc.property(fc.double(), fc.double(), fc.double(), fc.double(), (u, h, g, f) => {
@@ -107,6 +191,10 @@ describe('estuaries: bad input', () => {
       } catch (e) { expect(e).toBeInstanceOf(InputError); }
       try {
         expect(Number.isFinite(maximalExchangeSillFarmerArmi1986(g, h, u).discharge.value)).toBe(true);
+      } catch (e) { expect(e).toBeInstanceOf(InputError); }
+      try {
+        const r = exchangeWithNetFlowArmiFarmer1986(g, h, u, f);
+        expect(Number.isFinite(r.upperDischarge.value) && Number.isFinite(r.lowerDischarge.value)).toBe(true);
       } catch (e) { expect(e).toBeInstanceOf(InputError); }
     }));
     expect(() => navigationLockExchange({ gPrime: 0.2, length: 150, width: 16, depth: 5, salinityDifference: 28 }, [-1])).toThrow(InputError);

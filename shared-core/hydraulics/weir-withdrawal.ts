@@ -1,0 +1,46 @@
+import { GRAVITY } from '../quantities';
+import { requireInRange } from '../core/range';
+import { scalar, type MethodInfo, type Scalar } from '../core/method';
+
+export const WEIR_SKIMMING_WITHDRAWAL: MethodInfo = {
+  id: 'weir-skimming-withdrawal',
+  title: 'Largest upper-layer discharge over a submerged weir before lower-layer water is drawn over the crest',
+  source:
+    'One-dimensional hydrostatic energy balance of the skimmed upper layer over a stagnant lower layer, with the interface lifted ' +
+    'to the crest: the inverted form of the curtain-wall (skimmer) withdrawal of Craya, A. (1949). Recherches théoriques sur ' +
+    'l’écoulement de couches superposées de fluides de densités différentes. La Houille Blanche 4, 44–55; the interface rises by ' +
+    'u²/(2g′) where the surface falls by u²/(2g). Limits: critical flow q = √(g′h³) at h = 2Y/3 (Turner, J.S. 1973. Buoyancy ' +
+    'Effects in Fluids, §3.2) and, for a deep interface, critical free-surface flow over the crest, q = (2/3)^{3/2}√(g h³).',
+  equation: 'q_max = √(2g′(Y − h)) · (h − (g′/g)(Y − h)), h the crest depth and Y the interface depth below the upstream water surface (Y > h); at most (2/3)^{3/2}√(g h³)',
+  validity: {},
+};
+
+const GP = { min: 1e-6, max: 20 };
+const DEPTH = { min: 1e-3, max: 11000 };
+
+/**
+ * Upper-layer discharge per unit width over a weir crest when the lower layer has just been lifted to the crest.
+ * Upper layer (density ρ1) flows over a stagnant lower layer; Bernoulli along the surface lowers it by u²/(2g),
+ * hydrostatics of the stagnant layer lifts the interface by (ρ1/Δρ)·u²/(2g) = u²/(2g′). With the interface at the
+ * crest, u = √(2g′(Y − h)) and the flow over the crest is h − u²/(2g) thick.
+ * @param gPrime [m/s2] g′ = gΔρ/ρ1 (upper-layer density as reference); @param crestDepth [m] h, crest below the upstream water surface
+ * @param interfaceDepth [m] Y, upstream interface below the water surface
+ * @returns q_max [m2/s]
+ * @source Craya (1949), inverted curtain-wall case; Turner (1973) §3.2
+ * @validity deep, quiescent lower layer upstream; no contraction, curvature or losses at the crest; laboratory checks: none in this program
+ */
+export function weirSkimmingWithdrawalMax(gPrime: number, crestDepth: number, interfaceDepth: number): Scalar {
+  const g = requireInRange('g_prime', gPrime, 'm/s2', GP);
+  const Y = requireInRange('interface_depth', interfaceDepth, 'm', DEPTH);
+  const h = requireInRange('crest_depth', crestDepth, 'm', { min: 1e-3, max: Y, maxExclusive: true });
+  const criticalFreeSurface = (2 / 3) ** 1.5 * Math.sqrt(GRAVITY * h ** 3);
+  if (g * (Y - h) >= (GRAVITY * h) / 3) {
+    return scalar(WEIR_SKIMMING_WITHDRAWAL, criticalFreeSurface, 'm2/s', {}, [
+      'The interface lies so deep that the overflow reaches free-surface critical flow over the crest before the lower layer is lifted to it: lower-layer water is not drawn; the value is the critical discharge (2/3)^{3/2}√(g h³) of the crest.',
+    ]);
+  }
+  const u = Math.sqrt(2 * g * (Y - h)), q = u * (h - (u * u) / (2 * GRAVITY));
+  const warnings = h > (2 * Y) / 3 ? ['The crest is deeper than the critical depth 2Y/3: the skimmed layer stays subcritical up to the crest and lifts the interface gently.'] : [];
+  warnings.push(`A freely overflowing crest passes about ${criticalFreeSurface.toPrecision(3)} m2/s at this head, ${(criticalFreeSurface / q).toPrecision(3)} times the limit: without throttling (gate, submerged outlet) lower-layer water is drawn.`);
+  return scalar(WEIR_SKIMMING_WITHDRAWAL, q, 'm2/s', {}, warnings);
+}

@@ -1,0 +1,4 @@
+export * from './sampling';
+export * from './propagate';
+export * from './parse';
+export * from './typed';
