@@ -17,6 +17,8 @@ import { brentRoot } from '../numerics/roots';
  * (measured from the side of the opposing layer). E_n = E_v fixes h.
  * As s → (2/3)^{3/2} the opposing flux q_a → 0 and b_v → ∞: at the narrows the outflowing layer is then
  * critical over a stagnant opposing layer (h = 2/3, E = 0), the analytic end of the maximal-exchange branch.
+ * Beyond it the flow is returned as one-way (Armi & Farmer list one-layer baroclinic flow, an arrested layer under
+ * the outflow, and, once |Q0| ≥ b√(g′H³), one-layer barotropic flow filling the narrows).
  */
 
 export const ARMI_FARMER_1986_NET_FLOW: MethodInfo = {
@@ -63,12 +65,28 @@ function stateAtNarrows(h: number, s: number) {
   return { withFlow, against, energyNarrows, energyVirtual };
 }
 
-function solveDimensionless(s: number): DimensionlessExchange {
-  const lo = Math.max(0.5, s ** (2 / 3)), hi = 2 / 3;
+/**
+ * Thickness h at the narrows where E_n = E_v. Besides the wanted root, E_n − E_v touches zero (a double root,
+ * negative on both sides) where the virtual control would sit on the narrows itself, h = h_v, i.e.
+ * √(h(1 − h))(2h − 1) = s (only for s ≤ ¼); the bracket stops halfway to it. For s < 10⁻³ the root's series
+ * h = ½ + s/4 + s³/8 (checked against a 50-digit solve; remainder below 10⁻¹⁵) avoids differences of order s².
+ */
+function narrowsThickness(s: number): number {
+  if (s < 1e-3) return 0.5 + s / 4 + s ** 3 / 8;
   const mismatch = (h: number) => { const st = stateAtNarrows(h, s); return st.energyNarrows - st.energyVirtual; };
-  // mismatch > 0 at lo and < 0 at hi for 0 < s < (2/3)^{3/2}, one root between; at s = 0 the root is lo = 1/2
-  const h = mismatch(lo) <= 0 ? lo : brentRoot(mismatch, lo, hi, 1e-15);
+  const lo = Math.max(0.5, s ** (2 / 3));
+  let hi = 2 / 3;
+  if (s <= 0.25) {
+    const onNarrows = brentRoot((h) => Math.sqrt(h * (1 - h)) * (2 * h - 1) - s, 0.5, 0.5 + Math.sqrt(1 / 8), 1e-15)!;
+    hi = Math.min(hi, (lo + onNarrows) / 2);
+  }
+  const h = brentRoot(mismatch, lo, hi, 1e-15); // mismatch > 0 at lo, < 0 at hi, one root between
   if (h === undefined) throw new Error('exchange with net flow: no control solution found');
+  return h;
+}
+
+function solveDimensionless(s: number): DimensionlessExchange {
+  const h = narrowsThickness(s);
   const st = stateAtNarrows(h, s);
   const total = st.withFlow + st.against, hv = st.withFlow / total;
   return {

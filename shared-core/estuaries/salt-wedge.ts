@@ -1,5 +1,6 @@
 import { GRAVITY } from '../quantities';
 import { positive, requireInRange } from '../core/range';
+import { formatNumber, InputError } from '../core/errors';
 import { scalar, type MethodInfo, type Scalar } from '../core/method';
 import { solveOde, type OdeStatus } from '../numerics/ode';
 
@@ -36,12 +37,19 @@ export interface SaltWedgeLength {
   riverFroude: number;
 }
 
+const MIN_RIVER_FROUDE = 1e-6;
+
 function checked(input: SaltWedgeInput) {
   const u = requireInRange('river_velocity', input.riverVelocity, 'm/s', { ...positive, max: 20 });
   const h = requireInRange('depth', input.depth, 'm', { ...positive, max: 1e3 });
   const g = requireInRange('g_prime', input.gPrime, 'm/s2', { ...positive, max: GRAVITY });
   const f = requireInRange('interfacial_friction', input.interfacialFriction ?? DEFAULT_INTERFACIAL_FRICTION, '1', { ...positive, max: 0.1 });
-  return { u, h, g, f, F0: u / Math.sqrt(g * h) };
+  const F0 = u / Math.sqrt(g * h);
+  // below this the closed form overflows (L ∝ F0⁻²): the river is too slow to hold any wedge back
+  if (F0 < MIN_RIVER_FROUDE) {
+    throw new InputError('river_velocity', u, 'm/s', `≥ ${formatNumber(MIN_RIVER_FROUDE * Math.sqrt(g * h))} m/s here`, `the river densimetric Froude number ${formatNumber(F0)} is below ${MIN_RIVER_FROUDE}: the sea water would reach indefinitely far inland (no arrested wedge to compute)`);
+  }
+  return { u, h, g, f, F0 };
 }
 
 const NO_WEDGE = 'The river densimetric Froude number F0 ≥ 1: the river flow pushes the sea water out of the mouth and no wedge is arrested.';

@@ -73,7 +73,12 @@ function describeInputs(method: CalcMethod, args: Record<string, unknown>, condi
 }
 
 /** Runs one estimate of a site; a bad input gives status 'error' with the reason, never an exception. */
-export function runEstimate(site: Site, e: Estimate, index: number): EstimateOutcome {
+/** `bands: false` skips the Monte Carlo bands (the live workspace computes them apart, off the main thread). */
+export interface AssessOptions {
+  bands?: boolean;
+}
+
+export function runEstimate(site: Site, e: Estimate, index: number, options: AssessOptions = {}): EstimateOutcome {
   const method = findCalcMethod(e.method);
   const base = {
     id: e.id, method: e.method, title: e.title ?? method?.title ?? e.method,
@@ -93,7 +98,8 @@ export function runEstimate(site: Site, e: Estimate, index: number): EstimateOut
     const out = runCalc(method, raw);
     const inputs = describeInputs(method, resolveArgs(method, raw), ctx.condition?.name);
     const warnings = [...(ctx.profile?.warnings ?? []), ...out.warnings];
-    const uncertainty = e.uncertainty && Object.keys(e.uncertainty).length ? bandsFromTyped(method, raw, e.uncertainty) : undefined;
+    const wantsBand = options.bands !== false && e.uncertainty && Object.keys(e.uncertainty).length > 0;
+    const uncertainty = wantsBand ? bandsFromTyped(method, raw, e.uncertainty!) : undefined;
     return { ...base, feature, condition, status: 'ok', inputs, results: out.results, warnings: [...new Set(warnings)], sources: out.sources, series: out.series ?? [], ...(uncertainty ? { uncertainty, sources: [...out.sources, MONTE_CARLO_JCGM101.source] } : {}) };
   } catch (err) {
     if (err instanceof InputError || err instanceof ProfileError) return fail(err.message);
@@ -102,7 +108,7 @@ export function runEstimate(site: Site, e: Estimate, index: number): EstimateOut
 }
 
 /** Evaluates every estimate of a site. Deterministic: the same site gives the same numbers. */
-export function assessSite(site: Site, meta: { gprimeVersion: string; siteHash: string }): Assessment {
+export function assessSite(site: Site, meta: { gprimeVersion: string; siteHash: string }, options: AssessOptions = {}): Assessment {
   return {
     format: 'gprime-assessment',
     project: site.project,
@@ -111,7 +117,7 @@ export function assessSite(site: Site, meta: { gprimeVersion: string; siteHash: 
     siteHash: meta.siteHash,
     units: site.units,
     caution: SCREENING_CAUTION,
-    estimates: site.estimates.map((e, i) => runEstimate(site, e, i)),
+    estimates: site.estimates.map((e, i) => runEstimate(site, e, i, options)),
     compliance: siteCompliance(site),
   };
 }

@@ -1,6 +1,6 @@
 import fontkit from '@pdf-lib/fontkit';
 import { PDFDocument, PDFName, rgb, type PDFPage } from 'pdf-lib';
-import type { EstimateSection, QuantityRow, ReportModel } from '../../shared-core/report/model';
+import type { EstimateSection, QuantityRow, ReportModel, UncertaintySection } from '../../shared-core/report/model';
 import { fontBytes } from './assets';
 import { embedRgb, MUTED, PdfWriter, type EmbeddedImage, type Reserved, type TableColumn } from './pdf-layout';
 
@@ -32,6 +32,24 @@ function documentDate(text: string): Date {
   return Number.isFinite(t) ? new Date(t) : new Date(Date.UTC(2000, 0, 1));
 }
 
+const BAND_COLUMNS = (pc: number): TableColumn[] => [
+  { header: 'Result', width: 0.28 },
+  { header: 'Nominal', width: 0.15, align: 'right' },
+  { header: `Low (${(100 - pc) / 2} %)`, width: 0.15, align: 'right' },
+  { header: 'Median', width: 0.15, align: 'right' },
+  { header: `High (${100 - (100 - pc) / 2} %)`, width: 0.15, align: 'right' },
+  { header: 'Unit', width: 0.12 },
+];
+
+function bandBody(w: PdfWriter, u: UncertaintySection): void {
+  const pc = Math.round(u.coverage * 100);
+  w.heading('Uncertainty band', 2, 40);
+  w.text(`${u.caption}: ${u.inputs.map((i) => `${i.name} = ${i.nominal} ± ${i.standardUncertainty}${i.unit ? ' ' + i.unit : ''}`).join('; ')}.`, { size: 9, after: 4 });
+  w.table(BAND_COLUMNS(pc), u.rows.map((r) => [r.name, ...r.shown, r.unit]));
+  for (const warning of u.warnings) w.text(warning, { size: 9, indent: 12, bullet: '!', after: 2 });
+  w.text('The band covers the stated input uncertainties only, not the error of the method itself.', { size: 8.5, color: MUTED, after: 4 });
+}
+
 function sectionBody(w: PdfWriter, s: EstimateSection, images: ReadonlyMap<string, EmbeddedImage>): void {
   const where = [s.feature && `Feature: ${s.feature}`, s.condition && `Condition: ${s.condition}`].filter(Boolean).join(' · ');
   w.text(`Estimate ${s.id} · gprime calc ${s.method}: ${s.methodTitle}${where ? ' · ' + where : ''}`, { size: 9, color: MUTED, after: 6 });
@@ -56,6 +74,7 @@ function sectionBody(w: PdfWriter, s: EstimateSection, images: ReadonlyMap<strin
     const long = s.results.filter((r) => !short.includes(r));
     if (short.length) w.table(QUANTITY_COLUMNS('Result'), short.map(quantityRow));
     for (const r of long) w.text(`${r.name} (${r.description}): ${r.shown}`, { size: 9, after: 4 });
+    if (s.uncertainty) bandBody(w, s.uncertainty);
     w.heading('Validity warnings', 2, 24);
     if (s.warnings.length === 0) w.text('None raised for this estimate.', { size: 9, after: 4 });
     for (const warning of s.warnings) w.text(warning, { size: 9, indent: 12, bullet: '!', after: 2 });

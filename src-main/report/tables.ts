@@ -19,6 +19,23 @@ export function toCsv(rows: readonly (readonly (string | number | null)[])[]): s
 
 const quantityLine = (section: string) => (q: QuantityRow) => [section, q.name, q.description, q.value, q.unit === '1' ? '' : q.unit];
 
+/** Band rows of the CSV: standard uncertainty of each varied input; low, median and high of each result. */
+function uncertaintyLines(s: EstimateSection): (string | number)[][] {
+  const u = s.uncertainty;
+  if (!u) return [];
+  const pc = Math.round(u.coverage * 100);
+  const lo = (100 - pc) / 2;
+  return [
+    ...u.inputs.map((i) => ['input standard uncertainty', i.name, `one standard deviation (nominal ${i.nominal})`, i.standardUncertainty, i.unit]),
+    ...u.rows.flatMap((r) => [
+      [`band low (${lo} %)`, r.name, u.caption, r.values[1], r.unit],
+      ['band median', r.name, u.caption, r.values[2], r.unit],
+      [`band high (${100 - lo} %)`, r.name, u.caption, r.values[3], r.unit],
+    ]),
+    ...u.warnings.map((w) => ['band warning', '', '', w, '']),
+  ];
+}
+
 /** The CSV of one estimate: a row per input and result, then warnings and sources. */
 export function estimateCsv(s: EstimateSection): string {
   return toCsv([
@@ -27,6 +44,7 @@ export function estimateCsv(s: EstimateSection): string {
     ...s.results.map(quantityLine('result')),
     ...(s.error ? [['error', '', '', s.error, '']] : []),
     ...s.warnings.map((w) => ['warning', '', '', w, '']),
+    ...uncertaintyLines(s),
     ...s.methods.map((m) => ['source', m.title ?? '', m.equation ?? '', m.source, '']),
   ]);
 }
@@ -69,6 +87,17 @@ function addQuantities(ws: ExcelJS.Worksheet, title: string, rows: readonly Quan
   ws.addRow([]);
 }
 
+function addBands(ws: ExcelJS.Worksheet, s: EstimateSection): void {
+  const u = s.uncertainty!;
+  ws.addRow(['Uncertainty band', u.caption]).font = { bold: true };
+  ws.addRow(['Input', 'Standard uncertainty (one s.d.)', 'Nominal', 'Unit']).font = { bold: true };
+  for (const i of u.inputs) ws.addRow([i.name, i.standardUncertainty, i.nominal, i.unit]);
+  ws.addRow(['Result', 'Nominal · low · median · high', '', 'Unit']).font = { bold: true };
+  for (const r of u.rows) ws.addRow([r.name, r.values.join(' · '), '', r.unit]);
+  for (const w of u.warnings) ws.addRow(['', w]);
+  ws.addRow([]);
+}
+
 /** The workbook: a "Report" sheet (title block, caution, summary), one sheet per estimate, compliance. */
 export async function buildXlsx(model: ReportModel, projectDate: string): Promise<Buffer> {
   const wb = new ExcelJS.Workbook();
@@ -104,6 +133,7 @@ export async function buildXlsx(model: ReportModel, projectDate: string): Promis
     ws.addRow([]);
     addQuantities(ws, 'Inputs', s.inputs);
     if (s.status === 'ok') addQuantities(ws, 'Results', s.results);
+    if (s.uncertainty) addBands(ws, s);
     ws.addRow(['Validity warnings']).font = { bold: true };
     for (const w of s.warnings) ws.addRow(['', w]);
     if (!s.warnings.length) ws.addRow(['', 'none']);

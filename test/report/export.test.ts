@@ -73,7 +73,9 @@ describe('PDF calc sheet (read back with poppler pdftotext / pdfinfo / pdfimages
       for (const q of s.inputs) expect(text).toContain(q.name);
       for (const m of s.methods) if (m.equation) expect(text).toContain(m.equation.replace(/\s+/g, ' ').slice(0, 40));
       for (const w of s.warnings) expect(text).toContain(w.replace(/\s+/g, ' '));
+      for (const r of s.uncertainty?.rows ?? []) expect(layout).toMatch(new RegExp(`${r.name}\\s+${r.shown.map((v) => v.replace(/[.*+?^${}()|[\]\\]/g, '\\$&')).join('\\s+')}`));
     }
+    expect(model.estimates.filter((s) => s.uncertainty).length).toBeGreaterThan(0);
     expect(text).toContain('Source: Craya, A. (1949)');
   });
 

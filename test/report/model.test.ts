@@ -132,3 +132,24 @@ describe('method equations come from the MethodInfo descriptors', () => {
     }
   });
 });
+
+describe('uncertainty bands in the report model', () => {
+  it('carries each stated input uncertainty and a low ≤ median ≤ high band per numeric result, converted like the results', () => {
+    const si = buildReportModel(quillmere, 'si').estimates.find((s) => s.id === 'plunge-summer')!;
+    const us = buildReportModel(quillmere, 'us').estimates.find((s) => s.id === 'plunge-summer')!;
+    expect(si.uncertainty?.inputs.map((i) => i.name)).toEqual(['discharge']);
+    const depth = si.uncertainty!.rows.find((r) => r.name === 'plunge_depth')!;
+    const [nominal, low, median, high] = depth.values;
+    expect(nominal).toBe(si.results.find((r) => r.name === 'plunge_depth')!.value);
+    expect(low).toBeLessThan(median);
+    expect(median).toBeLessThan(high);
+    // the typed 15 % of the bound discharge, in m³/s and in ft³/s (1 ft³ = 0.028316846592 m³, NIST SP 811 App. B.8)
+    const q = Number(si.inputs.find((r) => r.name === 'discharge')!.value);
+    expect(Number(si.uncertainty!.inputs[0].standardUncertainty)).toBeCloseTo(0.15 * q, 3);
+    expect(us.uncertainty!.rows.find((r) => r.name === 'plunge_depth')!.values[3]).toBeCloseTo(high / FT, 6);
+    expect(si.methods.some((m) => /JCGM 101:2008/.test(m.source))).toBe(true);
+  });
+  it('gives no band where the estimate states no uncertainty', () => {
+    expect(buildReportModel(quillmere, 'si').estimates.find((s) => s.id === 'strat-summer')!.uncertainty).toBeUndefined();
+  });
+});

@@ -129,14 +129,15 @@ describe('exchange with net flow (Armi & Farmer 1986): invariants', () => {
     }), { numRuns: 200 });
   });
   it('rising net flow raises the with-flow layer, lowers the opposing one and moves the virtual control outwards', () => {
-    fc.assert(fc.property(fc.double({ min: 0, max: 0.99, noNaN: true }), fc.double({ min: 1.001, max: 1.5, noNaN: true }), (f, k) => {
-      const q = f * MAXIMAL_EXCHANGE_LIMIT * scale(0.02, 10, 50), q2 = Math.min(q * k + 1e-6, 0.999 * MAXIMAL_EXCHANGE_LIMIT * scale(0.02, 10, 50));
+    fc.assert(fc.property(fc.double({ min: 0.01, max: 0.99, noNaN: true }), fc.double({ min: 1.01, max: 1.5, noNaN: true }), (f, k) => {
+      const q = f * MAXIMAL_EXCHANGE_LIMIT * scale(0.02, 10, 50), q2 = Math.min(q * k, 0.995 * MAXIMAL_EXCHANGE_LIMIT * scale(0.02, 10, 50));
       const a = exchangeWithNetFlowArmiFarmer1986(0.02, 10, 50, q), c = exchangeWithNetFlowArmiFarmer1986(0.02, 10, 50, q2);
       expect(c.upperDischarge.value).toBeGreaterThan(a.upperDischarge.value);
       expect(c.lowerDischarge.value).toBeLessThan(a.lowerDischarge.value);
-      expect(c.virtualControlWidth!).toBeGreaterThanOrEqual(a.virtualControlWidth!);
-      expect(a.virtualControlWidth!).toBeGreaterThanOrEqual(50 * (1 - 1e-9));
+      expect(c.virtualControlWidth!).toBeGreaterThan(a.virtualControlWidth!);
+      expect(a.virtualControlWidth!).toBeGreaterThan(50);
     }), { numRuns: 200 });
+    expect(exchangeWithNetFlowArmiFarmer1986(0.02, 10, 50, 1e-9).virtualControlWidth!).toBeGreaterThanOrEqual(50 * (1 - 1e-12));
   });
   it('reversing the net flow swaps the layers', () => {
     fc.assert(fc.property(fc.double({ min: -0.99, max: 0.99, noNaN: true }), (f) => {

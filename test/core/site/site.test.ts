@@ -26,10 +26,20 @@ describe('site document', () => {
     expect(a.estimates[0].status).toBe('ok');
   });
 
+  it('migrates a version-2 file (no input uncertainties) to version 3 unchanged otherwise', () => {
+    const doc = JSON.parse(read(DEMOS[0]));
+    doc.version = 2;
+    for (const e of doc.estimates) delete e.uncertainty;
+    const site = loadSite(JSON.stringify(doc));
+    expect(site.version).toBe(3);
+    expect(site.estimates.map((e) => e.id)).toEqual(doc.estimates.map((e: { id: string }) => e.id));
+    expect(site.estimates.every((e) => e.uncertainty === undefined)).toBe(true);
+  });
+
   it('refuses a newer version with a clear message', () => {
     const doc = JSON.parse(read(DEMOS[0]));
     doc.version = SITE_VERSION + 1;
-    expect(() => loadSite(JSON.stringify(doc))).toThrow(/version 3; this gprime reads versions up to 2/);
+    expect(() => loadSite(JSON.stringify(doc))).toThrow(new RegExp(`version ${SITE_VERSION + 1}; this gprime reads versions up to ${SITE_VERSION}`));
   });
 
   it('names the place of a malformed value', () => {
