@@ -1,15 +1,36 @@
 import { num, text } from '../calc/resolve';
 import { arg, type CalcMethod, type Series } from '../calc/types';
-import { sampleFront, type FrontSeries } from './front-pieces';
+import { arrivalTime, frontAt, sampleFront, type FrontPiece, type FrontSeries } from './front-pieces';
+import { BRITTER_LINDEN_1980, CONSTANT_FLUX_RELEASE, constantFluxRelease, frontSpeedSlopeBritterLinden1980 } from './flux';
 import { positive } from '../core/range';
 import { GRAVITY } from '../quantities';
 import { kinematicViscosityWater } from '../water/transport';
 import { BENJAMIN_1968, HUPPERT_SIMPSON_1980_FRONT, VON_KARMAN_1940, frontSpeedBenjamin1968, frontSpeedHuppertSimpson1980, frontSpeedVonKarman1940, type FrontSpeed } from './front-speed';
 import { HUPPERT_1982, type SpreadingGeometry } from './viscous';
-import { LOCK_RELEASE_HS1980, lockReleaseFrontAt, lockReleaseHuppertSimpson1980 } from './release';
+import { LOCK_RELEASE_HS1980, lockReleaseHuppertSimpson1980 } from './release';
+import { formatNumber, InputError } from '../core/errors';
 
 const G_PRIME = { kind: 'number', name: 'g_prime', unit: 'm/s2', description: 'reduced gravity g′ (ambient density as reference)', range: { ...positive, max: GRAVITY } } as const;
 const NU_20C = kinematicViscosityWater(20).value;
+const GEOMETRY = { kind: 'choice', name: 'geometry', description: 'planar (channel) or axisymmetric (radial) spreading', choices: ['planar', 'axisymmetric'], default: 'planar' } as const;
+const VISCOSITY = { kind: 'number', name: 'kinematic_viscosity', unit: 'm2/s', description: 'kinematic viscosity of the current (default: water at 20 °C)', default: NU_20C, range: { ...positive, max: 1 } } as const;
+const ARRIVAL = { kind: 'number', name: 'arrival_distance', unit: 'm', description: 'a point of interest: the arrival time of the front there is reported (measured like the front position)', optional: true, range: { ...positive, max: 1e7 } } as const;
+/** The results of a release: front position, speed and phase at the time, and the arrival time at a point. */
+const frontResults = (position: string, phase: string) => [
+  { name: 'front_position', unit: 'm', description: position },
+  { name: 'front_speed', unit: 'm/s', description: 'front speed' },
+  { name: 'phase', unit: '', description: phase },
+  { name: 'arrival_time', unit: 's', description: 'time the front reaches arrival_distance (0 when the point lies inside the release)' },
+];
+
+/** Front state at `time`, its arrival time at the optional point, and the position/speed charts over 0…2·time. */
+function frontReport(pieces: readonly FrontPiece[], time: number, arrival: number | undefined, warnings: string[], sources: string[]) {
+  const s = frontAt(pieces, time);
+  const results: Record<string, ReturnType<typeof num> | ReturnType<typeof text>> = { front_position: num(s.position, 'm'), front_speed: num(s.speed, 'm/s'), phase: text(s.phase) };
+  if (arrival !== undefined) results.arrival_time = num(arrivalTime(pieces, arrival), 's');
+  const horizon = Math.max(2 * time, arrival !== undefined ? 1.2 * arrivalTime(pieces, arrival) : 0);
+  return { results, series: frontSeriesCharts(sampleFront(pieces, Array.from({ length: 121 }, (_, i) => (horizon * i) / 120), [], [])), warnings, sources };
+}
 
 type FrontModel = 'benjamin' | 'huppert-simpson' | 'von-karman';
 
@@ -54,14 +75,11 @@ export const gravityCurrentCalcMethods: CalcMethod[] = [
       { kind: 'number', name: 'lock_depth', unit: 'm', description: 'depth of the released fluid', range: { ...positive, max: 1e4 } },
       { kind: 'number', name: 'total_depth', unit: 'm', description: 'ambient depth (≥ lock_depth; omit for a full-depth lock)', optional: true, range: { ...positive, max: 1e4 } },
       { kind: 'number', name: 'time', unit: 's', description: 'time since release', range: { min: 0, max: 1e9 } },
-      { kind: 'choice', name: 'geometry', description: 'planar (channel) or axisymmetric (radial) spreading', choices: ['planar', 'axisymmetric'], default: 'planar' },
-      { kind: 'number', name: 'kinematic_viscosity', unit: 'm2/s', description: 'kinematic viscosity of the current (default: water at 20 °C)', default: NU_20C, range: { ...positive, max: 1 } },
+      GEOMETRY,
+      VISCOSITY,
+      ARRIVAL,
     ],
-    results: [
-      { name: 'front_position', unit: 'm', description: 'front distance from the back wall of the lock (from the centre when axisymmetric)' },
-      { name: 'front_speed', unit: 'm/s', description: 'front speed' },
-      { name: 'phase', unit: '', description: 'slumping, inertial or viscous' },
-    ],
+    results: frontResults('front distance from the back wall of the lock (from the centre when axisymmetric)', 'slumping, inertial or viscous'),
     run(a) {
       const lockDepth = arg.num(a, 'lock_depth');
       const model = lockReleaseHuppertSimpson1980({
@@ -69,14 +87,34 @@ export const gravityCurrentCalcMethods: CalcMethod[] = [
         totalDepth: arg.optNum(a, 'total_depth') ?? lockDepth,
         geometry: arg.text<SpreadingGeometry>(a, 'geometry'), kinematicViscosity: arg.num(a, 'kinematic_viscosity'),
       });
-      const time = arg.num(a, 'time');
-      const s = lockReleaseFrontAt(model, time);
-      return {
-        results: { front_position: num(s.position, 'm'), front_speed: num(s.speed, 'm/s'), phase: text(s.phase) },
-        series: frontSeriesCharts(sampleFront(model.pieces, Array.from({ length: 121 }, (_, i) => (time * 2 * i) / 120 || 0), [], [])),
-        warnings: model.warnings,
-        sources: [LOCK_RELEASE_HS1980.source, HUPPERT_1982.source],
-      };
+      return frontReport(model.pieces, arg.num(a, 'time'), arg.optNum(a, 'arrival_distance'), model.warnings, [LOCK_RELEASE_HS1980.source, HUPPERT_1982.source]);
+    },
+  },
+  {
+    id: 'flux-release',
+    title: 'Front of a constant-flux release (a steady spill or inflow): horizontal floor or slope',
+    topic: 'gravity-currents',
+    params: [
+      G_PRIME,
+      { kind: 'number', name: 'flux', unit: 'm2/s', description: 'inflow per unit width (planar) or, for axisymmetric spreading, the inflow in m³/s', range: { ...positive, max: 1e6 } },
+      { kind: 'number', name: 'time', unit: 's', description: 'time since the release began', range: { min: 0, max: 1e9 } },
+      GEOMETRY,
+      { kind: 'number', name: 'slope', unit: 'deg', description: 'bed slope down which the current runs (omit or 0 for a horizontal floor; planar only)', default: 0, range: { min: 0, max: 90 } },
+      VISCOSITY,
+      ARRIVAL,
+    ],
+    results: frontResults('front distance from the source', 'inertial or viscous on a horizontal floor; steady on a slope'),
+    run(a) {
+      const [g, flux, slope] = [arg.num(a, 'g_prime'), arg.num(a, 'flux'), arg.num(a, 'slope')];
+      const geometry = arg.text<SpreadingGeometry>(a, 'geometry');
+      if (slope > 0) {
+        if (geometry !== 'planar') throw new InputError('geometry', geometry, '', 'planar', 'the slope current (Britter & Linden 1980) is a line-source current: use geometry=planar');
+        const u = frontSpeedSlopeBritterLinden1980(g, flux, slope);
+        const warnings = [...u.warnings, `Laboratory scatter: ${formatNumber(u.low)} … ${formatNumber(u.high)} m/s.`];
+        return frontReport([{ phase: 'steady', tStart: 0, xStart: 0, c: u.value, m: 0 }], arg.num(a, 'time'), arg.optNum(a, 'arrival_distance'), warnings, [BRITTER_LINDEN_1980.source]);
+      }
+      const r = constantFluxRelease({ gPrime: g, flux, geometry, kinematicViscosity: arg.num(a, 'kinematic_viscosity') });
+      return frontReport(r.pieces, arg.num(a, 'time'), arg.optNum(a, 'arrival_distance'), r.warnings, [CONSTANT_FLUX_RELEASE.source]);
     },
   },
 ];

@@ -84,13 +84,13 @@ function runBuoyantJet(a: CalcArgs): CalcOutput {
 /** Runs the merged-diffuser model for the CLI: regime, merging point, rise and governing dilution. */
 function runDiffuserPlume(a: CalcArgs): CalcOutput {
   const r = diffuserPlume(diffuserInputFromArgs(a));
-  const results: Record<string, ResultValue> = { regime: text(r.regimeText) };
+  // the governing dilution first: cards and summaries show the first numeric result
+  const results: Record<string, ResultValue> = { dilution: num(r.dilution, '1'), dilution_average: num(r.dilutionAverage, '1'), rise_height: num(r.riseHeight, 'm'), regime: text(r.regimeText) };
   if (r.merge) {
     results.merge_height = num(r.merge.z, 'm');
     results.merge_distance = num(r.merge.horizontalDistance, 'm');
     results.merge_dilution = num(r.merge.dilutionCentreline, '1');
   }
-  Object.assign(results, { rise_height: num(r.riseHeight, 'm'), dilution: num(r.dilution, '1'), dilution_average: num(r.dilutionAverage, '1') });
   results.single_port_dilution = num(r.isolated.path.dilutionCentreline[r.isolated.path.dilutionCentreline.length - 1], '1');
   results.outcome = text((r.governing === 'merged' ? r.merged : r.isolated).outcomeText);
   const single = r.isolated.path;
@@ -155,13 +155,13 @@ export const jetCalcMethods: CalcMethod[] = [
       { kind: 'number', name: 'current_angle', unit: 'deg', description: 'angle between the current and the diffuser axis (90: across it, the case modelled)', optional: true, range: { min: 0, max: 90 } },
     ],
     results: [
+      { name: 'dilution', unit: '1', description: 'governing centreline dilution at the end of the near field: the smaller of merged and single-port' },
+      { name: 'dilution_average', unit: '1', description: 'flux-average dilution there' },
+      { name: 'rise_height', unit: 'm', description: 'highest centreline point above the ports (governing path; 0 for a sinking plume)' },
       { name: 'regime', unit: '', description: 'whether the plumes merge and which regime governs, in words' },
       { name: 'merge_height', unit: 'm', description: 'height above the ports where neighbouring plumes merge, negative below (omitted when they do not)' },
       { name: 'merge_distance', unit: 'm', description: 'horizontal distance from the ports where they merge' },
       { name: 'merge_dilution', unit: '1', description: 'centreline dilution where they merge' },
-      { name: 'rise_height', unit: 'm', description: 'highest centreline point above the ports (governing path; 0 for a sinking plume)' },
-      { name: 'dilution', unit: '1', description: 'governing centreline dilution at the end of the near field: the smaller of merged and single-port' },
-      { name: 'dilution_average', unit: '1', description: 'flux-average dilution there' },
       { name: 'single_port_dilution', unit: '1', description: 'centreline dilution of one port without neighbours, at the end of its near field' },
       { name: 'outcome', unit: '', description: 'how the near field ends, in words' },
     ],

@@ -161,7 +161,7 @@ function section(e: EstimateOutcome, number: string, units: UnitSystem): Estimat
 
 function keyResult(s: EstimateSection): string {
   if (s.status === 'error') return `not computed: ${s.error ?? 'error'}`;
-  const r = s.results[0];
+  const r = s.results.find((q) => typeof q.value === 'number') ?? s.results[0];
   if (!r) return '';
   return `${r.name} = ${r.shown}${r.shownUnit ? ' ' + r.shownUnit : ''}`;
 }

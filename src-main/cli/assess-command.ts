@@ -12,7 +12,8 @@ export function summariseAssessment(a: Assessment): string {
       lines.push(`✗ ${e.id} (${e.method}${where ? `; ${where}` : ''}): ${e.error}`);
       continue;
     }
-    const [key, r] = Object.entries(e.results)[0] ?? ['', { value: '', unit: '' }];
+    const entries = Object.entries(e.results);
+    const [key, r] = entries.find(([, v]) => typeof v.value === 'number') ?? entries[0] ?? ['', { value: '', unit: '' }];
     const value = typeof r.value === 'number' ? formatNumber(r.value) : r.value;
     const band = e.uncertainty?.bands.find((b) => b.name === key);
     const bandText = band ? ` (${Math.round(e.uncertainty!.coverage * 100)} % band ${formatNumber(band.low)} … ${formatNumber(band.high)})` : '';

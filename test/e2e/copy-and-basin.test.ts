@@ -1,11 +1,11 @@
 // End-to-end, in Debian's chromium against the browser shell: "Copy table" and "Copy image" in an
 // estimate's detail put tab-separated text with units and a PNG on the clipboard; the section draws the
 // basin's cross-section from the site's area–depth table, and a flat bed without one.
-import { readFileSync, writeFileSync, mkdirSync } from 'node:fs';
+import { readFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import type { Browser, BrowserContext, Page } from 'playwright-core';
-import { launchChromium, ROOT, startShell, tempFolders, type ShellProcess } from './shell-process';
+import type { Page } from 'playwright-core';
+import { openWorkspaceSession, ROOT, type WorkspaceSession } from './shell-process';
 
 // 1 international foot = 0.3048 m exactly (NIST SP 811, 2008, Appendix B.8)
 const FOOT = 0.3048;
@@ -18,16 +18,13 @@ const DEPTH = DEMO.waterBody.depth as number;
 // width √(A/A0) must fall on the straight line 1 − d/D (similar figures: areas scale as lengths squared)
 const CONE = [0, 8, 16, 24, 32, DEPTH].map((d) => ({ depth: d, area: 3.6e6 * (1 - d / DEPTH) ** 2 }));
 
-let folders: ReturnType<typeof tempFolders>;
-let shell: ShellProcess;
-let browser: Browser;
-let context: BrowserContext;
+let session: WorkspaceSession;
 let page: Page;
 
-function writeSite(name: string, change: (site: any) => void): void {
+function siteText(change: (site: any) => void): string {
   const site = structuredClone(DEMO);
   change(site);
-  writeFileSync(join(folders.workspace, name), JSON.stringify(site, null, 2));
+  return JSON.stringify(site, null, 2);
 }
 
 async function open(name: string): Promise<void> {
@@ -53,24 +50,16 @@ async function widthsAndLevels(): Promise<{ width: number[]; y: number[] }> {
 const detail = () => page.getByRole('dialog');
 
 beforeAll(async () => {
-  folders = tempFolders();
-  mkdirSync(folders.workspace, { recursive: true });
-  writeSite('quillmere-reservoir.gpsite', () => {});
-  writeSite('cone-basin.gpsite', (s) => { s.waterBody.hypsography = CONE; });
-  writeSite('no-table.gpsite', (s) => { delete s.waterBody.hypsography; });
-  shell = await startShell(folders.workspace, folders.dataDir);
-  browser = await launchChromium();
-  context = await browser.newContext({ viewport: { width: 1440, height: 900 } });
-  await context.grantPermissions(['clipboard-read', 'clipboard-write'], { origin: new URL(shell.url).origin });
-  page = await context.newPage();
-  await page.goto(shell.url);
-  await page.getByRole('button', { name: 'New', exact: true }).waitFor();
+  session = await openWorkspaceSession({
+    'quillmere-reservoir.gpsite': siteText(() => {}),
+    'cone-basin.gpsite': siteText((s) => { s.waterBody.hypsography = CONE; }),
+    'no-table.gpsite': siteText((s) => { delete s.waterBody.hypsography; }),
+  });
+  ({ page } = session);
 });
 
 afterAll(async () => {
-  await browser?.close();
-  await shell?.stop();
-  folders?.remove();
+  await session?.close();
 });
 
 describe('the basin in the section', () => {

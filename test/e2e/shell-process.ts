@@ -1,8 +1,8 @@
 import { spawn, type ChildProcess } from 'node:child_process';
-import { mkdtempSync, rmSync } from 'node:fs';
+import { mkdirSync, mkdtempSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join, resolve } from 'node:path';
-import { chromium, type Browser } from 'playwright-core';
+import { chromium, type Browser, type BrowserContext, type Page } from 'playwright-core';
 
 export const ROOT = resolve(import.meta.dirname, '..', '..');
 
@@ -47,4 +47,35 @@ export function startShell(workspace: string, dataDir: string, timeoutMs = 120_0
     });
     proc.once('exit', (code) => { clearTimeout(timer); fail(new Error(`the shell exited (${code}) before printing its address\n${out}\n${err}`)); });
   });
+}
+
+/** A browser shell with Chromium on it, the given site files in its workspace and clipboard access granted. */
+export interface WorkspaceSession {
+  folders: ReturnType<typeof tempFolders>;
+  shell: ShellProcess;
+  browser: Browser;
+  context: BrowserContext;
+  page: Page;
+  close(): Promise<void>;
+}
+
+export async function openWorkspaceSession(files: Record<string, string>): Promise<WorkspaceSession> {
+  const folders = tempFolders();
+  mkdirSync(folders.workspace, { recursive: true });
+  for (const [name, text] of Object.entries(files)) writeFileSync(join(folders.workspace, name), text);
+  const shell = await startShell(folders.workspace, folders.dataDir);
+  const browser = await launchChromium();
+  const context = await browser.newContext({ viewport: { width: 1440, height: 900 } });
+  await context.grantPermissions(['clipboard-read', 'clipboard-write'], { origin: new URL(shell.url).origin });
+  const page = await context.newPage();
+  await page.goto(shell.url);
+  await page.getByRole('button', { name: 'New', exact: true }).waitFor();
+  return {
+    folders, shell, browser, context, page,
+    async close() {
+      await browser.close();
+      await shell.stop();
+      folders.remove();
+    },
+  };
 }

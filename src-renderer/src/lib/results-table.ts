@@ -2,7 +2,9 @@ import type { EstimateOutcome } from '../../../shared-core/site/assess';
 import type { ResultValue } from '../../../shared-core/calc/types';
 import type { UnitSystem } from '../../../shared-core/units/units';
 import { SCREENING_CAUTION } from '../../../shared-core/core/caution';
+import type { UncertaintyResult } from '../../../shared-core/uncertainty';
 import { showQuantity, words } from './format';
+import { BAND_NOTE, bandTableRows } from './band-text';
 
 /** Tabs and line breaks would split a spreadsheet cell: they become spaces. */
 const cell = (s: string): string => s.replace(/[\t\r\n]+/g, ' ').trim();
@@ -18,13 +20,15 @@ function rows(values: Record<string, ResultValue>, system: UnitSystem): string[]
 /**
  * An estimate's results and inputs as tab-separated text that pastes into a spreadsheet: one
  * name / value / unit row per quantity, in the display units and digits the workspace shows, then its
- * warnings, method, sources and the screening caution, so a pasted table never loses them.
+ * warnings, method, sources and the screening caution, so a pasted table never loses them. A computed
+ * uncertainty band adds its low / median / high rows, the input uncertainties and its warnings.
  */
-export function resultsTableText(o: EstimateOutcome, system: UnitSystem, methodTitle = ''): string {
+export function resultsTableText(o: EstimateOutcome, system: UnitSystem, methodTitle = '', band?: UncertaintyResult): string {
   const where = [o.feature?.name, o.condition?.name].filter(Boolean).join(' · ');
   const lines = [[cell(o.title), cell(where)].join('\t'), ['result', 'value', 'unit'].join('\t'), ...rows(o.results, system)];
   if (o.status === 'error') lines.push(['cannot compute', cell(o.error ?? '')].join('\t'));
   lines.push('', ['input', 'value', 'unit'].join('\t'), ...rows(o.inputs, system), '');
+  if (band) lines.push(...bandTableRows(band, system, (name) => o.inputs[name]?.unit ?? '1'), ['band note', BAND_NOTE].join('\t'), '');
   lines.push(...o.warnings.map((w) => ['warning', cell(w)].join('\t')));
   lines.push(['method', cell(methodTitle ? `${o.method}: ${methodTitle}` : o.method)].join('\t'));
   lines.push(...o.sources.map((s) => ['source', cell(s)].join('\t')));

@@ -3,6 +3,7 @@ import { SCREENING_CAUTION } from '../../../shared-core/core/caution';
 import type { UnitSystem } from '../../../shared-core/units/units';
 import { drawEstimate, type EstimateDrawing } from '../lib/estimate-curves';
 import { SiteDocument } from './document.svelte';
+import { BandStore } from './bands.svelte';
 
 export type Selection =
   | { kind: 'project' }
@@ -19,11 +20,11 @@ export interface Notice {
 /** Runs every estimate; an unexpected failure of one estimate never hides the others. */
 function assess(site: Site): Assessment {
   try {
-    return assessSite(site, { gprimeVersion: 'workspace', siteHash: '' });
+    return assessSite(site, { gprimeVersion: 'workspace', siteHash: '' }, { bands: false });
   } catch {
     const estimates: EstimateOutcome[] = site.estimates.map((e, i) => {
       try {
-        return runEstimate(site, e, i);
+        return runEstimate(site, e, i, { bands: false });
       } catch (err) {
         return { id: e.id, method: e.method, title: e.title ?? e.method, status: 'error', inputs: {}, results: {}, warnings: [], sources: [], series: [], error: `could not be computed (${String(err)})` };
       }
@@ -35,6 +36,8 @@ function assess(site: Site): Assessment {
 /** The workspace: the open document, what is selected, the condition shown, and the live assessment. */
 export class Workspace {
   doc = new SiteDocument();
+  /** Monte Carlo uncertainty bands, computed apart in a worker (the live assessment runs without them) */
+  bands = new BandStore();
   selection = $state<Selection>({ kind: 'waterBody' });
   /** the condition the section and readouts show */
   conditionChoice = $state<string | null>(null);
