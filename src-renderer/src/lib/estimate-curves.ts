@@ -2,7 +2,6 @@ import type { EstimateOutcome } from '../../../shared-core/site/assess';
 import { conditionProfile } from '../../../shared-core/site/context';
 import type { Site } from '../../../shared-core/site/schema';
 import { buoyantJetTrajectory } from '../../../shared-core/jets/buoyant-jet';
-import { withdrawalVelocityProfile } from '../../../shared-core/withdrawal/outflow';
 import type { Profile } from '../../../shared-core/profile/profile';
 import { readQuantity } from './quantity';
 
@@ -54,22 +53,18 @@ function plume(site: Site, o: EstimateOutcome): Partial<EstimateDrawing> {
   };
 }
 
-/** Port depths and flows from the release-blend method's 'Port flows' curve. */
-function portFlows(o: EstimateOutcome): { depth: number; flow: number }[] {
-  const s = o.series.find((c) => c.title === 'Port flows');
-  if (!s) return [];
-  return s.x.values.map((depth, i) => ({ depth, flow: s.y[0].values[i] }));
-}
-
-function withdrawalBands(site: Site, o: EstimateOutcome): Partial<EstimateDrawing> {
-  const profile = profileOf(site, o);
+/**
+ * Withdrawal zones from the release-blend method's own outflow curves (one per open port, or one per group of
+ * interfering ports), so the section shows exactly what the estimate computed.
+ */
+function withdrawalBands(_site: Site, o: EstimateOutcome): Partial<EstimateDrawing> {
   const featureId = o.feature?.id ?? '';
-  if (!profile) return {};
   const marks: SectionMark[] = [];
-  portFlows(o).forEach(({ depth, flow }, port) => {
-    if (!(flow > 0)) return;
-    const v = withdrawalVelocityProfile(profile, depth, flow, { sink: 'point' });
-    marks.push({ kind: 'band', featureId, port, top: v.limits.topDepth, bottom: v.limits.bottomDepth, label: `port at ${depth.toFixed(1)} m` });
+  o.series.filter((c) => c.y[0]?.label === 'Outflow per metre of depth').forEach((c, port) => {
+    const drawn = c.x.values.filter((_d, i) => c.y[0].values[i] > 0);
+    if (drawn.length === 0) return;
+    const label = c.title.replace(/^Withdrawal at the /, '').replace(/^Combined withdrawal of the /, 'combined: ');
+    marks.push({ kind: 'band', featureId, port, top: Math.min(...drawn), bottom: Math.max(...drawn), label });
   });
   return { marks };
 }
@@ -83,8 +78,17 @@ function layerBand(site: Site, o: EstimateOutcome): Partial<EstimateDrawing> {
   return { marks: [{ kind: 'band', featureId: f.id, port: 0, top: depth - thickness / 2, bottom: depth + thickness / 2, label: 'withdrawal layer' }] };
 }
 
+/** A diffuser's governing centreline from its own 'Plume centreline' curve (width not drawn: it is a row of plumes). */
+function diffuserPath(_site: Site, o: EstimateOutcome): Partial<EstimateDrawing> {
+  const c = o.series.find((x) => x.title === 'Plume centreline');
+  if (!c || c.x.values.length < 2) return {};
+  // no end label: the single-port path of the same outfall usually ends close by and carries one
+  return { marks: [{ kind: 'path', featureId: o.feature?.id ?? '', x: c.x.values, depth: c.y[0].values, radius: c.x.values.map(() => 0), label: o.title }] };
+}
+
 const BUILDERS: Record<string, (site: Site, o: EstimateOutcome) => Partial<EstimateDrawing>> = {
   'buoyant-jet': plume,
+  'diffuser-plume': diffuserPath,
   'release-blend': withdrawalBands,
   'withdrawal-layer': layerBand,
   'profile-summary': (_s, o) => ({
