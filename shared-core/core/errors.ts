@@ -24,3 +24,8 @@ export function formatNumber(x: number): string {
   if (a >= 1e6 || a < 1e-3) return x.toExponential(3).replace(/\.?0+e/, 'e');
   return String(Number(x.toPrecision(6)));
 }
+
+/** A length or flow in running text: four significant figures ("29.87", not "29.8704"). */
+export function formatShort(x: number): string {
+  return Number.isFinite(x) ? formatNumber(Number(x.toPrecision(4))) : String(x);
+}

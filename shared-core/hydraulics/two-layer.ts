@@ -7,7 +7,6 @@ import { scalar, validityWarnings, type MethodInfo, type Scalar } from '../core/
 const GP = { min: 1e-6, max: 20 };
 const DEPTH = { min: 1e-3, max: 11000 };
 const SPEED = { min: -100, max: 100 };
-const WIDTH = { min: 1e-3, max: 1e5 };
 
 export const COMPOSITE_FROUDE: MethodInfo = {
   id: 'composite-froude',

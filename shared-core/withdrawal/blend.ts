@@ -1,4 +1,4 @@
-import { InputError, formatNumber } from '../core/errors';
+import { InputError, formatNumber, formatShort } from '../core/errors';
 import { nonNegative, positive, requireInRange } from '../core/range';
 import type { MethodInfo } from '../core/method';
 import { brentRoot } from '../numerics/roots';
@@ -55,12 +55,12 @@ function checkPorts(ports: readonly Port[]): void {
 /** Each port's outflow for a split, with the interference groups and their warnings. */
 function releaseOutflows(ports: readonly Port[], flows: readonly number[], o: BlendOptions, outflow: OutflowFunction): { outs: PortOutflow[]; groups: InterferenceGroup[]; warnings: string[] } {
   const depths = ports.map((port) => port.depth);
-  const name = (g: InterferenceGroup) => g.ports.map((i) => `${formatNumber(depths[i])} m`).join(', ').replace(/, ([^,]*)$/, ' and $1');
+  const name = (g: InterferenceGroup) => g.ports.map((i) => `${formatShort(depths[i])} m`).join(', ').replace(/, ([^,]*)$/, ' and $1');
   if (o.interference === 'combined') {
     const { outflows, groups } = combinedOutflows(depths, flows, outflow);
     const warnings = groups.filter((g) => g.ports.length > 1).map((g) =>
       `The ports at ${name(g)} interfere (their withdrawal layers overlap): they are taken as one withdrawal of ${formatNumber(g.flow)} m3/s ` +
-      `from ${formatNumber(g.topDepth)} m to ${formatNumber(g.bottomDepth)} m, each port drawing on a layer computed at that combined flow.`);
+      `from ${formatShort(g.topDepth)} m to ${formatShort(g.bottomDepth)} m, each port drawing on a layer computed at that combined flow.`);
     return { outs: outflows, groups, warnings };
   }
   const outs = ports.map((port, i) => outflow(port.depth, flows[i]));

@@ -1,6 +1,6 @@
 import { num, text } from '../calc/resolve';
 import { arg, type CalcMethod, type Series } from '../calc/types';
-import { InputError } from '../core/errors';
+import { formatShort, InputError } from '../core/errors';
 import { positive } from '../core/range';
 import { criticalDischargeCraya1949, CRAYA_1949, SINK_POSITIONS, type SinkKind, type SinkPosition } from './two-layer';
 import { withdrawalLayer, WITHDRAWAL_LINE_SINK, WITHDRAWAL_POINT_SINK } from './layer';
@@ -87,7 +87,7 @@ export const withdrawalCalcMethods: CalcMethod[] = [
       const ports = parsePorts(arg.text(a, 'ports'));
       const interference = arg.text<InterferenceMode>(a, 'interference');
       const r = optimiseRelease(p, ports, arg.num(a, 'release'), { temperature: arg.num(a, 'target_temperature') }, { sink: 'point', interference });
-      const flows = ports.map((port, i) => `${port.depth} m: ${r.flows[i].toFixed(2)} m3/s`).join('; ');
+      const flows = ports.map((port, i) => `${formatShort(port.depth)} m: ${r.flows[i].toFixed(2)} m3/s`).join('; ');
       const warnings = [`Ports are treated as orifices (point sinks); ${interference === 'combined' ? 'ports whose withdrawal layers overlap are combined (from memory, see the sources)' : 'interference between their withdrawal layers is ignored'}.`, ...r.warnings];
       return {
         results: { temperature: num(r.temperature, 'degC'), port_flows: text(flows), feasible: text(r.feasible ? 'yes' : 'no') },
@@ -115,14 +115,14 @@ export function releaseSeries(p: Profile, ports: readonly Port[], flows: readonl
     if (!(flows[i] > 0) || combined.some((g) => g.ports.includes(i))) return;
     const v = withdrawalVelocityProfile(p, port.depth, flows[i], { sink: 'point' });
     out.push({
-      title: `Withdrawal at the port at ${port.depth} m`, x: { label: 'Depth', unit: 'm', values: v.depth },
+      title: `Withdrawal at the port at ${formatShort(port.depth)} m`, x: { label: 'Depth', unit: 'm', values: v.depth },
       y: [{ label: 'Outflow per metre of depth', unit: 'm2/s', values: v.fluxPerDepth }], depthAxis: true,
-      caption: `Velocity distribution in the withdrawal layer of the port at ${port.depth} m (${flows[i].toFixed(2)} m³/s)`,
+      caption: `Velocity distribution in the withdrawal layer of the port at ${formatShort(port.depth)} m (${flows[i].toFixed(2)} m³/s)`,
     });
   });
   for (const g of combined) {
     const v = groupFluxProfile(p, depths, flows, g, { sink: 'point' });
-    const names = g.ports.map((i) => `${depths[i]} m`).join(', ');
+    const names = g.ports.map((i) => `${formatShort(depths[i])} m`).join(', ');
     out.push({
       title: `Combined withdrawal of the ports at ${names}`, x: { label: 'Depth', unit: 'm', values: v.depth },
       y: [{ label: 'Outflow per metre of depth', unit: 'm2/s', values: v.fluxPerDepth }], depthAxis: true,

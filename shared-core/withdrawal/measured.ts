@@ -1,4 +1,4 @@
-import { InputError } from '../core/errors';
+import { formatShort, InputError } from '../core/errors';
 import { nonNegative, positive, requireInRange } from '../core/range';
 import type { MethodInfo } from '../core/method';
 import { GRAVITY } from '../quantities';
@@ -119,8 +119,8 @@ export function withdrawalLimitsBohanGrace1973(p: Profile, portDepth: number, di
   const upper = sideLimit(p, portDepth, discharge, o, -1, portDepth);
   const lower = sideLimit(p, portDepth, discharge, o, 1, bed - portDepth);
   const warnings: string[] = [];
-  if (upper.cutByBoundary && portDepth > 0 && discharge > 0) warnings.push(`The withdrawal layer of the port at ${portDepth} m reaches the surface: water is drawn from the surface down.`);
-  if (lower.cutByBoundary && bed > portDepth && discharge > 0) warnings.push(`The withdrawal layer of the port at ${portDepth} m reaches the bed at ${bed} m.`);
+  if (upper.cutByBoundary && portDepth > 0 && discharge > 0) warnings.push(`The withdrawal layer of the port at ${formatShort(portDepth)} m reaches the surface: water is drawn from the surface down.`);
+  if (lower.cutByBoundary && bed > portDepth && discharge > 0) warnings.push(`The withdrawal layer of the port at ${formatShort(portDepth)} m reaches the bed at ${formatShort(bed)} m.`);
   if (p.depth[0] > 0 && portDepth - upper.distance < p.depth[0]) warnings.push(`The layer reaches above the shallowest sample (${p.depth[0]} m); the shallowest values are used up to the surface.`);
   return { portDepth, discharge, topDepth: portDepth - upper.distance, bottomDepth: portDepth + lower.distance, upper, lower, method: WITHDRAWAL_MEASURED_PROFILE.id, warnings: [...p.warnings, ...warnings] };
 }
