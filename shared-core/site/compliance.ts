@@ -33,10 +33,12 @@ export function siteCompliance(site: Site): ComplianceRow[] {
         const distance = si(`features[${index}].mixingZone.distance`, feature.mixingZone.distance, 'm');
         const edge: MixingZoneBoundary = { distance, measure: 'horizontal' };
         let boundary: BoundaryDilution;
+        let model = '';
         if (feature.ports > 1) {
           const d = diffuserPlume(diffuserInputFromArgs(resolveArgs(diffuser, boundArgs(diffuser.id, ctx))));
           const [a, b] = [dilutionAtBoundary(d.merged, edge), dilutionAtBoundary(d.isolated, edge)];
           boundary = a.dilutionCentreline <= b.dilutionCentreline ? a : b;
+          model = `${feature.ports} ports, ${boundary === a && d.merge ? 'merged plumes' : 'single-port plume'} (the smaller dilution); `;
         } else {
           boundary = dilutionAtBoundary(buoyantJetTrajectory(buoyantJetInputFromArgs(resolveArgs(method, boundArgs(method.id, ctx)))), edge);
         }
@@ -44,7 +46,7 @@ export function siteCompliance(site: Site): ComplianceRow[] {
         for (const r of table.rows) {
           rows.push({
             ...base, constituent: r.constituent, unit: r.unit, requiredDilution: r.requiredDilution ?? null,
-            achievedDilution: r.achievedDilution, margin: r.margin ?? null, verdict: r.verdict, note: r.note,
+            achievedDilution: r.achievedDilution, margin: r.margin ?? null, verdict: r.verdict, note: model + r.note,
           });
         }
       } catch (e) {
