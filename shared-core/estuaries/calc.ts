@@ -4,9 +4,8 @@ import { positive } from '../core/range';
 import { GRAVITY } from '../quantities';
 import { DEFAULT_INTERFACIAL_FRICTION, SCHIJF_SCHONFELD_1953, saltWedgeLengthSchijfSchonfeld1953, saltWedgeProfile } from './salt-wedge';
 import { FISCHER_1972, estuarineRichardsonFischer1972 } from './richardson';
-import { FARMER_ARMI_1986, maximalExchangeSillFarmerArmi1986 } from './exchange';
 import { ARMI_FARMER_1986_NET_FLOW, exchangeNetFlowCurve, exchangeWithNetFlowArmiFarmer1986 } from './exchange-net-flow';
-import { InputError } from '../core/errors';
+import { FARMER_ARMI_1986_SILL_NET_FLOW, exchangeSillNetFlowCurve, exchangeSillWithNetFlowFarmerArmi1986 } from './exchange-sill-net-flow';
 
 const G_PRIME = { kind: 'number', name: 'g_prime', unit: 'm/s2', description: 'reduced gravity between sea and river water', range: { ...positive, max: GRAVITY } } as const;
 
@@ -66,8 +65,9 @@ export const estuaryCalcMethods: CalcMethod[] = [
       { kind: 'number', name: 'depth', unit: 'm', description: 'depth at the control (contraction depth or sill-crest depth)', range: { ...positive, max: 1e4 } },
       { kind: 'number', name: 'width', unit: 'm', description: 'width at the control', range: { ...positive, max: 1e6 } },
       { kind: 'choice', name: 'control', description: 'narrowest section of a flat channel, or a sill', choices: ['contraction', 'sill'], default: 'contraction' },
-      { kind: 'number', name: 'net_discharge', unit: 'm3/s', description: 'net (barotropic) discharge Q0 = Q_upper − Q_lower, positive in the direction the upper (lighter) layer flows, e.g. a river outflow; contraction only', default: 0, range: { min: -1e9, max: 1e9 } },
+      { kind: 'number', name: 'net_discharge', unit: 'm3/s', description: 'net (barotropic) discharge Q0 = Q_upper − Q_lower, positive in the direction the upper (lighter) layer flows, e.g. a river outflow', default: 0, range: { min: -1e9, max: 1e9 } },
       { kind: 'number', name: 'end_width', unit: 'm', description: 'channel width at its ends, where it meets the reservoirs (checks that the virtual control fits; contraction only)', optional: true, range: { ...positive, max: 1e7 } },
+      { kind: 'number', name: 'reservoir_depth', unit: 'm', description: 'depth of the dense-side basin beyond the sill, more than the crest depth (sill only; default: a deep basin)', optional: true, range: { ...positive, max: 1e5 } },
     ],
     results: [
       { name: 'exchange_discharge', unit: 'm3/s', description: 'discharge of the opposing (smaller) layer: the two-way exchange; equal each way without net flow' },
@@ -76,23 +76,18 @@ export const estuaryCalcMethods: CalcMethod[] = [
     ],
     run(a) {
       const [g, h, b, q0] = [arg.num(a, 'g_prime'), arg.num(a, 'depth'), arg.num(a, 'width'), arg.num(a, 'net_discharge')];
-      if (arg.text(a, 'control') === 'sill') {
-        if (q0 !== 0) throw new InputError('net_discharge', q0, 'm3/s', '0 with control = sill', 'a net flow over a sill (Farmer & Armi 1986, sill with barotropic flow) is not implemented; use net_discharge = 0 or control = contraction');
-        const r = maximalExchangeSillFarmerArmi1986(g, h, b);
-        const q = num(r.discharge.value, 'm3/s');
-        return { results: { exchange_discharge: q, upper_layer_discharge: q, lower_layer_discharge: q }, warnings: r.discharge.warnings, sources: [FARMER_ARMI_1986.source] };
-      }
-      const r = exchangeWithNetFlowArmiFarmer1986(g, h, b, q0, arg.optNum(a, 'end_width'));
-      const curve = exchangeNetFlowCurve(g, h, b);
+      const sill = arg.text(a, 'control') === 'sill';
+      const r = sill ? exchangeSillWithNetFlowFarmerArmi1986(g, h, b, q0, arg.optNum(a, 'reservoir_depth')) : exchangeWithNetFlowArmiFarmer1986(g, h, b, q0, arg.optNum(a, 'end_width'));
+      const curve = sill ? exchangeSillNetFlowCurve(g, h, b, arg.optNum(a, 'reservoir_depth')) : exchangeNetFlowCurve(g, h, b);
       const series: Series[] = [{
         title: 'Layer discharges against net flow', x: { label: 'Net discharge Q0 (positive with the upper layer)', unit: 'm3/s', values: curve.net },
         y: [{ label: 'Upper layer', unit: 'm3/s', values: curve.upper }, { label: 'Lower layer', unit: 'm3/s', values: curve.lower }],
-        caption: 'Maximal exchange through the contraction; at either end the opposing layer stops (one-way flow)',
+        caption: `Maximal exchange ${sill ? 'over the sill' : 'through the contraction'}; at either end the opposing layer stops (one-way flow)`,
       }];
       const [up, low] = [r.upperDischarge.value, r.lowerDischarge.value];
       return {
         results: { exchange_discharge: num(Math.min(up, low), 'm3/s'), upper_layer_discharge: num(up, 'm3/s'), lower_layer_discharge: num(low, 'm3/s') },
-        warnings: r.warnings, sources: [ARMI_FARMER_1986_NET_FLOW.source], series,
+        warnings: r.warnings, sources: [(sill ? FARMER_ARMI_1986_SILL_NET_FLOW : ARMI_FARMER_1986_NET_FLOW).source], series,
       };
     },
   },

@@ -113,6 +113,17 @@ export interface NetFlowExchange {
   warnings: string[];
 }
 
+/** The inputs shared by the net-flow exchange solutions, range-checked (InputError naming the field). */
+export function checkedExchangeInputs(gPrime: number, depth: number, width: number, netDischarge: number) {
+  // lower bounds keep g′H³ clear of underflow; smaller values are not physical here
+  return {
+    g: requireInRange('g_prime', gPrime, 'm/s2', { min: 1e-6, max: GRAVITY }),
+    depth: requireInRange('depth', depth, 'm', { min: 1e-3, max: 1e4 }),
+    width: requireInRange('width', width, 'm', { min: 1e-3, max: 1e6 }),
+    netDischarge: requireInRange('net_discharge', netDischarge, 'm3/s', { min: -1e9, max: 1e9 }),
+  };
+}
+
 /**
  * Layer discharges of maximal two-layer exchange through a contraction with net flow Q0.
  * @param gPrime [m/s2]; @param depth [m] H (flat bottom); @param narrowsWidth [m] b_min
@@ -123,11 +134,7 @@ export interface NetFlowExchange {
  * @validity Boussinesq, rigid lid, frictionless, no mixing, slowly varying width; |Q0| < (2/3)^{3/2} b√(g′H³)
  */
 export function exchangeWithNetFlowArmiFarmer1986(gPrime: number, depth: number, narrowsWidth: number, netDischarge: number, endWidth?: number): NetFlowExchange {
-  // lower bounds keep g′H³ clear of underflow; smaller values are not physical here
-  const g = requireInRange('g_prime', gPrime, 'm/s2', { min: 1e-6, max: GRAVITY });
-  const H = requireInRange('depth', depth, 'm', { min: 1e-3, max: 1e4 });
-  const b = requireInRange('width', narrowsWidth, 'm', { min: 1e-3, max: 1e6 });
-  const Q0 = requireInRange('net_discharge', netDischarge, 'm3/s', { min: -1e9, max: 1e9 });
+  const { g, depth: H, width: b, netDischarge: Q0 } = checkedExchangeInputs(gPrime, depth, narrowsWidth, netDischarge);
   const bEnd = endWidth === undefined ? undefined : requireInRange('end_width', endWidth, 'm', { min: b, max: 1e7 });
   const scale = b * Math.sqrt(g * H ** 3), s = Math.abs(Q0) / scale, upperWithFlow = Q0 >= 0;
   const flushingDischarge = MAXIMAL_EXCHANGE_LIMIT * scale;

@@ -3,3 +3,4 @@ export * from './richardson';
 export * from './exchange';
 export * from './lock';
 export * from './exchange-net-flow';
+export * from './exchange-sill-net-flow';

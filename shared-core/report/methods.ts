@@ -20,6 +20,7 @@ import * as waves3 from '../internal-waves/basin';
 import * as hydraulics1 from '../hydraulics/obstacle';
 import * as hydraulics2 from '../hydraulics/two-layer';
 import * as estuary5 from '../estuaries/exchange-net-flow';
+import * as estuary6 from '../estuaries/exchange-sill-net-flow';
 import * as hydraulics3 from '../hydraulics/jump-finite-depth';
 import * as hydraulics4 from '../hydraulics/weir-withdrawal';
 import * as withdrawal1 from '../withdrawal/outflow';
@@ -45,7 +46,7 @@ import * as uncertainty from '../uncertainty/propagate';
  */
 const MODULES: readonly Record<string, unknown>[] = [
   water1, water2, water3, water4, water5, water6, profile, gravity1, gravity2, gravity3, gravity4,
-  estuary1, estuary2, estuary3, estuary4, estuary5, waves1, waves2, waves3, hydraulics1, hydraulics2, hydraulics3, hydraulics4,
+  estuary1, estuary2, estuary3, estuary4, estuary5, estuary6, waves1, waves2, waves3, hydraulics1, hydraulics2, hydraulics3, hydraulics4,
   withdrawal1, withdrawal2, withdrawal3, withdrawal4, withdrawal5, withdrawal6, jets1, jets2, jets3, jets4,
   inflows1, inflows2, inflows3, mixing, uncertainty,
 ];

@@ -157,10 +157,8 @@ const BINDINGS: Record<string, Binding> = {
     const c = feature(ctx, 'channel');
     if (!c) return {};
     const a = channelArgs(ctx, c);
-    // the river's discharge is the net flow, outwards with the light upper layer (Armi & Farmer 1986 sign);
-    // the sill solution with a net flow is not implemented, so a sill gets none
-    if (c.form === 'sill') return { g_prime: a.g_prime, depth: a.depth, width: a.width, control: 'sill' };
-    return { g_prime: a.g_prime, depth: a.depth, width: a.width, control: 'contraction', net_discharge: a.river_discharge };
+    // the river's discharge is the net flow, outwards with the light upper layer (Armi & Farmer 1986 sign)
+    return { g_prime: a.g_prime, depth: a.depth, width: a.width, control: c.form === 'sill' ? 'sill' : 'contraction', net_discharge: a.river_discharge };
   },
 };
 

@@ -21,6 +21,12 @@ describe('gprime calc: estuaries', () => {
     expect(r.json.results.exchange_discharge.unit).toBe('m3/s');
     expect(r.json.results.exchange_discharge.value / (100 * Math.sqrt(0.05 * 1000))).toBeCloseTo(0.20799, 4);
   });
+  it('exchange-flow over a sill with a river outflow matches the scipy solve (generators/sill_exchange_net_flow.py)', () => {
+    const r = runGprime(['calc', 'exchange-flow', 'g_prime=0.02', 'depth=10', 'width=50', 'control=sill', 'net_discharge=67.08203932499369', 'reservoir_depth=25', '--json']);
+    expect(r.code).toBe(0);
+    expect(Math.abs(r.json.results.lower_layer_discharge.value / 22.28189016607016 - 1)).toBeLessThan(1e-8);
+    expect(Math.abs(r.json.results.upper_layer_discharge.value / 89.36392949106384 - 1)).toBeLessThan(1e-8);
+  });
   it('refuses an unknown control (exit 2)', () => {
     const r = runGprime(['calc', 'exchange-flow', 'g_prime=0.05', 'depth=10', 'width=100', 'control=weir', '--json']);
     expect(r.code).toBe(2);

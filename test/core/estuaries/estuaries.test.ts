@@ -4,7 +4,7 @@ import { runCheckValues } from '../../helpers/check-values';
 import {
   saltWedgeLengthSchijfSchonfeld1953, saltWedgeProfile, saltWedgeLengthCurve, estuarineRichardsonFischer1972, estuaryClass,
   maximalExchangeContractionArmiFarmer1986, maximalExchangeSillFarmerArmi1986, navigationLockExchange, type SaltWedgeInput,
-  exchangeWithNetFlowArmiFarmer1986, MAXIMAL_EXCHANGE_LIMIT,
+  exchangeWithNetFlowArmiFarmer1986, MAXIMAL_EXCHANGE_LIMIT, exchangeSillWithNetFlowFarmerArmi1986,
 } from '../../../shared-core/estuaries';
 import { compositeFroudeArmi1986 } from '../../../shared-core/hydraulics/two-layer';
 import { findCalcMethod } from '../../../shared-core/calc/registry';
@@ -49,6 +49,18 @@ runCheckValues('estuaries', 'exchange-contraction-net-flow-armi-farmer-1986', (i
     case 'virtual_width': return r.virtualControlWidth ?? NaN;
     case 'upper_at_narrows': return r.upperThicknessAtNarrows ?? NaN;
     default: return r.flushingDischarge;
+  }
+});
+
+runCheckValues('estuaries', 'exchange-sill-net-flow-farmer-armi-1986', (i) => {
+  const r = exchangeSillWithNetFlowFarmerArmi1986(n(i.g_prime), n(i.depth), n(i.width), n(i.net_discharge), i.reservoir_depth === undefined ? undefined : n(i.reservoir_depth));
+  switch (i.output) {
+    case 'upper': return r.upperDischarge.value;
+    case 'lower': return r.lowerDischarge.value;
+    case 'upper_at_crest': return r.upperThicknessAtCrest ?? NaN;
+    case 'upper_at_foot': return r.upperThicknessAtFoot ?? NaN;
+    case 'flushing_upper': return r.flushingWithUpper;
+    default: return r.flushingWithLower;
   }
 });
 
@@ -168,15 +180,80 @@ describe('exchange with net flow (Armi & Farmer 1986): invariants', () => {
     expect(r.warnings.join(' ')).toMatch(/submaximal/);
     expect(exchangeWithNetFlowArmiFarmer1986(0.02, 10, 50, q0, 1.1 * free.virtualControlWidth!).regime).toBe('maximal');
   });
-  it('calc: net_discharge for a contraction, refused for a sill; the series spans the maximal-exchange range', () => {
+  it('calc: net_discharge for a contraction; the series spans the maximal-exchange range', () => {
     const m = findCalcMethod('exchange-flow')!;
     const out = runCalc(m, { g_prime: '0.02', depth: '10', width: '50', net_discharge: '30' });
     const { upper_layer_discharge: up, lower_layer_discharge: low, exchange_discharge: ex } = out.results;
     expect((up.value as number) - (low.value as number)).toBeCloseTo(30, 9);
     expect(ex.value).toBe(low.value);
     expect(out.series![0].x.values[0]).toBeCloseTo(-MAXIMAL_EXCHANGE_LIMIT * scale(0.02, 10, 50), 9);
-    expect(() => runCalc(m, { g_prime: '0.02', depth: '10', width: '50', control: 'sill', net_discharge: '30' })).toThrow(/not implemented/);
-    expect(runCalc(m, { g_prime: '0.02', depth: '10', width: '50', control: 'sill' }).results.exchange_discharge.value).toBeGreaterThan(0);
+  });
+});
+
+describe('exchange over a sill with net flow (Farmer & Armi 1986 conditions): invariants', () => {
+  const scale = (g: number, d: number, b: number) => b * Math.sqrt(g * d ** 3);
+  // G² = F1² + F2² (Armi 1986), written out: the shared helper refuses layers thinner than 1 mm
+  const G2 = (up: number, low: number, h1: number, h2: number, b: number, g: number) => (up / b) ** 2 / (g * h1 ** 3) + (low / b) ** 2 / (g * h2 ** 3);
+  // basin depth ratio H/D from just above 1 to 100, or a deep basin (undefined)
+  const basin = fc.oneof(fc.constant(undefined), fc.double({ min: 1.001, max: 100, noNaN: true }));
+  it('Q1 − Q2 = Q0; G² = 1 at the crest and at the foot; E equal at both; exchange largest with no net flow', () => {
+    fc.assert(fc.property(fc.double({ min: 1e-3, max: 1, noNaN: true }), fc.double({ min: 1, max: 100, noNaN: true }), fc.double({ min: 1, max: 1e4, noNaN: true }), basin, fc.double({ min: -0.999, max: 0.999, noNaN: true }), (g, d, b, k, f) => {
+      const H = k === undefined ? undefined : k * d;
+      const zero = exchangeSillWithNetFlowFarmerArmi1986(g, d, b, 0, H);
+      const q0 = f > 0 ? f * zero.flushingWithUpper : -f * zero.flushingWithLower;
+      const r = exchangeSillWithNetFlowFarmerArmi1986(g, d, b, q0, H);
+      const [up, low] = [r.upperDischarge.value, r.lowerDischarge.value];
+      expect(r.regime).toBe('maximal');
+      expect(Math.abs(up - low - q0)).toBeLessThanOrEqual(1e-9 * scale(g, d, b));
+      expect(Math.abs(G2(up, low, r.upperThicknessAtCrest!, d - r.upperThicknessAtCrest!, b, g) - 1)).toBeLessThanOrEqual(1e-9);
+      if (H !== undefined) expect(Math.abs(G2(up, low, r.upperThicknessAtFoot!, H - r.upperThicknessAtFoot!, b, g) - 1)).toBeLessThanOrEqual(1e-9);
+      else expect(up ** 2 / (b * b * g * r.upperThicknessAtFoot! ** 3)).toBeCloseTo(1, 12); // F1 = 1 at the virtual control
+      expect(Math.abs(r.energyAtCrest! - r.energyAtFoot!)).toBeLessThanOrEqual(1e-9 * g * d);
+      // E from its definition at the crest: −g′h1 + (u2² − u1²)/2 (measured from the lid)
+      const h1 = r.upperThicknessAtCrest!, u1 = up / (b * h1), u2 = low / (b * (d - h1));
+      expect(Math.abs(-g * h1 + (u2 * u2 - u1 * u1) / 2 - r.energyAtCrest!)).toBeLessThanOrEqual(1e-12 * g * d);
+      expect(Math.min(up, low)).toBeLessThanOrEqual(zero.lowerDischarge.value * (1 + 1e-12));
+    }), { numRuns: 200 });
+  });
+  it('the opposing layer falls steadily to zero towards either end', () => {
+    fc.assert(fc.property(basin, fc.double({ min: 0.01, max: 0.98, noNaN: true }), (k, f) => {
+      const H = k === undefined ? undefined : 10 * k, run = (q: number) => exchangeSillWithNetFlowFarmerArmi1986(0.02, 10, 50, q, H);
+      const z = run(0);
+      expect(run((f + 0.01) * z.flushingWithUpper).lowerDischarge.value).toBeLessThan(run(f * z.flushingWithUpper).lowerDischarge.value);
+      expect(run((f + 0.01) * z.flushingWithLower).upperDischarge.value).toBeLessThan(run(f * z.flushingWithLower).upperDischarge.value);
+    }), { numRuns: 100 });
+  });
+  it('deep basin without net flow: the same as the zero-net-flow sill function', () => {
+    const a = exchangeSillWithNetFlowFarmerArmi1986(0.03, 12, 40, 0), c = maximalExchangeSillFarmerArmi1986(0.03, 12, 40);
+    expect(a.lowerDischarge.value / c.discharge.value - 1).toBeLessThan(1e-12);
+    expect(Math.abs(a.upperThicknessAtCrest! - c.upperThicknessAtControl)).toBeLessThan(1e-9);
+  });
+  it('a shallower dense basin passes more (towards ¼ with no sill); deep-basin limit approached as H grows', () => {
+    const q = (H?: number) => exchangeSillWithNetFlowFarmerArmi1986(1, 1, 1, 0, H).lowerDischarge.value;
+    expect(q(1.5)).toBeGreaterThan(q(3));
+    expect(q(3)).toBeGreaterThan(q());
+    expect(q(1e4)).toBeCloseTo(q(), 6);
+    expect(q(1 + 1e-12)).toBeLessThanOrEqual(0.25 + 1e-12);
+  });
+  it('beyond either end: one-way flow, zero exchange, clear text; basin shallower than the crest refused', () => {
+    const z = exchangeSillWithNetFlowFarmerArmi1986(0.02, 10, 50, 0, 30);
+    const up = exchangeSillWithNetFlowFarmerArmi1986(0.02, 10, 50, 1.2 * z.flushingWithUpper, 30);
+    expect(up.regime).toBe('one-way');
+    expect(up.lowerDischarge.value).toBe(0);
+    expect(up.warnings.join(' ')).toMatch(/one-way flow, no exchange/);
+    const low = exchangeSillWithNetFlowFarmerArmi1986(0.02, 10, 50, 1.01 * z.flushingWithLower, 30);
+    expect(low.upperDischarge.value).toBe(0);
+    expect(low.lowerDischarge.value).toBeCloseTo(-1.01 * z.flushingWithLower, 9);
+    expect(() => exchangeSillWithNetFlowFarmerArmi1986(0.02, 10, 50, 0, 10)).toThrow(InputError);
+  });
+  it('calc: a sill takes a net discharge and a basin depth; the series spans the exchange range', () => {
+    const m = findCalcMethod('exchange-flow')!;
+    const out = runCalc(m, { g_prime: '0.02', depth: '10', width: '50', control: 'sill', net_discharge: '30', reservoir_depth: '25' });
+    const { upper_layer_discharge: up, lower_layer_discharge: low, exchange_discharge: ex } = out.results;
+    expect((up.value as number) - (low.value as number)).toBeCloseTo(30, 9);
+    expect(ex.value).toBe(low.value);
+    expect(out.series![0].x.values.at(-1)).toBeCloseTo(scale(0.02, 10, 50), 9);
+    expect(runCalc(m, { g_prime: '0.02', depth: '10', width: '50', control: 'sill' }).results.exchange_discharge.value).toBeCloseTo(0.2079878265593273 * scale(0.02, 10, 50), 6);
   });
 });
 
@@ -192,6 +269,10 @@ describe('estuaries: bad input', () => {
       } catch (e) { expect(e).toBeInstanceOf(InputError); }
       try {
         expect(Number.isFinite(maximalExchangeSillFarmerArmi1986(g, h, u).discharge.value)).toBe(true);
+      } catch (e) { expect(e).toBeInstanceOf(InputError); }
+      try {
+        const r = exchangeSillWithNetFlowFarmerArmi1986(g, h, u, f, Math.abs(h) * 1.5);
+        expect(Number.isFinite(r.upperDischarge.value) && Number.isFinite(r.lowerDischarge.value)).toBe(true);
       } catch (e) { expect(e).toBeInstanceOf(InputError); }
       try {
         const r = exchangeWithNetFlowArmiFarmer1986(g, h, u, f);
