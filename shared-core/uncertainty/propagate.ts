@@ -55,6 +55,9 @@ export interface PropagationOptions {
   coverage?: number;
 }
 
+/** A warning with its numbers taken out: draws that only change the numbers raise the same kind of warning. */
+const warningKind = (w: string) => w.replace(/[-+−]?\d[\d.,]*(?:[eE×][-+−]?\d+)?/g, '#');
+
 const pct = (x: number) => `${formatNumber(Math.round(x * 1000) / 10)} %`;
 
 function checkInputs(method: CalcMethod, base: CalcArgs, inputs: readonly InputUncertainty[]): void {
@@ -97,7 +100,7 @@ export function propagateMonteCarloJcgm101(
   const rows = latinHypercube(samples, inputs.length, seededRandom(options.seed ?? 20261202));
   const values = new Map<string, number[]>();
   const outside = new Map<string, number>();
-  const warningCounts = new Map<string, number>();
+  const warningCounts = new Map<string, { count: number; example: string }>();
   let failed = 0, firstFailure = '';
   for (const row of rows) {
     const args: CalcArgs = { ...base };
@@ -127,7 +130,11 @@ export function propagateMonteCarloJcgm101(
       list.push(r.value);
       values.set(name, list);
     }
-    for (const w of out.warnings) warningCounts.set(w, (warningCounts.get(w) ?? 0) + 1);
+    for (const w of out.warnings) {
+      const key = warningKind(w);
+      const seen = warningCounts.get(key);
+      warningCounts.set(key, { count: (seen?.count ?? 0) + 1, example: seen?.example ?? w });
+    }
   }
 
   const evaluated = samples - failed - [...outside.values()].reduce((a, b) => a + b, 0);
@@ -139,9 +146,9 @@ export function propagateMonteCarloJcgm101(
   }
   if (failed) warnings.push(`${failed} of ${samples} draws could not be computed (first: ${firstFailure}).`);
   if (evaluated < 0.5 * samples) warnings.push(`Only ${evaluated} of ${samples} draws gave results: the band is unreliable; reduce the uncertainties or check the inputs.`);
-  const nominalWarnings = new Set(nominal.warnings);
-  const occasional = [...warningCounts].filter(([w]) => !nominalWarnings.has(w)).sort((a, b) => b[1] - a[1]).slice(0, 3);
-  for (const [w, n] of occasional) warnings.push(`In ${pct(n / Math.max(evaluated, 1))} of the draws: ${w}`);
+  const nominalKinds = new Set(nominal.warnings.map(warningKind));
+  const occasional = [...warningCounts].filter(([kind]) => !nominalKinds.has(kind)).sort((a, b) => b[1].count - a[1].count).slice(0, 3);
+  for (const [, { count, example }] of occasional) warnings.push(`In ${pct(count / Math.max(evaluated, 1))} of the draws: ${example}`);
 
   const bands: ResultBand[] = [];
   for (const [name, r] of Object.entries(nominal.results)) {

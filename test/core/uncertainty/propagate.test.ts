@@ -107,3 +107,13 @@ describe('typed standard uncertainties', () => {
     expect(() => parseStandardUncertainty('depth', 'abc', 'm', 30)).toThrow(/uncertainty of depth/);
   });
 });
+
+describe('warnings raised in some draws', () => {
+  it('reports a new kind of warning with its share of draws, not the nominal warnings with other numbers', () => {
+    // the Wedderburn method always states its drag coefficient (numbers vary with the wind); a validity
+    // warning appears only in the draws whose wind speed leaves the Large & Pond (1981) range
+    const r = propagateMonteCarloJcgm101(method('wedderburn'), { g_prime: '0.02', upper_thickness: '6', wind_speed: '10', basin_length: '3000' }, [{ name: 'wind_speed', standardUncertainty: 3 }]);
+    expect(r.warnings.filter((w) => /Drag coefficient/.test(w))).toEqual([]);
+    expect(r.warnings.some((w) => /^In [\d.]+ % of the draws: .*outside the range 4 … 25 m\/s/.test(w))).toBe(true);
+  });
+});
