@@ -78,7 +78,7 @@ export const INTERNAL_HYDRAULIC_JUMP: MethodInfo = {
     'y2/y1 = ½(√(1 + 8F1²) − 1), F1² = q²/(g′y1³)); Wilkinson, D.L., Wood, I.R. (1971). A rapidly varied flow phenomenon in a ' +
     'two-layer flow. J. Fluid Mech. 47, 241–256; head loss ΔE = (y2 − y1)³/(4y1y2) in reduced-gravity head.',
   equation: 'y2/y1 = ½(√(1 + 8F1²) − 1); ΔE = (y2 − y1)³/(4 y1 y2)',
-  validity: { depthRatio: { max: 0.3, unit: '1', note: 'y2/D; the deep-upper-layer form needs the jump small against the total depth' } },
+  validity: { depth_ratio: { max: 0.3, unit: '1', note: 'y2/D; the deep-upper-layer form needs the jump small against the total depth' } },
 };
 
 export interface InternalJump {
@@ -110,7 +110,7 @@ export function internalHydraulicJump(q: number, y1: number, gPrime: number, tot
   const y2 = 0.5 * y * (Math.sqrt(1 + 8 * F * F) - 1);
   if (totalDepth !== undefined) {
     const D = requireInRange('total_depth', totalDepth, 'm', { min: y2, max: 11000 });
-    warnings.push(...validityWarnings(INTERNAL_HYDRAULIC_JUMP, { depthRatio: y2 / D }));
+    warnings.push(...validityWarnings(INTERNAL_HYDRAULIC_JUMP, { depth_ratio: y2 / D }));
   }
   return { downstreamThickness: y2, headLoss: (y2 - y) ** 3 / (4 * y * y2), froude: F, method: INTERNAL_HYDRAULIC_JUMP.id, warnings };
 }

@@ -62,7 +62,7 @@ export const WIND_STRESS_LARGE_POND_1981: MethodInfo = {
     '324–336 (neutral drag: 10³C_D = 1.2 for 4 ≤ U10 < 11 m/s, 0.49 + 0.065 U10 for 11 ≤ U10 ≤ 25 m/s); air density 1.225 kg/m³ ' +
     '(ISO 2533:1975 standard atmosphere, sea level).',
   equation: 'τ = ρ_air C_D U10², u* = √(τ / ρ_water)',
-  validity: { windSpeed: { min: 4, max: 25, unit: 'm/s', note: 'range of the Large & Pond (1981) fit' } },
+  validity: { wind_speed: { min: 4, max: 25, unit: 'm/s', note: 'range of the Large & Pond (1981) fit' } },
 };
 
 /** Air density of the ISO 2533 standard atmosphere at sea level [kg/m3]. */
@@ -97,7 +97,7 @@ export function windStressLargePond1981(windSpeed: number, rhoWater = 1000, drag
   const rw = requireInRange('rho_water', rhoWater, 'kg/m3', { min: 900, max: 1300 });
   const cd = dragCoefficient === undefined ? dragCoefficientLargePond1981(U) : requireInRange('drag_coefficient', dragCoefficient, '1', { ...positive, max: 0.01 });
   const stress = AIR_DENSITY * cd * U * U;
-  const warnings = dragCoefficient === undefined ? validityWarnings(WIND_STRESS_LARGE_POND_1981, { windSpeed: U }) : [];
+  const warnings = dragCoefficient === undefined ? validityWarnings(WIND_STRESS_LARGE_POND_1981, { wind_speed: U }) : [];
   return { stress, shearVelocity: Math.sqrt(stress / rw), dragCoefficient: cd, method: WIND_STRESS_LARGE_POND_1981.id, warnings };
 }
 

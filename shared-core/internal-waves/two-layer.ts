@@ -187,7 +187,7 @@ export const SOLITARY_WAVE_KDV: MethodInfo = {
     'Trans. Amer. Math. Soc. 298, 431–484; Lamb, K.G., Wan, B. (1998). Phys. Fluids 10, 2061–2079).',
   equation: 'c = c0 (1 + |a| |h2 − h1| / (2 h1 h2)); depression when h1 < h2, elevation when h1 > h2; |a| ≤ |h2 − h1|/2',
   validity: {
-    relativeAmplitude: { max: 0.5, unit: '1', note: '|a|/a_max; first-order KdV overestimates the speed of large waves' },
+    relative_amplitude: { max: 0.5, unit: '1', note: '|a|/a_max; first-order KdV overestimates the speed of large waves' },
   },
 };
 
