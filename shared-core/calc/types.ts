@@ -47,6 +47,12 @@ export function depthInX(s: Series): boolean {
   return !!s.depthAxis && /depth/i.test(s.x.label);
 }
 
+/** The result cards and summaries lead with: the first numeric result, else the first one. */
+export function keyResultName(results: Record<string, ResultValue>): string | undefined {
+  const names = Object.keys(results);
+  return names.find((n) => typeof results[n].value === 'number') ?? names[0];
+}
+
 export interface CalcOutput {
   results: Record<string, ResultValue>;
   warnings: string[];

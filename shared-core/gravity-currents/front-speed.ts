@@ -34,8 +34,7 @@ export const VON_KARMAN_1940: MethodInfo = {
  * @source von Kármán (1940); Benjamin (1968) §3. @validity steady, inviscid, unmixed current, deep ambient.
  */
 export function frontSpeedVonKarman1940(gPrime: number, currentDepth: number): FrontSpeed {
-  const g = requireInRange('g_prime', gPrime, 'm/s2', { ...positive, max: GRAVITY });
-  const h = requireInRange('current_depth', currentDepth, 'm', { ...positive, max: 1e4 });
+  const { g, h } = checkedCurrent(gPrime, currentDepth);
   const u = Math.sqrt(2 * g * h);
   const extra = ['Deep-ambient inviscid limit: laboratory currents run slower (Fr ≈ 1.0–1.2 instead of √2; Huppert & Simpson 1980; Shin et al. 2004).'];
   return { ...scalar(VON_KARMAN_1940, u, 'm/s', {}, extra), froude: Math.SQRT2 };
@@ -61,9 +60,7 @@ export function benjaminFroude(a: number): number {
  * @returns U [m/s] @source Benjamin (1968) §2–3. @validity 0 ≤ a ≤ 1/2 (dissipative for a < 1/2, energy-conserving at 1/2).
  */
 export function frontSpeedBenjamin1968(gPrime: number, currentDepth: number, totalDepth?: number): FrontSpeed {
-  const g = requireInRange('g_prime', gPrime, 'm/s2', { ...positive, max: GRAVITY });
-  const h = requireInRange('current_depth', currentDepth, 'm', { ...positive, max: 1e4 });
-  const a = depthRatio(h, totalDepth);
+  const { g, h, a } = checkedCurrent(gPrime, currentDepth, totalDepth);
   const extra = a === 0.5 ? [] : ['Benjamin’s current conserves energy only at a = h/H = 1/2; elsewhere the flow-force balance implies dissipation (or, for a > 1/2, an impossible energy gain).'];
   return fromFroude(BENJAMIN_1968, benjaminFroude(a), g, h, totalDepth, { depth_ratio: a }, extra);
 }
@@ -87,9 +84,7 @@ export function huppertSimpsonFroude(a: number): number {
  * @returns U [m/s] @source Huppert & Simpson (1980) eq. (2.3). @validity Boussinesq lock releases, 0 < a ≤ 1.
  */
 export function frontSpeedHuppertSimpson1980(gPrime: number, currentDepth: number, totalDepth?: number): FrontSpeed {
-  const g = requireInRange('g_prime', gPrime, 'm/s2', { ...positive, max: GRAVITY });
-  const h = requireInRange('current_depth', currentDepth, 'm', { ...positive, max: 1e4 });
-  const a = depthRatio(h, totalDepth);
+  const { g, h, a } = checkedCurrent(gPrime, currentDepth, totalDepth);
   return fromFroude(HUPPERT_SIMPSON_1980_FRONT, huppertSimpsonFroude(a), g, h, totalDepth, { g_prime: g });
 }
 
@@ -154,6 +149,13 @@ function fromFroude(info: MethodInfo, fr: number, g: number, h: number, totalDep
 }
 
 /** a = h/H, 0 for a deep ambient; throws when h > H. */
+/** Range-checked g′ [m/s2] and current depth h [m], and the depth ratio a = h/H (0 for a deep ambient). */
+function checkedCurrent(gPrime: number, currentDepth: number, totalDepth?: number) {
+  const g = requireInRange('g_prime', gPrime, 'm/s2', { ...positive, max: GRAVITY });
+  const h = requireInRange('current_depth', currentDepth, 'm', { ...positive, max: 1e4 });
+  return { g, h, a: depthRatio(h, totalDepth) };
+}
+
 function depthRatio(h: number, totalDepth: number | undefined, field = 'current_depth'): number {
   if (totalDepth === undefined) return 0;
   const H = requireInRange('total_depth', totalDepth, 'm', { ...positive, max: 1e4 });

@@ -1,5 +1,5 @@
 import type { Assessment, ComplianceRow, EstimateOutcome } from '../site/assess';
-import type { ResultValue } from '../calc/types';
+import { keyResultName, type ResultValue } from '../calc/types';
 import { findCalcMethod } from '../calc/registry';
 import { toDisplay, type UnitSystem } from '../units/units';
 import { chartSpecs, type ChartSpec } from './charts';
@@ -159,9 +159,10 @@ function section(e: EstimateOutcome, number: string, units: UnitSystem): Estimat
   };
 }
 
-function keyResult(s: EstimateSection): string {
+function keyResult(s: EstimateSection, results: Record<string, ResultValue>): string {
   if (s.status === 'error') return `not computed: ${s.error ?? 'error'}`;
-  const r = s.results.find((q) => typeof q.value === 'number') ?? s.results[0];
+  const key = keyResultName(results);
+  const r = s.results.find((q) => q.name === key);
   if (!r) return '';
   return `${r.name} = ${r.shown}${r.shownUnit ? ' ' + r.shownUnit : ''}`;
 }
@@ -208,7 +209,7 @@ export function buildReportModel(a: Assessment, units: UnitSystem): ReportModel 
       { label: 'Display units', value: unitsLabel },
     ],
     contents,
-    summary: estimates.map((s) => ({ id: s.id, title: s.title, where: [s.feature, s.condition].filter(Boolean).join(' · '), keyResult: keyResult(s), warnings: s.warnings.length, status: s.status })),
+    summary: estimates.map((s, i) => ({ id: s.id, title: s.title, where: [s.feature, s.condition].filter(Boolean).join(' · '), keyResult: keyResult(s, a.estimates[i].results), warnings: s.warnings.length, status: s.status })),
     estimates,
     compliance,
     references,

@@ -11,6 +11,8 @@ import { optimiseRelease, RELEASE_BLEND, type Port } from './blend';
 import { groupFluxProfile, WITHDRAWAL_INTERFERENCE, type InterferenceGroup, type InterferenceMode } from './interference';
 
 const SINKS = ['line', 'point'] as const;
+const SINK = { kind: 'choice', name: 'sink', description: 'line = slot across the width, point = orifice', choices: SINKS } as const;
+const SLOT_WIDTH = { kind: 'number', name: 'width', unit: 'm', description: 'slot width across the channel (line sink only)', optional: true, range: { ...positive, max: 1e5 } } as const;
 const INTERFERENCE = ['combined', 'independent'] as const;
 
 /** Parses `ports=5:40,30:40` (depth below the surface in m : capacity in m3/s, one pair per port). */
@@ -33,8 +35,8 @@ export const withdrawalCalcMethods: CalcMethod[] = [
     params: [
       { kind: 'number', name: 'g_prime', unit: 'm/s2', description: 'reduced gravity across the interface', range: { ...positive, max: 20 } },
       { kind: 'number', name: 'interface_distance', unit: 'm', description: 'vertical distance from the intake to the interface', range: { ...positive, max: 1e4 } },
-      { kind: 'choice', name: 'sink', description: 'line = slot across the width, point = orifice', choices: SINKS },
-      { kind: 'number', name: 'width', unit: 'm', description: 'slot width across the channel (line sink only)', optional: true, range: { ...positive, max: 1e5 } },
+      SINK,
+      SLOT_WIDTH,
       { kind: 'choice', name: 'position', description: 'wall or bed (half-space approach flow), wall-foot (on the bed at the foot of a wall: quarter-space)', choices: SINK_POSITIONS, default: 'wall' },
     ],
     results: [{ name: 'critical_discharge', unit: 'm3/s', description: 'discharge at which the far layer starts to be drawn' }],
@@ -50,8 +52,8 @@ export const withdrawalCalcMethods: CalcMethod[] = [
     params: [
       { kind: 'number', name: 'buoyancy_frequency', unit: '1/s', description: 'buoyancy frequency N around the intake', range: { ...positive, max: 1 } },
       { kind: 'number', name: 'discharge', unit: 'm3/s', description: 'intake discharge', range: { ...positive, max: 1e5 } },
-      { kind: 'number', name: 'width', unit: 'm', description: 'slot width across the channel (line sink only)', optional: true, range: { ...positive, max: 1e5 } },
-      { kind: 'choice', name: 'sink', description: 'line = slot across the width, point = orifice', choices: SINKS },
+      SLOT_WIDTH,
+      SINK,
       { kind: 'number', name: 'reservoir_length', unit: 'm', description: 'reservoir length at the intake level, for the regime (default: inertial assumed)', optional: true, range: { ...positive, max: 1e6 } },
     ],
     results: [

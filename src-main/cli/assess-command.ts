@@ -1,5 +1,6 @@
 import { assessSite, type Assessment } from '../../shared-core/site';
 import { formatNumber } from '../../shared-core/core/errors';
+import { keyResultName } from '../../shared-core/calc/types';
 import { readSiteFile, GPRIME_VERSION } from '../services/site-file';
 import { UsageError, type CommandResult } from './errors';
 
@@ -12,8 +13,8 @@ export function summariseAssessment(a: Assessment): string {
       lines.push(`✗ ${e.id} (${e.method}${where ? `; ${where}` : ''}): ${e.error}`);
       continue;
     }
-    const entries = Object.entries(e.results);
-    const [key, r] = entries.find(([, v]) => typeof v.value === 'number') ?? entries[0] ?? ['', { value: '', unit: '' }];
+    const key = keyResultName(e.results) ?? '';
+    const r = e.results[key] ?? { value: '', unit: '' };
     const value = typeof r.value === 'number' ? formatNumber(r.value) : r.value;
     const band = e.uncertainty?.bands.find((b) => b.name === key);
     const bandText = band ? ` (${Math.round(e.uncertainty!.coverage * 100)} % band ${formatNumber(band.low)} … ${formatNumber(band.high)})` : '';
