@@ -155,7 +155,7 @@ function meetGoal(f: (t: number) => number, lo: number, hi: number, goal: number
  * Finds port flows (each within its capacity, summing to the release) whose blended temperature meets the target or lies in
  * the band. The coldest and warmest splits bound what is achievable; between them the flows are interpolated linearly
  * (a path that keeps every port within capacity) and the target is found by Brent's method. Where the target falls in a
- * jump of the release temperature (ports starting to interfere, combined mode), flow is moved between each pair of ports
+ * jump of the release temperature (a layer limit jumping at a boundary or a profile step; ports starting to interfere), flow is moved between each pair of ports
  * from the closest split to find another crossing. When the target cannot be met, `feasible` is false and the closest
  * achievable split is returned.
  * @param release [m3/s] total release; @returns the split, its blend, feasibility and the achievable range [degC]
@@ -194,7 +194,7 @@ export function optimiseRelease(p: Profile, ports: readonly Port[], release: num
   if (!feasible) {
     const wanted = band.min === band.max ? `${formatNumber(band.min)} °C` : `${formatNumber(band.min)}–${formatNumber(band.max)} °C`;
     warnings.push(jump && goal > achievable.min && goal < achievable.max
-      ? `The target ${wanted} lies in a jump of the release temperature where ports start to interfere: no split found gives it; the closest split found is reported.`
+      ? `The target ${wanted} lies in a jump of the release temperature (a withdrawal layer changes abruptly where it reaches the surface, the bed or a sharp step of the profile, or where ports start to interfere): no split found gives it; the closest split found is reported.`
       : `The target ${wanted} cannot be met at a release of ${formatNumber(release)} m3/s: the ports give ${achievable.min.toFixed(2)}–${achievable.max.toFixed(2)} °C; the closest achievable split is reported.`);
   }
   return { ...blend, feasible, achievable, warnings };
