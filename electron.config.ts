@@ -19,8 +19,13 @@ const config = {
   productName: 'gprime',
   directories: { output: 'dist/packages', buildResources: 'build-resources' },
   files: ['dist/electron/**', 'dist/renderer/**', 'package.json'],
-  extraResources: [{ from: 'examples', to: 'examples' }, { from: 'shared-core/site/site.schema.json', to: 'site.schema.json' }],
-  fileAssociations: [{ ext: SITE_FILE_EXTENSION, name: 'gprime site', description: 'gprime site file', role: 'Editor' }],
+  extraResources: [
+    { from: 'examples', to: 'examples' },
+    { from: 'shared-core/site/site.schema.json', to: 'site.schema.json' },
+  ],
+  fileAssociations: [
+    { ext: SITE_FILE_EXTENSION, name: 'gprime site', description: 'gprime site file', role: 'Editor' },
+  ],
   linux: { target: ['AppImage', 'deb'], category: 'Science' },
   win: { target: ['nsis'] },
   mac: { target: ['dmg'], category: 'public.app-category.education' },

@@ -29,6 +29,7 @@ export function bench(name: string, fn: () => unknown, budgetMs = 600): BenchRes
 /** Prints a comparison line: ours against the general-purpose baseline measured in the same run. */
 export function report(task: string, ours: BenchResult, baseline: BenchResult, note = ''): string {
   const ratio = baseline.microseconds / ours.microseconds;
-  const fmt = (r: BenchResult) => `${r.microseconds < 1000 ? r.microseconds.toFixed(1) + ' µs' : (r.microseconds / 1000).toFixed(2) + ' ms'}`;
+  const fmt = (r: BenchResult) =>
+    `${r.microseconds < 1000 ? r.microseconds.toFixed(1) + ' µs' : (r.microseconds / 1000).toFixed(2) + ' ms'}`;
   return `${task.padEnd(44)} ours ${fmt(ours).padStart(10)}   baseline (${baseline.name}) ${fmt(baseline).padStart(10)}   speed-up ×${ratio.toFixed(1)}${note ? '   ' + note : ''}`;
 }

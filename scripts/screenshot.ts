@@ -6,18 +6,28 @@ import { launchChromium, ROOT, startShell, tempFolders } from '../test/e2e/shell
 
 const folders = tempFolders();
 mkdirSync(folders.workspace, { recursive: true });
-copyFileSync(join(ROOT, 'examples', 'quillmere-reservoir.gpsite'), join(folders.workspace, 'quillmere-reservoir.gpsite'));
+copyFileSync(
+  join(ROOT, 'examples', 'quillmere-reservoir.gpsite'),
+  join(folders.workspace, 'quillmere-reservoir.gpsite'),
+);
 const shell = await startShell(folders.workspace, folders.dataDir);
 const browser = await launchChromium();
 try {
   const shot = async (zoom: number, file: string, detail = false) => {
-    const page = await browser.newPage({ viewport: { width: Math.round(1440 / zoom), height: Math.round(900 / zoom) }, deviceScaleFactor: zoom });
+    const page = await browser.newPage({
+      viewport: { width: Math.round(1440 / zoom), height: Math.round(900 / zoom) },
+      deviceScaleFactor: zoom,
+    });
     await page.goto(shell.url);
     await page.getByRole('button', { name: 'Open…' }).click();
     await page.getByRole('button', { name: 'quillmere-reservoir.gpsite' }).click();
     await page.getByText('quillmere-reservoir.gpsite', { exact: true }).waitFor();
     if (zoom === 1) await page.getByRole('button', { name: 'Treatment works outfall', exact: false }).first().click();
-    if (detail) await page.locator('[data-estimate="plume-summer"]').getByRole('button', { name: /detail/i }).click();
+    if (detail)
+      await page
+        .locator('[data-estimate="plume-summer"]')
+        .getByRole('button', { name: /detail/i })
+        .click();
     await page.waitForTimeout(400);
     mkdirSync(join(ROOT, 'docs'), { recursive: true });
     await page.screenshot({ path: join(ROOT, 'docs', file) });

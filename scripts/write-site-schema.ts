@@ -3,4 +3,7 @@ import { writeFileSync } from 'node:fs';
 import { resolve } from 'node:path';
 import { siteJsonSchema } from '../shared-core/site/schema';
 
-writeFileSync(resolve(import.meta.dirname, '../shared-core/site/site.schema.json'), JSON.stringify(siteJsonSchema(), null, 2) + '\n');
+writeFileSync(
+  resolve(import.meta.dirname, '../shared-core/site/site.schema.json'),
+  JSON.stringify(siteJsonSchema(), null, 2) + '\n',
+);

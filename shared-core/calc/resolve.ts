@@ -14,14 +14,28 @@ export type RawArg = string | number | Profile;
 export function resolveArgs(method: CalcMethod, raw: Record<string, RawArg | undefined>): CalcArgs {
   const known = new Set(method.params.map((p) => p.name));
   for (const name of Object.keys(raw)) {
-    if (!known.has(name)) throw new InputError(name, raw[name], '', [...known].join(', '), `${method.id} has no parameter "${name}"; its parameters are ${[...known].join(', ')}`);
+    if (!known.has(name))
+      throw new InputError(
+        name,
+        raw[name],
+        '',
+        [...known].join(', '),
+        `${method.id} has no parameter "${name}"; its parameters are ${[...known].join(', ')}`,
+      );
   }
   const out: CalcArgs = {};
   for (const spec of method.params) {
     const value = raw[spec.name];
     if (value === undefined || value === '') {
       const fallback = 'default' in spec ? spec.default : undefined;
-      if (fallback === undefined && !spec.optional) throw new InputError(spec.name, '(missing)', unitOf(spec), allowedText(spec), `${spec.name} is required (${spec.description})`);
+      if (fallback === undefined && !spec.optional)
+        throw new InputError(
+          spec.name,
+          '(missing)',
+          unitOf(spec),
+          allowedText(spec),
+          `${spec.name} is required (${spec.description})`,
+        );
       out[spec.name] = fallback;
       continue;
     }
@@ -44,16 +58,23 @@ function allowedText(spec: ParamSpec): string {
 function resolveOne(spec: ParamSpec, value: RawArg): CalcArgs[string] {
   switch (spec.kind) {
     case 'number': {
-      const si = typeof value === 'number' ? value : typeof value === 'string' ? parseQuantity(spec.name, value, spec.unit) : NaN;
+      const si =
+        typeof value === 'number'
+          ? value
+          : typeof value === 'string'
+            ? parseQuantity(spec.name, value, spec.unit)
+            : NaN;
       return requireInRange(spec.name, si, spec.unit, spec.range ?? {});
     }
     case 'choice': {
       const v = String(value).trim().toLowerCase();
-      if (!spec.choices.includes(v)) throw new InputError(spec.name, value, '', spec.choices.join(', '), `choose one of ${spec.choices.join(', ')}`);
+      if (!spec.choices.includes(v))
+        throw new InputError(spec.name, value, '', spec.choices.join(', '), `choose one of ${spec.choices.join(', ')}`);
       return v;
     }
     case 'profile':
-      if (typeof value !== 'object') throw new InputError(spec.name, value, '', 'a CSV profile file', 'a profile is required');
+      if (typeof value !== 'object')
+        throw new InputError(spec.name, value, '', 'a CSV profile file', 'a profile is required');
       return value;
     case 'text':
       return String(value);
@@ -65,7 +86,13 @@ export function runCalc(method: CalcMethod, raw: Record<string, RawArg | undefin
   const out = method.run(resolveArgs(method, raw));
   for (const [name, r] of Object.entries(out.results)) {
     if (typeof r.value === 'number' && !Number.isFinite(r.value)) {
-      throw new InputError(name, r.value, r.unit, 'a finite result', `the computation of ${name} did not give a finite number for these inputs`);
+      throw new InputError(
+        name,
+        r.value,
+        r.unit,
+        'a finite result',
+        `the computation of ${name} did not give a finite number for these inputs`,
+      );
     }
   }
   out.warnings = [...new Set(out.warnings)];

@@ -6,8 +6,23 @@ import type { Range } from '../core/range';
  * parameters (SI unit, default, hard range) and result names, and runs on resolved SI arguments.
  */
 export type ParamSpec =
-  | { kind: 'number'; name: string; unit: string; description: string; default?: number; optional?: boolean; range?: Range }
-  | { kind: 'choice'; name: string; description: string; choices: readonly string[]; default?: string; optional?: boolean }
+  | {
+      kind: 'number';
+      name: string;
+      unit: string;
+      description: string;
+      default?: number;
+      optional?: boolean;
+      range?: Range;
+    }
+  | {
+      kind: 'choice';
+      name: string;
+      description: string;
+      choices: readonly string[];
+      default?: string;
+      optional?: boolean;
+    }
   | { kind: 'profile'; name: string; description: string; optional?: boolean }
   | { kind: 'text'; name: string; description: string; default?: string; optional?: boolean };
 

@@ -41,13 +41,20 @@ export function validityWarnings(info: MethodInfo, inputs: Record<string, number
     const hi = range.max === undefined ? '∞' : formatNumber(range.max);
     out.push(
       `${name} = ${formatNumber(x)}${u} is outside the range ${lo} … ${hi}${u} of ${info.title}` +
-        (range.note ? ` (${range.note})` : '') + '; the result is an extrapolation.',
+        (range.note ? ` (${range.note})` : '') +
+        '; the result is an extrapolation.',
     );
   }
   return out;
 }
 
 /** Builds a Scalar for a method, adding its validity warnings. */
-export function scalar(info: MethodInfo, value: number, unit: string, inputs: Record<string, number>, extra: string[] = []): Scalar {
+export function scalar(
+  info: MethodInfo,
+  value: number,
+  unit: string,
+  inputs: Record<string, number>,
+  extra: string[] = [],
+): Scalar {
   return { value, unit, method: info.id, warnings: [...validityWarnings(info, inputs), ...extra] };
 }

@@ -54,12 +54,15 @@ interface DimensionlessExchange {
 
 /** Opposing-layer flux that makes the narrows critical when the with-flow layer is h thick (stable root). */
 function opposingFluxAtNarrows(h: number, s: number): number {
-  const a = 1 / h ** 3 + 1 / (1 - h) ** 3, b = (2 * s) / h ** 3, c = (s * s) / h ** 3 - 1;
+  const a = 1 / h ** 3 + 1 / (1 - h) ** 3,
+    b = (2 * s) / h ** 3,
+    c = (s * s) / h ** 3 - 1;
   return Math.max(0, (-2 * c) / (b + Math.sqrt(Math.max(0, b * b - 4 * a * c))));
 }
 
 function stateAtNarrows(h: number, s: number) {
-  const against = opposingFluxAtNarrows(h, s), withFlow = s + against;
+  const against = opposingFluxAtNarrows(h, s),
+    withFlow = s + against;
   const energyNarrows = 1 - h + 0.5 * ((against / (1 - h)) ** 2 - (withFlow / h) ** 2);
   const energyVirtual = against / (withFlow + against);
   return { withFlow, against, energyNarrows, energyVirtual };
@@ -73,7 +76,10 @@ function stateAtNarrows(h: number, s: number) {
  */
 function narrowsThickness(s: number): number {
   if (s < 1e-3) return 0.5 + s / 4 + s ** 3 / 8;
-  const mismatch = (h: number) => { const st = stateAtNarrows(h, s); return st.energyNarrows - st.energyVirtual; };
+  const mismatch = (h: number) => {
+    const st = stateAtNarrows(h, s);
+    return st.energyNarrows - st.energyVirtual;
+  };
   const lo = Math.max(0.5, s ** (2 / 3));
   let hi = 2 / 3;
   if (s <= 0.25) {
@@ -88,10 +94,16 @@ function narrowsThickness(s: number): number {
 function solveDimensionless(s: number): DimensionlessExchange {
   const h = narrowsThickness(s);
   const st = stateAtNarrows(h, s);
-  const total = st.withFlow + st.against, hv = st.withFlow / total;
+  const total = st.withFlow + st.against,
+    hv = st.withFlow / total;
   return {
-    withFlow: st.withFlow, against: st.against, thicknessNarrows: h, thicknessVirtual: hv,
-    virtualWidth: total / Math.sqrt(hv * (1 - hv)), energyNarrows: st.energyNarrows, energyVirtual: st.energyVirtual,
+    withFlow: st.withFlow,
+    against: st.against,
+    thicknessNarrows: h,
+    thicknessVirtual: hv,
+    virtualWidth: total / Math.sqrt(hv * (1 - hv)),
+    energyNarrows: st.energyNarrows,
+    energyVirtual: st.energyVirtual,
   };
 }
 
@@ -133,20 +145,31 @@ export function checkedExchangeInputs(gPrime: number, depth: number, width: numb
  * @source Armi & Farmer (1986)
  * @validity Boussinesq, rigid lid, frictionless, no mixing, slowly varying width; |Q0| < (2/3)^{3/2} b√(g′H³)
  */
-export function exchangeWithNetFlowArmiFarmer1986(gPrime: number, depth: number, narrowsWidth: number, netDischarge: number, endWidth?: number): NetFlowExchange {
+export function exchangeWithNetFlowArmiFarmer1986(
+  gPrime: number,
+  depth: number,
+  narrowsWidth: number,
+  netDischarge: number,
+  endWidth?: number,
+): NetFlowExchange {
   const { g, depth: H, width: b, netDischarge: Q0 } = checkedExchangeInputs(gPrime, depth, narrowsWidth, netDischarge);
   const bEnd = endWidth === undefined ? undefined : requireInRange('end_width', endWidth, 'm', { min: b, max: 1e7 });
-  const scale = b * Math.sqrt(g * H ** 3), s = Math.abs(Q0) / scale, upperWithFlow = Q0 >= 0;
+  const scale = b * Math.sqrt(g * H ** 3),
+    s = Math.abs(Q0) / scale,
+    upperWithFlow = Q0 >= 0;
   const flushingDischarge = MAXIMAL_EXCHANGE_LIMIT * scale;
   const warnings: string[] = [];
   const layers = (withFlow: number, against: number) => {
     const [up, low] = upperWithFlow ? [withFlow, against] : [against, withFlow];
-    return { upperDischarge: scalar(ARMI_FARMER_1986_NET_FLOW, up, 'm3/s', { g_prime: g }), lowerDischarge: scalar(ARMI_FARMER_1986_NET_FLOW, low, 'm3/s', { g_prime: g }) };
+    return {
+      upperDischarge: scalar(ARMI_FARMER_1986_NET_FLOW, up, 'm3/s', { g_prime: g }),
+      lowerDischarge: scalar(ARMI_FARMER_1986_NET_FLOW, low, 'm3/s', { g_prime: g }),
+    };
   };
   if (s >= MAXIMAL_EXCHANGE_LIMIT) {
     warnings.push(
       `|Q0| = ${Math.abs(Q0).toPrecision(3)} m3/s ≥ (2/3)^{3/2} b√(g′H³) = ${flushingDischarge.toPrecision(3)} m3/s: one-way flow, no exchange. ` +
-      `The opposing layer cannot pass the narrows (an arrested wedge may still reach it while |Q0| < b√(g′H³) = ${scale.toPrecision(3)} m3/s).`,
+        `The opposing layer cannot pass the narrows (an arrested wedge may still reach it while |Q0| < b√(g′H³) = ${scale.toPrecision(3)} m3/s).`,
     );
     const r = layers(Math.abs(Q0), 0);
     return { ...r, regime: 'one-way', flushingDischarge, warnings: [...r.upperDischarge.warnings, ...warnings] };
@@ -156,18 +179,26 @@ export function exchangeWithNetFlowArmiFarmer1986(gPrime: number, depth: number,
   let regime: NetFlowExchange['regime'] = 'maximal';
   if (bEnd !== undefined && bv > bEnd) {
     regime = 'submaximal';
-    warnings.push(`The virtual control needs a width of ${bv.toPrecision(3)} m, more than the ${bEnd.toPrecision(3)} m at the channel ends: it cannot form inside the channel, so the exchange is submaximal (less than shown, set by the reservoir conditions, not computed here).`);
+    warnings.push(
+      `The virtual control needs a width of ${bv.toPrecision(3)} m, more than the ${bEnd.toPrecision(3)} m at the channel ends: it cannot form inside the channel, so the exchange is submaximal (less than shown, set by the reservoir conditions, not computed here).`,
+    );
   }
-  if (s > 0) warnings.push(`The virtual control lies on the side the net flow comes from, where the channel has widened to ${bv.toPrecision(3)} m.`);
+  if (s > 0)
+    warnings.push(
+      `The virtual control lies on the side the net flow comes from, where the channel has widened to ${bv.toPrecision(3)} m.`,
+    );
   const r = layers(d.withFlow * scale, d.against * scale);
   const fromOpposing = (e: number) => (upperWithFlow ? e : 1 - e) * g * H; // E measured from the bed
   return {
-    ...r, regime,
+    ...r,
+    regime,
     upperThicknessAtNarrows: (upperWithFlow ? d.thicknessNarrows : 1 - d.thicknessNarrows) * H,
     virtualControlWidth: bv,
     upperThicknessAtVirtualControl: (upperWithFlow ? d.thicknessVirtual : 1 - d.thicknessVirtual) * H,
-    energyAtNarrows: fromOpposing(d.energyNarrows), energyAtVirtualControl: fromOpposing(d.energyVirtual),
-    flushingDischarge, warnings: [...r.upperDischarge.warnings, ...warnings],
+    energyAtNarrows: fromOpposing(d.energyNarrows),
+    energyAtVirtualControl: fromOpposing(d.energyVirtual),
+    flushingDischarge,
+    warnings: [...r.upperDischarge.warnings, ...warnings],
   };
 }
 

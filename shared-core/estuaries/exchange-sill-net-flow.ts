@@ -46,7 +46,8 @@ export const FARMER_ARMI_1986_SILL_NET_FLOW: MethodInfo = {
 function criticalThinLayer(qt: number, qo: number, d: number): number {
   if (qt <= 0) return 0;
   if (qo <= 0) return qt ** (2 / 3);
-  const a = Math.sqrt(qt), tm = (d * a) / (a + Math.sqrt(qo));
+  const a = Math.sqrt(qt),
+    tm = (d * a) / (a + Math.sqrt(qo));
   const excess = (t: number) => (qt * qt) / t ** 3 + (qo * qo) / (d - t) ** 3 - 1;
   if (excess(tm) >= 0) return tm; // the two critical states merge (largest flux a section of depth d can pass)
   return brentRoot(excess, 0.99 * qt ** (2 / 3), tm, 1e-15 * qt ** (2 / 3))!;
@@ -58,7 +59,12 @@ function energyFromLid(h1: number, h2: number, q1: number, q2: number): number {
   return -h1 + kinetic(q2, h2) - kinetic(q1, h1);
 }
 
-interface ControlStates { h2Crest: number; h1Foot: number; energyCrest: number; energyFoot: number }
+interface ControlStates {
+  h2Crest: number;
+  h1Foot: number;
+  energyCrest: number;
+  energyFoot: number;
+}
 
 function controls(q1: number, q2: number, r: number): ControlStates {
   const h2Crest = criticalThinLayer(q2, q1, 1);
@@ -77,8 +83,12 @@ export function sillFlushingWithLowerLayer(r: number): number {
 
 /** Maximal-exchange lower-layer flux q2 for -flushing < s < 1: the largest q2 with E_crest ≤ E_foot. */
 function solveLowerFlux(s: number, r: number): number {
-  const lo = Math.max(0, -s), hi = ((1 - s) / 2) ** 2;
-  const mismatch = (q2: number) => { const c = controls(s + q2, q2, r); return c.energyFoot - c.energyCrest; };
+  const lo = Math.max(0, -s),
+    hi = ((1 - s) / 2) ** 2;
+  const mismatch = (q2: number) => {
+    const c = controls(s + q2, q2, r);
+    return c.energyFoot - c.energyCrest;
+  };
   if (mismatch(lo) <= 0) return lo; // s within rounding of a flushing limit
   if (mismatch(hi) >= 0) return hi; // H within rounding of D: the flat-channel limit √q1 + √q2 = 1
   const q2 = brentRoot(mismatch, lo, hi, 1e-15 * hi);
@@ -113,11 +123,23 @@ export interface SillNetFlowExchange {
  * @validity Boussinesq, rigid lid, frictionless, no mixing, slowly varying bed, bed rising monotonically from the dense
  *   basin to the crest; −x^{3/2} < Q0/(b√(g′D³)) < 1; maximal exchange needs the dense basin to take the upper layer beyond the foot
  */
-export function exchangeSillWithNetFlowFarmerArmi1986(gPrime: number, crestDepth: number, width: number, netDischarge: number, basinDepth?: number): SillNetFlowExchange {
+export function exchangeSillWithNetFlowFarmerArmi1986(
+  gPrime: number,
+  crestDepth: number,
+  width: number,
+  netDischarge: number,
+  basinDepth?: number,
+): SillNetFlowExchange {
   const { g, depth: D, width: b, netDischarge: Q0 } = checkedExchangeInputs(gPrime, crestDepth, width, netDischarge);
-  const H = basinDepth === undefined ? Infinity : requireInRange('reservoir_depth', basinDepth, 'm', { min: D, minExclusive: true, max: 1e5 });
-  const r = H / D, scale = b * Math.sqrt(g * D ** 3), s = Q0 / scale;
-  const flushingWithUpper = scale, flushingWithLower = -sillFlushingWithLowerLayer(r) * scale;
+  const H =
+    basinDepth === undefined
+      ? Infinity
+      : requireInRange('reservoir_depth', basinDepth, 'm', { min: D, minExclusive: true, max: 1e5 });
+  const r = H / D,
+    scale = b * Math.sqrt(g * D ** 3),
+    s = Q0 / scale;
+  const flushingWithUpper = scale,
+    flushingWithLower = -sillFlushingWithLowerLayer(r) * scale;
   const warnings: string[] = [];
   const layers = (up: number, low: number) => ({
     upperDischarge: scalar(FARMER_ARMI_1986_SILL_NET_FLOW, up, 'm3/s', { g_prime: g }),
@@ -126,29 +148,56 @@ export function exchangeSillWithNetFlowFarmerArmi1986(gPrime: number, crestDepth
   const common = { flushingWithUpper, flushingWithLower };
   if (Q0 >= flushingWithUpper || Q0 <= flushingWithLower) {
     const upward = Q0 > 0;
-    warnings.push(upward
-      ? `Q0 = ${Q0.toPrecision(3)} m3/s ≥ b√(g′D³) = ${scale.toPrecision(3)} m3/s: one-way flow, no exchange; the upper layer fills the crest section and the dense water is held below crest level.`
-      : `Q0 = ${Q0.toPrecision(3)} m3/s ≤ ${flushingWithLower.toPrecision(3)} m3/s, the critical overflow of the dense water alone: one-way flow, no exchange.`);
+    warnings.push(
+      upward
+        ? `Q0 = ${Q0.toPrecision(3)} m3/s ≥ b√(g′D³) = ${scale.toPrecision(3)} m3/s: one-way flow, no exchange; the upper layer fills the crest section and the dense water is held below crest level.`
+        : `Q0 = ${Q0.toPrecision(3)} m3/s ≤ ${flushingWithLower.toPrecision(3)} m3/s, the critical overflow of the dense water alone: one-way flow, no exchange.`,
+    );
     const rl = upward ? layers(Q0, 0) : layers(0, -Q0);
     return { ...rl, regime: 'one-way', ...common, warnings: [...rl.upperDischarge.warnings, ...warnings] };
   }
-  const q2 = solveLowerFlux(s, r), q1 = s + q2;
+  const q2 = solveLowerFlux(s, r),
+    q1 = s + q2;
   const c = controls(q1, q2, r);
-  if (H === Infinity) warnings.push('Deep dense basin assumed (H ≫ D): the second control is the virtual control where the lower layer becomes deep and the upper layer critical.');
-  else warnings.push(`The second control sits at the foot of the sill on the dense side, where the bed levels off at ${H.toPrecision(3)} m.`);
-  warnings.push('Maximal exchange: a dense-side interface higher than the foot control allows (e.g. a shallow or ponded basin) gives less exchange (submaximal, not computed).');
+  if (H === Infinity)
+    warnings.push(
+      'Deep dense basin assumed (H ≫ D): the second control is the virtual control where the lower layer becomes deep and the upper layer critical.',
+    );
+  else
+    warnings.push(
+      `The second control sits at the foot of the sill on the dense side, where the bed levels off at ${H.toPrecision(3)} m.`,
+    );
+  warnings.push(
+    'Maximal exchange: a dense-side interface higher than the foot control allows (e.g. a shallow or ponded basin) gives less exchange (submaximal, not computed).',
+  );
   const rl = layers(q1 * scale, q2 * scale);
   return {
-    ...rl, regime: 'maximal', ...common,
-    upperThicknessAtCrest: (1 - c.h2Crest) * D, upperThicknessAtFoot: c.h1Foot * D,
-    energyAtCrest: c.energyCrest * g * D, energyAtFoot: c.energyFoot * g * D,
+    ...rl,
+    regime: 'maximal',
+    ...common,
+    upperThicknessAtCrest: (1 - c.h2Crest) * D,
+    upperThicknessAtFoot: c.h1Foot * D,
+    energyAtCrest: c.energyCrest * g * D,
+    energyAtFoot: c.energyFoot * g * D,
     warnings: [...rl.upperDischarge.warnings, ...warnings],
   };
 }
 
 /** Upper and lower layer discharges [m3/s] over n net discharges spanning the maximal-exchange range of the sill. */
-export function exchangeSillNetFlowCurve(gPrime: number, crestDepth: number, width: number, basinDepth?: number, n = 41) {
-  const { flushingWithUpper: top, flushingWithLower: bottom } = exchangeSillWithNetFlowFarmerArmi1986(gPrime, crestDepth, width, 0, basinDepth);
+export function exchangeSillNetFlowCurve(
+  gPrime: number,
+  crestDepth: number,
+  width: number,
+  basinDepth?: number,
+  n = 41,
+) {
+  const { flushingWithUpper: top, flushingWithLower: bottom } = exchangeSillWithNetFlowFarmerArmi1986(
+    gPrime,
+    crestDepth,
+    width,
+    0,
+    basinDepth,
+  );
   const net = Array.from({ length: n }, (_, k) => bottom + ((top - bottom) * k) / (n - 1));
   const states = net.map((q) => exchangeSillWithNetFlowFarmerArmi1986(gPrime, crestDepth, width, q, basinDepth));
   return { net, upper: states.map((x) => x.upperDischarge.value), lower: states.map((x) => x.lowerDischarge.value) };

@@ -18,7 +18,8 @@ function compositeFroudeSquared(u1: number, h1: number, u2: number, h2: number, 
 export const ARMI_FARMER_1986: MethodInfo = {
   id: 'exchange-contraction-armi-farmer-1986',
   title: 'Maximal two-layer exchange through a contraction (Armi & Farmer 1986)',
-  source: 'Armi, L., Farmer, D.M. (1986). Maximal two-layer exchange through a contraction with barotropic net flow. J. Fluid Mech. 164, 27–51 (zero net flow: interface at mid-depth and G² = 1 at the narrowest section); Armi, L. (1986) J. Fluid Mech. 163, 27–58 (composite Froude number).',
+  source:
+    'Armi, L., Farmer, D.M. (1986). Maximal two-layer exchange through a contraction with barotropic net flow. J. Fluid Mech. 164, 27–51 (zero net flow: interface at mid-depth and G² = 1 at the narrowest section); Armi, L. (1986) J. Fluid Mech. 163, 27–58 (composite Froude number).',
   equation: 'q = ¼ √(g′H³) per unit width of the narrowest section each way; Q = ¼ b √(g′H³)',
   validity: { g_prime: { max: 1, unit: 'm/s2', note: 'Boussinesq' } },
 };
@@ -26,8 +27,10 @@ export const ARMI_FARMER_1986: MethodInfo = {
 export const FARMER_ARMI_1986: MethodInfo = {
   id: 'exchange-sill-farmer-armi-1986',
   title: 'Maximal two-layer exchange over a sill (Farmer & Armi 1986)',
-  source: 'Farmer, D.M., Armi, L. (1986). Maximal two-layer exchange over a sill and through the combination of a sill and contraction with barotropic flow. J. Fluid Mech. 164, 53–76 (sill alone: control at the crest, virtual control where the lower layer becomes deep; q ≈ 0.208 √(g′H³)).',
-  equation: 'at the crest (depth H): q²/h1³ + q²/h2³ = g′, h1 + h2 = H; Bernoulli difference ½q²/h2² − ½q²/h1² − g′h1 = −(3/2)(g′q)^(2/3) from the virtual control',
+  source:
+    'Farmer, D.M., Armi, L. (1986). Maximal two-layer exchange over a sill and through the combination of a sill and contraction with barotropic flow. J. Fluid Mech. 164, 53–76 (sill alone: control at the crest, virtual control where the lower layer becomes deep; q ≈ 0.208 √(g′H³)).',
+  equation:
+    'at the crest (depth H): q²/h1³ + q²/h2³ = g′, h1 + h2 = H; Bernoulli difference ½q²/h2² − ½q²/h1² − g′h1 = −(3/2)(g′q)^(2/3) from the virtual control',
   validity: { g_prime: { max: 1, unit: 'm/s2', note: 'Boussinesq' } },
 };
 
@@ -74,11 +77,15 @@ export function maximalExchangeSillFarmerArmi1986(gPrime: number, depth: number,
   const { g, h, b } = inputs(gPrime, depth, width);
   // dimensionless (g′ = H = 1): upper thickness y at the crest; q² from criticality
   const q2 = (y: number) => 1 / (1 / y ** 3 + 1 / (1 - y) ** 3);
-  const bernoulli = (y: number) => { const s = q2(y); return 0.5 * s / (1 - y) ** 2 - 0.5 * s / (y * y) - y + 1.5 * s ** (1 / 3); };
+  const bernoulli = (y: number) => {
+    const s = q2(y);
+    return (0.5 * s) / (1 - y) ** 2 - (0.5 * s) / (y * y) - y + 1.5 * s ** (1 / 3);
+  };
   const y = brentRoot(bernoulli, 0.5 + 1e-9, 1 - 1e-6, 1e-14);
   if (y === undefined) throw new Error('sill exchange: no control solution found');
   const qDim = Math.sqrt(q2(y)) * Math.sqrt(g * h ** 3);
-  const u1 = qDim / (y * h), u2 = qDim / ((1 - y) * h);
+  const u1 = qDim / (y * h),
+    u2 = qDim / ((1 - y) * h);
   return {
     discharge: scalar(FARMER_ARMI_1986, qDim * b, 'm3/s', { g_prime: g }, [NO_NET_FLOW]),
     upperThicknessAtControl: y * h,

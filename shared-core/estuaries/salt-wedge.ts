@@ -12,8 +12,10 @@ import { solveOde, type OdeStatus } from '../numerics/ode';
 export const SCHIJF_SCHONFELD_1953: MethodInfo = {
   id: 'salt-wedge-schijf-schonfeld-1953',
   title: 'Length and shape of an arrested salt wedge (Schijf & Schönfeld 1953)',
-  source: 'Schijf, J.B., Schönfeld, J.C. (1953). Theoretical considerations on the motion of salt and fresh water. Proc. 5th IAHR Congress, Minneapolis, 321–333 (two-layer steady equations, critical flow at the mouth). Default f_i: Sørgard, E., Martinsen, T., Aas, E. (1990). Drag coefficient at a stationary salt wedge. J. Geophys. Res. 95(C2), 1977–1980 (profile fits gave 1.1–2.7 × 10⁻⁴ with τ = ρ f_i u1²).',
-  equation: 'dξ/dη = (H/f_i)(η³ − F0²)(1 − η)/F0², η = h1/H from F0^(2/3) at the mouth to 1 at the tip; L = (H/4f_i)[F0⁻²/5 − 2 + 3F0^(2/3) − (6/5)F0^(4/3)], F0 = U0/√(g′H) < 1',
+  source:
+    'Schijf, J.B., Schönfeld, J.C. (1953). Theoretical considerations on the motion of salt and fresh water. Proc. 5th IAHR Congress, Minneapolis, 321–333 (two-layer steady equations, critical flow at the mouth). Default f_i: Sørgard, E., Martinsen, T., Aas, E. (1990). Drag coefficient at a stationary salt wedge. J. Geophys. Res. 95(C2), 1977–1980 (profile fits gave 1.1–2.7 × 10⁻⁴ with τ = ρ f_i u1²).',
+  equation:
+    'dξ/dη = (H/f_i)(η³ − F0²)(1 − η)/F0², η = h1/H from F0^(2/3) at the mouth to 1 at the tip; L = (H/4f_i)[F0⁻²/5 − 2 + 3F0^(2/3) − (6/5)F0^(4/3)], F0 = U0/√(g′H) < 1',
   validity: {
     interfacial_friction: { min: 1e-4, max: 1e-3, unit: '1', note: 'field values of f_i with τ = ρ f_i u1²' },
     river_froude: { min: 0.01, max: 1, maxExclusive: true, unit: '1', note: 'arrested wedge exists only for F0 < 1' },
@@ -43,16 +45,26 @@ function checked(input: SaltWedgeInput) {
   const u = requireInRange('river_velocity', input.riverVelocity, 'm/s', { ...positive, max: 20 });
   const h = requireInRange('depth', input.depth, 'm', { ...positive, max: 1e3 });
   const g = requireInRange('g_prime', input.gPrime, 'm/s2', { ...positive, max: GRAVITY });
-  const f = requireInRange('interfacial_friction', input.interfacialFriction ?? DEFAULT_INTERFACIAL_FRICTION, '1', { ...positive, max: 0.1 });
+  const f = requireInRange('interfacial_friction', input.interfacialFriction ?? DEFAULT_INTERFACIAL_FRICTION, '1', {
+    ...positive,
+    max: 0.1,
+  });
   const F0 = u / Math.sqrt(g * h);
   // below this the closed form overflows (L ∝ F0⁻²): the river is too slow to hold any wedge back
   if (F0 < MIN_RIVER_FROUDE) {
-    throw new InputError('river_velocity', u, 'm/s', `≥ ${formatNumber(MIN_RIVER_FROUDE * Math.sqrt(g * h))} m/s here`, `the river densimetric Froude number ${formatNumber(F0)} is below ${MIN_RIVER_FROUDE}: the sea water would reach indefinitely far inland (no arrested wedge to compute)`);
+    throw new InputError(
+      'river_velocity',
+      u,
+      'm/s',
+      `≥ ${formatNumber(MIN_RIVER_FROUDE * Math.sqrt(g * h))} m/s here`,
+      `the river densimetric Froude number ${formatNumber(F0)} is below ${MIN_RIVER_FROUDE}: the sea water would reach indefinitely far inland (no arrested wedge to compute)`,
+    );
   }
   return { u, h, g, f, F0 };
 }
 
-const NO_WEDGE = 'The river densimetric Froude number F0 ≥ 1: the river flow pushes the sea water out of the mouth and no wedge is arrested.';
+const NO_WEDGE =
+  'The river densimetric Froude number F0 ≥ 1: the river flow pushes the sea water out of the mouth and no wedge is arrested.';
 
 /**
  * Closed-form wedge length L = (H/4f_i)[F0⁻²/5 − 2 + 3F0^(2/3) − (6/5)F0^(4/3)] [m].
@@ -90,7 +102,17 @@ export interface SaltWedgeProfile {
 export function saltWedgeProfile(input: SaltWedgeInput, points = 50): SaltWedgeProfile {
   const { h, f, F0 } = checked(input);
   requireInRange('points', points, '1', { min: 2, max: 10000 });
-  if (F0 >= 1) return { distance: [], interfaceDepth: [], saltThickness: [], length: 0, riverFroude: F0, status: 'completed', evaluations: 0, warnings: [NO_WEDGE] };
+  if (F0 >= 1)
+    return {
+      distance: [],
+      interfaceDepth: [],
+      saltThickness: [],
+      length: 0,
+      riverFroude: F0,
+      status: 'completed',
+      evaluations: 0,
+      warnings: [NO_WEDGE],
+    };
   const etaMouth = F0 ** (2 / 3);
   const rhs = (eta: number) => [((h / f) * (eta ** 3 - F0 * F0) * (1 - eta)) / (F0 * F0)];
   const sol = solveOde(rhs, etaMouth, [0], 1, { hMax: (1 - etaMouth) / points, rtol: 1e-9, atol: 1e-6 * h });
@@ -118,7 +140,13 @@ export interface SaltWedgeCurve {
 /**
  * Wedge length for each river discharge Q [m3/s] in a channel of width W [m] and depth H [m].
  */
-export function saltWedgeLengthCurve(discharges: readonly number[], width: number, depth: number, gPrime: number, interfacialFriction = DEFAULT_INTERFACIAL_FRICTION): SaltWedgeCurve {
+export function saltWedgeLengthCurve(
+  discharges: readonly number[],
+  width: number,
+  depth: number,
+  gPrime: number,
+  interfacialFriction = DEFAULT_INTERFACIAL_FRICTION,
+): SaltWedgeCurve {
   const w = requireInRange('width', width, 'm', { ...positive, max: 1e5 });
   const h = requireInRange('depth', depth, 'm', { ...positive, max: 1e3 });
   const rows = discharges.map((q) => {
@@ -126,5 +154,10 @@ export function saltWedgeLengthCurve(discharges: readonly number[], width: numbe
     const r = saltWedgeLengthSchijfSchonfeld1953({ riverVelocity: u, depth: h, gPrime, interfacialFriction });
     return { q, u, F0: r.riverFroude, L: r.length.value };
   });
-  return { discharge: rows.map((r) => r.q), riverVelocity: rows.map((r) => r.u), riverFroude: rows.map((r) => r.F0), length: rows.map((r) => r.L) };
+  return {
+    discharge: rows.map((r) => r.q),
+    riverVelocity: rows.map((r) => r.u),
+    riverFroude: rows.map((r) => r.F0),
+    length: rows.map((r) => r.L),
+  };
 }

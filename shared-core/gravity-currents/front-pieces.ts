@@ -69,7 +69,14 @@ export function frontAt(pieces: readonly FrontPiece[], t: number): FrontState {
   let p = pieces[0];
   for (const q of pieces) if (q.tStart <= t) p = q;
   const x = positionIn(p, t);
-  if (x === 0 && p.m > 0) throw new InputError('time', t, 's', '> 0', 'the front speed of a point source is unbounded at t = 0; give a time > 0');
+  if (x === 0 && p.m > 0)
+    throw new InputError(
+      'time',
+      t,
+      's',
+      '> 0',
+      'the front speed of a point source is unbounded at t = 0; give a time > 0',
+    );
   return { time: t, position: x, speed: p.c * x ** -p.m, phase: p.phase };
 }
 
@@ -88,7 +95,12 @@ export function transitionsOf(pieces: readonly FrontPiece[]): PhaseTransition[] 
 }
 
 /** Samples a trajectory at the given times [s] and the arrival times at the given distances [m]. */
-export function sampleFront(pieces: readonly FrontPiece[], times: readonly number[], distances: readonly number[], warnings: string[]): FrontSeries {
+export function sampleFront(
+  pieces: readonly FrontPiece[],
+  times: readonly number[],
+  distances: readonly number[],
+  warnings: string[],
+): FrontSeries {
   const states = times.map((t) => frontAt(pieces, t));
   return {
     time: states.map((s) => s.time),

@@ -21,8 +21,10 @@ const BOUSSINESQ_NOTE = 'Boussinesq laboratory currents (Δρ/ρ ≲ 0.1)';
 export const VON_KARMAN_1940: MethodInfo = {
   id: 'front-speed-von-karman-1940',
   title: 'Front speed of a gravity current in a deep ambient (von Kármán 1940)',
-  source: 'von Kármán, T. (1940). The engineer grapples with non-linear problems. Bull. Amer. Math. Soc. 46, 615–683 (§ on gravity currents); confirmed as the deep limit by Benjamin, T.B. (1968), J. Fluid Mech. 31, 209–248, §3.',
-  equation: 'U = √(2 g′ h), i.e. Fr = √2 (steady, inviscid, no mixing, infinitely deep ambient; g′ referred to the ambient density)',
+  source:
+    'von Kármán, T. (1940). The engineer grapples with non-linear problems. Bull. Amer. Math. Soc. 46, 615–683 (§ on gravity currents); confirmed as the deep limit by Benjamin, T.B. (1968), J. Fluid Mech. 31, 209–248, §3.',
+  equation:
+    'U = √(2 g′ h), i.e. Fr = √2 (steady, inviscid, no mixing, infinitely deep ambient; g′ referred to the ambient density)',
   validity: {},
 };
 
@@ -36,16 +38,22 @@ export const VON_KARMAN_1940: MethodInfo = {
 export function frontSpeedVonKarman1940(gPrime: number, currentDepth: number): FrontSpeed {
   const { g, h } = checkedCurrent(gPrime, currentDepth);
   const u = Math.sqrt(2 * g * h);
-  const extra = ['Deep-ambient inviscid limit: laboratory currents run slower (Fr ≈ 1.0–1.2 instead of √2; Huppert & Simpson 1980; Shin et al. 2004).'];
+  const extra = [
+    'Deep-ambient inviscid limit: laboratory currents run slower (Fr ≈ 1.0–1.2 instead of √2; Huppert & Simpson 1980; Shin et al. 2004).',
+  ];
   return { ...scalar(VON_KARMAN_1940, u, 'm/s', {}, extra), froude: Math.SQRT2 };
 }
 
 export const BENJAMIN_1968: MethodInfo = {
   id: 'front-speed-benjamin-1968',
   title: 'Front speed of a steady gravity current in a channel (Benjamin 1968)',
-  source: 'Benjamin, T.B. (1968). Gravity currents and related phenomena. J. Fluid Mech. 31, 209–248, eq. (2.17)/(3.6) (flow-force balance; energy conserved only at a = 1/2).',
-  equation: 'U²/(g′h) = (1 − a)(2 − a)/(1 + a), a = h/H; U/√(g′H) peaks at a ≈ 0.347 (≈ 0.527); a = 1/2 gives U = ½√(g′H)',
-  validity: { depth_ratio: { min: 0, max: 0.5, unit: '1', note: 'a > 1/2 would need an energy gain and is not realised' } },
+  source:
+    'Benjamin, T.B. (1968). Gravity currents and related phenomena. J. Fluid Mech. 31, 209–248, eq. (2.17)/(3.6) (flow-force balance; energy conserved only at a = 1/2).',
+  equation:
+    'U²/(g′h) = (1 − a)(2 − a)/(1 + a), a = h/H; U/√(g′H) peaks at a ≈ 0.347 (≈ 0.527); a = 1/2 gives U = ½√(g′H)',
+  validity: {
+    depth_ratio: { min: 0, max: 0.5, unit: '1', note: 'a > 1/2 would need an energy gain and is not realised' },
+  },
 };
 
 /** Benjamin's Froude number U/√(g′h) as a function of a = h/H (a = 0: deep ambient, √2). */
@@ -61,14 +69,20 @@ export function benjaminFroude(a: number): number {
  */
 export function frontSpeedBenjamin1968(gPrime: number, currentDepth: number, totalDepth?: number): FrontSpeed {
   const { g, h, a } = checkedCurrent(gPrime, currentDepth, totalDepth);
-  const extra = a === 0.5 ? [] : ['Benjamin’s current conserves energy only at a = h/H = 1/2; elsewhere the flow-force balance implies dissipation (or, for a > 1/2, an impossible energy gain).'];
+  const extra =
+    a === 0.5
+      ? []
+      : [
+          'Benjamin’s current conserves energy only at a = h/H = 1/2; elsewhere the flow-force balance implies dissipation (or, for a > 1/2, an impossible energy gain).',
+        ];
   return fromFroude(BENJAMIN_1968, benjaminFroude(a), g, h, totalDepth, { depth_ratio: a }, extra);
 }
 
 export const HUPPERT_SIMPSON_1980_FRONT: MethodInfo = {
   id: 'front-speed-huppert-simpson-1980',
   title: 'Empirical front condition of Huppert & Simpson (1980)',
-  source: 'Huppert, H.E., Simpson, J.E. (1980). The slumping of gravity currents. J. Fluid Mech. 99, 785–799, eq. (2.3), fitted to the lock-release experiments of Keulegan (1957) and Simpson & Britter (1979).',
+  source:
+    'Huppert, H.E., Simpson, J.E. (1980). The slumping of gravity currents. J. Fluid Mech. 99, 785–799, eq. (2.3), fitted to the lock-release experiments of Keulegan (1957) and Simpson & Britter (1979).',
   equation: 'Fr = U/√(g′h) = 1.19 for a = h/H ≤ 0.075; Fr = ½ a^(−1/3) for 0.075 ≤ a ≤ 1',
   validity: { g_prime: { max: 1, unit: 'm/s2', note: BOUSSINESQ_NOTE } },
 };
@@ -91,8 +105,10 @@ export function frontSpeedHuppertSimpson1980(gPrime: number, currentDepth: numbe
 export const SHIN_2004: MethodInfo = {
   id: 'front-speed-shin-2004',
   title: 'Front speed of a partial-depth lock release (Shin, Dalziel & Linden 2004)',
-  source: 'Shin, J.O., Dalziel, S.B., Linden, P.F. (2004). Gravity currents produced by lock exchange. J. Fluid Mech. 521, 1–34 (energy-conserving theory: current depth D/2, front speed eq. for partial depth).',
-  equation: 'h = D/2, U = ½ √(g′ D (2 − D/H)); Fr = U/√(g′h) = √(1 − h/H), → 1 for a deep ambient, U = ½√(g′H) for a full-depth lock',
+  source:
+    'Shin, J.O., Dalziel, S.B., Linden, P.F. (2004). Gravity currents produced by lock exchange. J. Fluid Mech. 521, 1–34 (energy-conserving theory: current depth D/2, front speed eq. for partial depth).',
+  equation:
+    'h = D/2, U = ½ √(g′ D (2 − D/H)); Fr = U/√(g′h) = √(1 − h/H), → 1 for a deep ambient, U = ½√(g′H) for a full-depth lock',
   validity: { g_prime: { max: 1, unit: 'm/s2', note: BOUSSINESQ_NOTE } },
 };
 
@@ -107,13 +123,18 @@ export function frontSpeedShinDalzielLinden2004(gPrime: number, lockDepth: numbe
   const d = requireInRange('lock_depth', lockDepth, 'm', { ...positive, max: 1e4 });
   const r = depthRatio(d, totalDepth, 'lock_depth');
   const u = 0.5 * Math.sqrt(g * d * (2 - r));
-  return { ...scalar(SHIN_2004, u, 'm/s', { g_prime: g }), froude: u / Math.sqrt((g * d) / 2), froudeTotal: totalDepth === undefined ? undefined : u / Math.sqrt(g * totalDepth) };
+  return {
+    ...scalar(SHIN_2004, u, 'm/s', { g_prime: g }),
+    froude: u / Math.sqrt((g * d) / 2),
+    froudeTotal: totalDepth === undefined ? undefined : u / Math.sqrt(g * totalDepth),
+  };
 }
 
 export const LOCK_EXCHANGE: MethodInfo = {
   id: 'lock-exchange-speed',
   title: 'Full-depth lock exchange front speed: ideal value and experimental range',
-  source: 'Ideal: Yih, C.-S. (1965). Dynamics of Nonhomogeneous Fluids, §3; Benjamin (1968) J. Fluid Mech. 31, 209–248, §4 (a = 1/2). Experiments: Keulegan (1957) NBS Rep. 5168; Barr (1967); Shin, Dalziel & Linden (2004) J. Fluid Mech. 521, 1–34; range as summarised in Simpson (1997) Gravity Currents, 2nd ed., Ch. 12.',
+  source:
+    'Ideal: Yih, C.-S. (1965). Dynamics of Nonhomogeneous Fluids, §3; Benjamin (1968) J. Fluid Mech. 31, 209–248, §4 (a = 1/2). Experiments: Keulegan (1957) NBS Rep. 5168; Barr (1967); Shin, Dalziel & Linden (2004) J. Fluid Mech. 521, 1–34; range as summarised in Simpson (1997) Gravity Currents, 2nd ed., Ch. 12.',
   equation: 'U = k √(g′H); ideal k = 1/2, experiments k ≈ 0.44–0.48',
   validity: { g_prime: { max: 1, unit: 'm/s2', note: BOUSSINESQ_NOTE } },
 };
@@ -139,13 +160,30 @@ export function lockExchangeSpeed(gPrime: number, depth: number): LockExchangeSp
   const h = requireInRange('depth', depth, 'm', { ...positive, max: 1e4 });
   const c = Math.sqrt(g * h);
   const extra = ['Laboratory lock exchanges run 4–12 % slower than the ideal value because of mixing and friction.'];
-  return { ideal: scalar(LOCK_EXCHANGE, 0.5 * c, 'm/s', { g_prime: g }, extra), low: LOCK_EXCHANGE_FROUDE.low * c, high: LOCK_EXCHANGE_FROUDE.high * c, typical: LOCK_EXCHANGE_FROUDE.typical * c };
+  return {
+    ideal: scalar(LOCK_EXCHANGE, 0.5 * c, 'm/s', { g_prime: g }, extra),
+    low: LOCK_EXCHANGE_FROUDE.low * c,
+    high: LOCK_EXCHANGE_FROUDE.high * c,
+    typical: LOCK_EXCHANGE_FROUDE.typical * c,
+  };
 }
 
 /** U = Fr √(g′h) as a FrontSpeed with both Froude numbers. */
-function fromFroude(info: MethodInfo, fr: number, g: number, h: number, totalDepth: number | undefined, inputs: Record<string, number>, extra: string[] = []): FrontSpeed {
+function fromFroude(
+  info: MethodInfo,
+  fr: number,
+  g: number,
+  h: number,
+  totalDepth: number | undefined,
+  inputs: Record<string, number>,
+  extra: string[] = [],
+): FrontSpeed {
   const u = fr * Math.sqrt(g * h);
-  return { ...scalar(info, u, 'm/s', inputs, extra), froude: fr, froudeTotal: totalDepth === undefined ? undefined : u / Math.sqrt(g * totalDepth) };
+  return {
+    ...scalar(info, u, 'm/s', inputs, extra),
+    froude: fr,
+    froudeTotal: totalDepth === undefined ? undefined : u / Math.sqrt(g * totalDepth),
+  };
 }
 
 /** a = h/H, 0 for a deep ambient; throws when h > H. */

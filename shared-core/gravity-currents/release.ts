@@ -7,8 +7,10 @@ import { viscousFrontCoefficientHuppert1982, type SpreadingGeometry } from './vi
 export const LOCK_RELEASE_HS1980: MethodInfo = {
   id: 'lock-release-huppert-simpson-1980',
   title: 'Front of a fixed-volume release: slumping, inertial and viscous phases (box model)',
-  source: 'Huppert, H.E., Simpson, J.E. (1980). The slumping of gravity currents. J. Fluid Mech. 99, 785–799 (box model with the front condition eq. 2.3; inertial laws x = 1.47 (g′A)^(1/3) t^(2/3), r = 1.16 (g′V)^(1/4) t^(1/2)); viscous phase: Huppert, H.E. (1982) J. Fluid Mech. 121, 43–58.',
-  equation: 'dx/dt = Fr(h/H)√(g′h), h = A/x (planar) or V/(πr²); slumping while h/H ≥ 0.075, inertial below; viscous once the viscous spreading speed of Huppert (1982) at the front falls below the inertial speed',
+  source:
+    'Huppert, H.E., Simpson, J.E. (1980). The slumping of gravity currents. J. Fluid Mech. 99, 785–799 (box model with the front condition eq. 2.3; inertial laws x = 1.47 (g′A)^(1/3) t^(2/3), r = 1.16 (g′V)^(1/4) t^(1/2)); viscous phase: Huppert, H.E. (1982) J. Fluid Mech. 121, 43–58.',
+  equation:
+    'dx/dt = Fr(h/H)√(g′h), h = A/x (planar) or V/(πr²); slumping while h/H ≥ 0.075, inertial below; viscous once the viscous spreading speed of Huppert (1982) at the front falls below the inertial speed',
   validity: {
     g_prime: { max: 1, unit: 'm/s2', note: 'Boussinesq laboratory releases' },
     lock_aspect: { min: 0.1, max: 10, unit: '1', note: 'lock depth / lock length of the experiments, roughly' },
@@ -46,14 +48,20 @@ export function lockReleaseHuppertSimpson1980(input: LockReleaseInput): ReleaseM
   const g = requireInRange('g_prime', input.gPrime, 'm/s2', { ...positive, max: GRAVITY });
   const x0 = requireInRange('lock_length', input.lockLength, 'm', { ...positive, max: 1e5 });
   const h0 = requireInRange('lock_depth', input.lockDepth, 'm', { ...positive, max: 1e4 });
-  const H = input.totalDepth === undefined ? undefined : requireInRange('total_depth', input.totalDepth, 'm', { min: h0, max: 1e4 });
+  const H =
+    input.totalDepth === undefined
+      ? undefined
+      : requireInRange('total_depth', input.totalDepth, 'm', { min: h0, max: 1e4 });
   const nu = requireInRange('kinematic_viscosity', input.kinematicViscosity, 'm2/s', { ...positive, max: 1 });
   const planar = input.geometry === 'planar';
   const vol = planar ? x0 * h0 : Math.PI * x0 * x0 * h0;
   const v = planar ? vol : vol / Math.PI; // h = v / x^k
   const k = planar ? 1 : 2;
   // box-model speed laws dx/dt = c x^(−m)
-  const slump = H === undefined ? undefined : { phase: 'slumping' as const, c: 0.5 * Math.sqrt(g) * Math.cbrt(H) * v ** (1 / 6), m: k / 6 };
+  const slump =
+    H === undefined
+      ? undefined
+      : { phase: 'slumping' as const, c: 0.5 * Math.sqrt(g) * Math.cbrt(H) * v ** (1 / 6), m: k / 6 };
   const inertial = { phase: 'inertial' as const, c: FR_DEEP * Math.sqrt(g * v), m: k / 2 };
   const eta = viscousFrontCoefficientHuppert1982(0, input.geometry).value;
   const viscous = planar
@@ -71,9 +79,15 @@ export function lockReleaseHuppertSimpson1980(input: LockReleaseInput): ReleaseM
     const { law, from } = box[i];
     const to = i + 1 < box.length ? box[i + 1].from : Infinity;
     const cross = (viscous.c / law.c) ** (1 / (viscous.m - law.m));
-    if (cross <= from) { xVisc = from; break; }
+    if (cross <= from) {
+      xVisc = from;
+      break;
+    }
     laws.push({ ...law, from });
-    if (cross < to) { xVisc = cross; break; }
+    if (cross < to) {
+      xVisc = cross;
+      break;
+    }
   }
   if (Number.isFinite(xVisc)) laws.push({ ...viscous, from: xVisc });
   const pieces: FrontPiece[] = [];
@@ -87,8 +101,11 @@ export function lockReleaseHuppertSimpson1980(input: LockReleaseInput): ReleaseM
     pieces.push({ phase: l.phase, tStart: t, xStart: l.from, c: l.c, m: l.m });
   }
   const warnings = validityWarnings(LOCK_RELEASE_HS1980, { g_prime: g, lock_aspect: h0 / x0 });
-  warnings.push('Box model: the current is taken as a uniform slab without entrainment; experiments scatter about ±10–20 % around it.');
-  if (pieces[0].phase === 'viscous') warnings.push('Viscous forces dominate from the release: the current never spreads inertially.');
+  warnings.push(
+    'Box model: the current is taken as a uniform slab without entrainment; experiments scatter about ±10–20 % around it.',
+  );
+  if (pieces[0].phase === 'viscous')
+    warnings.push('Viscous forces dominate from the release: the current never spreads inertially.');
   return { pieces, volume: vol, geometry: input.geometry, warnings };
 }
 
@@ -101,7 +118,11 @@ export function lockReleaseFrontAt(model: ReleaseModel, t: number): FrontState {
  * Front position [m], speed [m/s] and phase vs time for a lock release, with the phase transitions and the
  * arrival times [s] at the given distances [m] (measured like the positions).
  */
-export function lockReleaseSeries(input: LockReleaseInput, times: readonly number[], distances: readonly number[] = []): FrontSeries {
+export function lockReleaseSeries(
+  input: LockReleaseInput,
+  times: readonly number[],
+  distances: readonly number[] = [],
+): FrontSeries {
   const model = lockReleaseHuppertSimpson1980(input);
   return sampleFront(model.pieces, times, distances, model.warnings);
 }

@@ -65,48 +65,80 @@ const GP = { min: 1e-6, max: 20 };
  * @source Wood & Simpson (1984); Klemp, Rotunno & Skamarock (1997); Yih & Guha (1955) for the comparison closure
  * @validity hydrostatic, no entrainment across the jump, lower layer thickening (upstream G > 1 through the lower layer)
  */
-export function internalJumpFiniteDepth(q: number, y1: number, gPrime: number, totalDepth: number, upperDischarge?: number): FiniteDepthJump {
+export function internalJumpFiniteDepth(
+  q: number,
+  y1: number,
+  gPrime: number,
+  totalDepth: number,
+  upperDischarge?: number,
+): FiniteDepthJump {
   const flux = requireInRange('discharge_per_width', q, 'm2/s', { min: 1e-9, max: 1e4 });
   const D = requireInRange('total_depth', totalDepth, 'm', { min: 2e-3, max: 1e7 });
   const y = requireInRange('upstream_thickness', y1, 'm', { min: 1e-3, max: D, maxExclusive: true });
   const g = requireInRange('g_prime', gPrime, 'm/s2', GP);
-  const qu = upperDischarge === undefined ? -flux : requireInRange('upper_discharge', upperDischarge, 'm2/s', { min: -1e4, max: 1e4 });
+  const qu =
+    upperDischarge === undefined
+      ? -flux
+      : requireInRange('upper_discharge', upperDischarge, 'm2/s', { min: -1e4, max: 1e4 });
   // dimensionless: thicknesses in y1, discharges in √(g′y1³)
-  const unit = Math.sqrt(g * y ** 3), F = flux / unit, Fu = qu / unit, d = D / y;
+  const unit = Math.sqrt(g * y ** 3),
+    F = flux / unit,
+    Fu = qu / unit,
+    d = D / y;
   const G2 = (Y: number) => (F * F) / Y ** 3 + (Fu * Fu) / (d - Y) ** 3;
   const lowerHead = (Y: number) => -(Fu * Fu) / (2 * (d - Y) ** 2) + Y + (F * F) / (2 * Y * Y);
   const shear = (Y: number) => (F / Y - Fu / (d - Y)) ** 2 / d; // (Δu)²/(g′D)
   const warnings: string[] = [];
   const result = (Y2: number, Yip: number, limited: boolean): FiniteDepthJump => {
-    if (Math.max(shear(1), shear(Y2)) > 1) warnings.push('The shear across the interface exceeds the long-wave stability limit (Δu)² < g′D (Long 1956): the interface is unstable and mixing across the jump is likely; the conjugate states are a rough guide.');
+    if (Math.max(shear(1), shear(Y2)) > 1)
+      warnings.push(
+        'The shear across the interface exceeds the long-wave stability limit (Δu)² < g′D (Long 1956): the interface is unstable and mixing across the jump is likely; the conjugate states are a rough guide.',
+      );
     const loss = (lowerHead(1) - lowerHead(Y2)) * y;
     if (loss < 0 && !limited) warnings.push('The lower layer would gain energy across this jump: not a physical jump.');
     return {
-      downstreamThickness: Y2 * y, downstreamThicknessInterfacialPressure: Yip * y, headLoss: loss, froude: F,
-      compositeFroudeUpstream: Math.sqrt(G2(1)), compositeFroudeDownstream: Math.sqrt(G2(Y2)), limited, method: INTERNAL_JUMP_FINITE_DEPTH.id, warnings,
+      downstreamThickness: Y2 * y,
+      downstreamThicknessInterfacialPressure: Yip * y,
+      headLoss: loss,
+      froude: F,
+      compositeFroudeUpstream: Math.sqrt(G2(1)),
+      compositeFroudeDownstream: Math.sqrt(G2(Y2)),
+      limited,
+      method: INTERNAL_JUMP_FINITE_DEPTH.id,
+      warnings,
     };
   };
   const edge = d * (1 - 1e-12);
   const Ym = Fu === 0 ? edge : Math.min(edge, d / (1 + Math.sqrt(Math.abs(Fu) / F))); // thickness of least G²
   if (G2(1) <= 1 || Ym <= 1) {
-    warnings.push(G2(1) <= 1
-      ? `The upstream flow is subcritical (G = ${Math.sqrt(G2(1)).toPrecision(3)} ≤ 1): no jump forms; y2 = y1 is shown.`
-      : 'The upstream flow is supercritical through its upper layer; this form treats a thickening lower layer only: y2 = y1 is shown.');
+    warnings.push(
+      G2(1) <= 1
+        ? `The upstream flow is subcritical (G = ${Math.sqrt(G2(1)).toPrecision(3)} ≤ 1): no jump forms; y2 = y1 is shown.`
+        : 'The upstream flow is supercritical through its upper layer; this form treats a thickening lower layer only: y2 = y1 is shown.',
+    );
     return result(1, 1, false);
   }
   if (G2(Ym) >= 1) {
-    warnings.push('No subcritical state exists for these discharges in this depth: the flow cannot jump to a subcritical state; the thickness of least G is shown.');
+    warnings.push(
+      'No subcritical state exists for these discharges in this depth: the flow cannot jump to a subcritical state; the thickness of least G is shown.',
+    );
     return result(Ym, Ym, true);
   }
   const Yc1 = brentRoot((Y) => G2(Y) - 1, 1, Ym, 1e-14)!;
   const Yc2 = G2(edge) <= 1 ? edge : brentRoot((Y) => G2(Y) - 1, Ym, edge, 1e-14)!;
   // momentum balances divided by (Y − 1): energy-conserving upper layer, and interfacial-pressure closure
-  const energyClosure = (Y: number) => (Y + 1) / 2 - (F * F) / Y + ((Fu * Fu) / 2) * (2 * Y - d * (Y + 1)) / ((d - Y) ** 2 * (d - 1) ** 2);
-  const pressureClosure = (Y: number) => (2 * d - Y - 1) * ((F * F) / ((Y + 1) * Y) - 0.5) + (Fu * Fu) / ((d - Y) * (d - 1));
-  const solve = (f: (Y: number) => number) => (Math.sign(f(Yc1)) !== Math.sign(f(Yc2)) ? brentRoot(f, Yc1, Yc2, 1e-14) : undefined);
-  const Y2 = solve(energyClosure), Yip = solve(pressureClosure) ?? Yc2;
+  const energyClosure = (Y: number) =>
+    (Y + 1) / 2 - (F * F) / Y + (((Fu * Fu) / 2) * (2 * Y - d * (Y + 1))) / ((d - Y) ** 2 * (d - 1) ** 2);
+  const pressureClosure = (Y: number) =>
+    (2 * d - Y - 1) * ((F * F) / ((Y + 1) * Y) - 0.5) + (Fu * Fu) / ((d - Y) * (d - 1));
+  const solve = (f: (Y: number) => number) =>
+    Math.sign(f(Yc1)) !== Math.sign(f(Yc2)) ? brentRoot(f, Yc1, Yc2, 1e-14) : undefined;
+  const Y2 = solve(energyClosure),
+    Yip = solve(pressureClosure) ?? Yc2;
   if (Y2 === undefined) {
-    warnings.push(`The jump exceeds the largest one the depth allows: no conjugate state, the downstream flow would have to pass the second critical thickness ${(Yc2 * y).toPrecision(3)} m. The jump cannot stand and is swept downstream (or the flow chokes); that limiting state is shown.`);
+    warnings.push(
+      `The jump exceeds the largest one the depth allows: no conjugate state, the downstream flow would have to pass the second critical thickness ${(Yc2 * y).toPrecision(3)} m. The jump cannot stand and is swept downstream (or the flow chokes); that limiting state is shown.`,
+    );
     return result(Yc2, Yip, true);
   }
   return result(Y2, Yip, false);

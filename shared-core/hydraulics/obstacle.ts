@@ -40,23 +40,39 @@ export interface ObstacleFlow {
  * @source Sheppard (1956); Snyder et al. (1985); Baines (1995) Ch. 5
  * @validity uniform U and N, inviscid; the dividing-streamline criterion was tested on 3-D hills (Snyder et al. 1985); for long 2-D ridges upstream blocking also begins at Nh/U of order 1 (Baines 1995)
  */
-export function stratifiedObstacleFlow(velocity: number, buoyancyFrequency: number, obstacleHeight: number, depth: number): ObstacleFlow {
+export function stratifiedObstacleFlow(
+  velocity: number,
+  buoyancyFrequency: number,
+  obstacleHeight: number,
+  depth: number,
+): ObstacleFlow {
   const U = requireInRange('velocity', velocity, 'm/s', { min: 1e-6, max: 100 });
   const N = requireInRange('buoyancy_frequency', buoyancyFrequency, '1/s', { min: 1e-6, max: 1 });
   const H = requireInRange('depth', depth, 'm', { min: 1e-3, max: 11000 });
   const h = requireInRange('obstacle_height', obstacleHeight, 'm', { min: 1e-3, max: H, maxExclusive: true });
-  const froude = U / (N * h), froudeDepth = U / (N * H);
+  const froude = U / (N * h),
+    froudeDepth = U / (N * H);
   const blocked = froude < 1;
   const kz1 = Math.PI / H;
   const kx2 = (N / U) ** 2 - kz1 ** 2;
   const warnings: string[] = [];
-  if (kx2 <= 0) warnings.push(`U/(NH) = ${froudeDepth.toPrecision(3)} ≥ 1/π: the flow is faster than the first internal mode, so no stationary lee waves fit in the depth; 2πU/N is only the deep-water scale.`);
-  if (h > 0.5 * H) warnings.push('The obstacle fills more than half the depth: the flow is controlled by the constriction (two-layer or channel hydraulics), beyond this screening.');
+  if (kx2 <= 0)
+    warnings.push(
+      `U/(NH) = ${froudeDepth.toPrecision(3)} ≥ 1/π: the flow is faster than the first internal mode, so no stationary lee waves fit in the depth; 2πU/N is only the deep-water scale.`,
+    );
+  if (h > 0.5 * H)
+    warnings.push(
+      'The obstacle fills more than half the depth: the flow is controlled by the constriction (two-layer or channel hydraulics), beyond this screening.',
+    );
   return {
-    froude, froudeDepth, nondimensionalHeight: 1 / froude, blocked,
+    froude,
+    froudeDepth,
+    nondimensionalHeight: 1 / froude,
+    blocked,
     dividingStreamlineHeight: blocked ? h * (1 - froude) : 0,
     leeWavelength: (2 * Math.PI * U) / N,
     channelLeeWavelength: kx2 > 0 ? (2 * Math.PI) / Math.sqrt(kx2) : undefined,
-    method: STRATIFIED_OBSTACLE_FLOW.id, warnings,
+    method: STRATIFIED_OBSTACLE_FLOW.id,
+    warnings,
   };
 }

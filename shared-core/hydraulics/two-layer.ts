@@ -37,11 +37,20 @@ export interface CompositeFroude {
  * @source Armi (1986)
  * @validity Boussinesq (Δρ/ρ ≪ 1), hydrostatic, gradually varied, no mixing between the layers
  */
-export function compositeFroudeArmi1986(u1: number, u2: number, h1: number, h2: number, gPrime: number): CompositeFroude {
-  const a = requireInRange('upper_velocity', u1, 'm/s', SPEED), b = requireInRange('lower_velocity', u2, 'm/s', SPEED);
-  const t1 = requireInRange('upper_thickness', h1, 'm', DEPTH), t2 = requireInRange('lower_thickness', h2, 'm', DEPTH);
+export function compositeFroudeArmi1986(
+  u1: number,
+  u2: number,
+  h1: number,
+  h2: number,
+  gPrime: number,
+): CompositeFroude {
+  const a = requireInRange('upper_velocity', u1, 'm/s', SPEED),
+    b = requireInRange('lower_velocity', u2, 'm/s', SPEED);
+  const t1 = requireInRange('upper_thickness', h1, 'm', DEPTH),
+    t2 = requireInRange('lower_thickness', h2, 'm', DEPTH);
   const g = requireInRange('g_prime', gPrime, 'm/s2', GP);
-  const f1 = Math.abs(a) / Math.sqrt(g * t1), f2 = Math.abs(b) / Math.sqrt(g * t2);
+  const f1 = Math.abs(a) / Math.sqrt(g * t1),
+    f2 = Math.abs(b) / Math.sqrt(g * t2);
   const G = Math.hypot(f1, f2);
   const state = Math.abs(G - 1) <= 0.02 ? 'critical' : G < 1 ? 'subcritical' : 'supercritical';
   return { value: G, f1, f2, state, method: COMPOSITE_FROUDE.id, warnings: [] };
@@ -66,7 +75,8 @@ export const SILL_OVERFLOW_CRITICAL: MethodInfo = {
  * @validity deep quiescent upper layer (reduced-gravity shallow-water), no rotation, no friction
  */
 export function sillOverflowCritical(gPrime: number, interfaceAboveCrest: number): Scalar {
-  const g = requireInRange('g_prime', gPrime, 'm/s2', GP), Y = requireInRange('interface_above_crest', interfaceAboveCrest, 'm', DEPTH);
+  const g = requireInRange('g_prime', gPrime, 'm/s2', GP),
+    Y = requireInRange('interface_above_crest', interfaceAboveCrest, 'm', DEPTH);
   return scalar(SILL_OVERFLOW_CRITICAL, (2 / 3) ** 1.5 * Math.sqrt(g * Y ** 3), 'm2/s', {});
 }
 
@@ -78,7 +88,13 @@ export const INTERNAL_HYDRAULIC_JUMP: MethodInfo = {
     'y2/y1 = ½(√(1 + 8F1²) − 1), F1² = q²/(g′y1³)); Wilkinson, D.L., Wood, I.R. (1971). A rapidly varied flow phenomenon in a ' +
     'two-layer flow. J. Fluid Mech. 47, 241–256; head loss ΔE = (y2 − y1)³/(4y1y2) in reduced-gravity head.',
   equation: 'y2/y1 = ½(√(1 + 8F1²) − 1); ΔE = (y2 − y1)³/(4 y1 y2)',
-  validity: { depth_ratio: { max: 0.3, unit: '1', note: 'y2/D; the deep-upper-layer form needs the jump small against the total depth' } },
+  validity: {
+    depth_ratio: {
+      max: 0.3,
+      unit: '1',
+      note: 'y2/D; the deep-upper-layer form needs the jump small against the total depth',
+    },
+  },
 };
 
 export interface InternalJump {
@@ -106,13 +122,22 @@ export function internalHydraulicJump(q: number, y1: number, gPrime: number, tot
   const g = requireInRange('g_prime', gPrime, 'm/s2', GP);
   const F = flux / Math.sqrt(g * y ** 3);
   const warnings: string[] = [];
-  if (F <= 1) warnings.push(`F1 = ${F.toPrecision(3)} ≤ 1: the upstream flow is subcritical and no jump forms; the conjugate thickness is shown for reference only.`);
+  if (F <= 1)
+    warnings.push(
+      `F1 = ${F.toPrecision(3)} ≤ 1: the upstream flow is subcritical and no jump forms; the conjugate thickness is shown for reference only.`,
+    );
   const y2 = 0.5 * y * (Math.sqrt(1 + 8 * F * F) - 1);
   if (totalDepth !== undefined) {
     const D = requireInRange('total_depth', totalDepth, 'm', { min: y2, max: 11000 });
     warnings.push(...validityWarnings(INTERNAL_HYDRAULIC_JUMP, { depth_ratio: y2 / D }));
   }
-  return { downstreamThickness: y2, headLoss: (y2 - y) ** 3 / (4 * y * y2), froude: F, method: INTERNAL_HYDRAULIC_JUMP.id, warnings };
+  return {
+    downstreamThickness: y2,
+    headLoss: (y2 - y) ** 3 / (4 * y * y2),
+    froude: F,
+    method: INTERNAL_HYDRAULIC_JUMP.id,
+    warnings,
+  };
 }
 
 export const CURTAIN_WALL_WITHDRAWAL: MethodInfo = {
@@ -137,6 +162,11 @@ export function curtainWallWithdrawalMax(gPrime: number, lipHeight: number, inte
   const g = requireInRange('g_prime', gPrime, 'm/s2', GP);
   const Y = requireInRange('interface_height', interfaceHeight, 'm', DEPTH);
   const a = requireInRange('lip_height', lipHeight, 'm', { min: 1e-3, max: Y, maxExclusive: true });
-  const warnings = a > (2 * Y) / 3 ? ['The lip is above the critical depth 2Y/3: the flow under the wall is subcritical and draws the interface down gently.'] : [];
+  const warnings =
+    a > (2 * Y) / 3
+      ? [
+          'The lip is above the critical depth 2Y/3: the flow under the wall is subcritical and draws the interface down gently.',
+        ]
+      : [];
   return scalar(CURTAIN_WALL_WITHDRAWAL, a * Math.sqrt(2 * g * (Y - a)), 'm2/s', {}, warnings);
 }

@@ -11,7 +11,8 @@ export const WEIR_SKIMMING_WITHDRAWAL: MethodInfo = {
     'l’écoulement de couches superposées de fluides de densités différentes. La Houille Blanche 4, 44–55; the interface rises by ' +
     'u²/(2g′) where the surface falls by u²/(2g). Limits: critical flow q = √(g′h³) at h = 2Y/3 (Turner, J.S. 1973. Buoyancy ' +
     'Effects in Fluids, §3.2) and, for a deep interface, critical free-surface flow over the crest, q = (2/3)^{3/2}√(g h³).',
-  equation: 'q_max = √(2g′(Y − h)) · (h − (g′/g)(Y − h)), h the crest depth and Y the interface depth below the upstream water surface (Y > h); at most (2/3)^{3/2}√(g h³)',
+  equation:
+    'q_max = √(2g′(Y − h)) · (h − (g′/g)(Y − h)), h the crest depth and Y the interface depth below the upstream water surface (Y > h); at most (2/3)^{3/2}√(g h³)',
   validity: {},
 };
 
@@ -39,8 +40,16 @@ export function weirSkimmingWithdrawalMax(gPrime: number, crestDepth: number, in
       'The interface lies so deep that the overflow reaches free-surface critical flow over the crest before the lower layer is lifted to it: lower-layer water is not drawn; the value is the critical discharge (2/3)^{3/2}√(g h³) of the crest.',
     ]);
   }
-  const u = Math.sqrt(2 * g * (Y - h)), q = u * (h - (u * u) / (2 * GRAVITY));
-  const warnings = h > (2 * Y) / 3 ? ['The crest is deeper than the critical depth 2Y/3: the skimmed layer stays subcritical up to the crest and lifts the interface gently.'] : [];
-  warnings.push(`A freely overflowing crest passes about ${criticalFreeSurface.toPrecision(3)} m2/s at this head, ${(criticalFreeSurface / q).toPrecision(3)} times the limit: without throttling (gate, submerged outlet) lower-layer water is drawn.`);
+  const u = Math.sqrt(2 * g * (Y - h)),
+    q = u * (h - (u * u) / (2 * GRAVITY));
+  const warnings =
+    h > (2 * Y) / 3
+      ? [
+          'The crest is deeper than the critical depth 2Y/3: the skimmed layer stays subcritical up to the crest and lifts the interface gently.',
+        ]
+      : [];
+  warnings.push(
+    `A freely overflowing crest passes about ${criticalFreeSurface.toPrecision(3)} m2/s at this head, ${(criticalFreeSurface / q).toPrecision(3)} times the limit: without throttling (gate, submerged outlet) lower-layer water is drawn.`,
+  );
   return scalar(WEIR_SKIMMING_WITHDRAWAL, q, 'm2/s', {}, warnings);
 }

@@ -11,9 +11,25 @@ import type { CalcArgs } from '../calc/types';
 export function underflowSeries(path: UnderflowPath): Series[] {
   const distance = { label: 'Distance along the bed from the plunge line', unit: 'm', values: [...path.distance] };
   return [
-    { title: 'Underflow path', x: distance, y: [{ label: 'Depth of the current', unit: 'm', values: [...path.depth] }], depthAxis: true, caption: 'The current runs down the bed until it meets water of its own density' },
-    { title: 'Underflow discharge', x: distance, y: [{ label: 'Discharge of the current', unit: 'm3/s', values: [...path.discharge] }], caption: 'Discharge grows by entrainment of reservoir water' },
-    { title: 'Underflow temperature', x: distance, y: [{ label: 'Temperature of the current', unit: 'degC', values: [...path.temperature] }], caption: 'Temperature of the current as it mixes' },
+    {
+      title: 'Underflow path',
+      x: distance,
+      y: [{ label: 'Depth of the current', unit: 'm', values: [...path.depth] }],
+      depthAxis: true,
+      caption: 'The current runs down the bed until it meets water of its own density',
+    },
+    {
+      title: 'Underflow discharge',
+      x: distance,
+      y: [{ label: 'Discharge of the current', unit: 'm3/s', values: [...path.discharge] }],
+      caption: 'Discharge grows by entrainment of reservoir water',
+    },
+    {
+      title: 'Underflow temperature',
+      x: distance,
+      y: [{ label: 'Temperature of the current', unit: 'degC', values: [...path.temperature] }],
+      caption: 'Temperature of the current as it mixes',
+    },
   ];
 }
 
@@ -21,8 +37,12 @@ function runUnderflow(a: CalcArgs): CalcOutput {
   const p = arg.profile(a);
   if (!p) throw new InputError('file', '(missing)', '', 'a CSV profile', 'a profile file is required');
   const r = riverInflowPath(p, {
-    discharge: arg.num(a, 'discharge'), width: arg.num(a, 'width'), temperature: arg.num(a, 'temperature'),
-    salinity: arg.num(a, 'salinity'), sediment: arg.num(a, 'sediment'), bedSlope: arg.num(a, 'bed_slope'),
+    discharge: arg.num(a, 'discharge'),
+    width: arg.num(a, 'width'),
+    temperature: arg.num(a, 'temperature'),
+    salinity: arg.num(a, 'salinity'),
+    sediment: arg.num(a, 'sediment'),
+    bedSlope: arg.num(a, 'bed_slope'),
     distanceToPoint: arg.optNum(a, 'distance'),
   });
   const u = r.underflow;
@@ -33,10 +53,17 @@ function runUnderflow(a: CalcArgs): CalcOutput {
   }
   results.discharge_at_end = num(u.path.discharge[u.path.discharge.length - 1], 'm3/s');
   if (u.travelTimeToPoint !== undefined) results.travel_time = num(u.travelTimeToPoint, 's');
-  results.outcome = text(u.insertionDepth !== undefined
-    ? `The inflow plunges at ${r.plungeDepth.toFixed(1)} m and runs down the bed until it leaves it as an interflow at ${u.insertionDepth.toFixed(1)} m.`
-    : 'The inflow plunges and runs down the bed to the bottom of the profile without meeting water of its own density.');
-  return { results, warnings: [...r.warnings, ...u.warnings], sources: [PLUNGE_AKIYAMA_STEFAN_1984.source, UNDERFLOW_NORMAL_STATE.source], series: underflowSeries(u.path) };
+  results.outcome = text(
+    u.insertionDepth !== undefined
+      ? `The inflow plunges at ${r.plungeDepth.toFixed(1)} m and runs down the bed until it leaves it as an interflow at ${u.insertionDepth.toFixed(1)} m.`
+      : 'The inflow plunges and runs down the bed to the bottom of the profile without meeting water of its own density.',
+  );
+  return {
+    results,
+    warnings: [...r.warnings, ...u.warnings],
+    sources: [PLUNGE_AKIYAMA_STEFAN_1984.source, UNDERFLOW_NORMAL_STATE.source],
+    series: underflowSeries(u.path),
+  };
 }
 
 /** The inflows methods of `gprime calc`. */
@@ -46,18 +73,49 @@ export const inflowCalcMethods: CalcMethod[] = [
     title: 'Plunge depth of a dense river inflow',
     topic: 'inflows',
     params: [
-      { kind: 'number', name: 'discharge', unit: 'm3/s', description: 'river inflow', range: { ...positive, max: 1e5 } },
-      { kind: 'number', name: 'width', unit: 'm', description: 'width of the inflow at the plunge line', range: { ...positive, max: 1e5 } },
-      { kind: 'number', name: 'g_prime', unit: 'm/s2', description: 'reduced gravity between the inflow and the surface water', range: { ...positive, max: 20 } },
       {
-        kind: 'number', name: 'plunge_froude', unit: '1', default: DEFAULT_PLUNGE_FROUDE, range: { ...positive, max: 5 },
+        kind: 'number',
+        name: 'discharge',
+        unit: 'm3/s',
+        description: 'river inflow',
+        range: { ...positive, max: 1e5 },
+      },
+      {
+        kind: 'number',
+        name: 'width',
+        unit: 'm',
+        description: 'width of the inflow at the plunge line',
+        range: { ...positive, max: 1e5 },
+      },
+      {
+        kind: 'number',
+        name: 'g_prime',
+        unit: 'm/s2',
+        description: 'reduced gravity between the inflow and the surface water',
+        range: { ...positive, max: 20 },
+      },
+      {
+        kind: 'number',
+        name: 'plunge_froude',
+        unit: '1',
+        default: DEFAULT_PLUNGE_FROUDE,
+        range: { ...positive, max: 5 },
         description: 'plunge densimetric Froude number (default 0.5: Fischer et al. 1979, h_p ≈ 1.6 (q²/g′)^⅓)',
       },
     ],
     results: [{ name: 'plunge_depth', unit: 'm', description: 'water depth at the plunge line' }],
     run(a) {
-      const r = plungeDepthAkiyamaStefan1984(arg.num(a, 'discharge'), arg.num(a, 'width'), arg.num(a, 'g_prime'), arg.num(a, 'plunge_froude'));
-      return { results: { plunge_depth: num(r.value, 'm') }, warnings: r.warnings, sources: [PLUNGE_AKIYAMA_STEFAN_1984.source] };
+      const r = plungeDepthAkiyamaStefan1984(
+        arg.num(a, 'discharge'),
+        arg.num(a, 'width'),
+        arg.num(a, 'g_prime'),
+        arg.num(a, 'plunge_froude'),
+      );
+      return {
+        results: { plunge_depth: num(r.value, 'm') },
+        warnings: r.warnings,
+        sources: [PLUNGE_AKIYAMA_STEFAN_1984.source],
+      };
     },
   },
   {
@@ -66,20 +124,81 @@ export const inflowCalcMethods: CalcMethod[] = [
     topic: 'inflows',
     params: [
       { kind: 'profile', name: 'file', description: 'CSV profile of the reservoir' },
-      { kind: 'number', name: 'discharge', unit: 'm3/s', description: 'river inflow', range: { ...positive, max: 1e5 } },
-      { kind: 'number', name: 'width', unit: 'm', description: 'width of the inflow and of the underflow', range: { ...positive, max: 1e5 } },
-      { kind: 'number', name: 'temperature', unit: 'degC', description: 'river water temperature', range: { min: -3, max: 60 } },
-      { kind: 'number', name: 'salinity', unit: 'PSU', description: 'river water salinity', default: 0, range: { min: 0, max: 70 } },
-      { kind: 'number', name: 'sediment', unit: 'kg/m3', description: 'suspended sediment of the river', default: 0, range: { ...nonNegative, max: 500 } },
-      { kind: 'number', name: 'bed_slope', unit: '1', description: 'bed slope tanθ below the plunge line', range: { ...positive, max: 1 } },
-      { kind: 'number', name: 'distance', unit: 'm', description: 'distance along the bed to a point of interest (e.g. the dam)', optional: true, range: { ...positive, max: 1e6 } },
+      {
+        kind: 'number',
+        name: 'discharge',
+        unit: 'm3/s',
+        description: 'river inflow',
+        range: { ...positive, max: 1e5 },
+      },
+      {
+        kind: 'number',
+        name: 'width',
+        unit: 'm',
+        description: 'width of the inflow and of the underflow',
+        range: { ...positive, max: 1e5 },
+      },
+      {
+        kind: 'number',
+        name: 'temperature',
+        unit: 'degC',
+        description: 'river water temperature',
+        range: { min: -3, max: 60 },
+      },
+      {
+        kind: 'number',
+        name: 'salinity',
+        unit: 'PSU',
+        description: 'river water salinity',
+        default: 0,
+        range: { min: 0, max: 70 },
+      },
+      {
+        kind: 'number',
+        name: 'sediment',
+        unit: 'kg/m3',
+        description: 'suspended sediment of the river',
+        default: 0,
+        range: { ...nonNegative, max: 500 },
+      },
+      {
+        kind: 'number',
+        name: 'bed_slope',
+        unit: '1',
+        description: 'bed slope tanθ below the plunge line',
+        range: { ...positive, max: 1 },
+      },
+      {
+        kind: 'number',
+        name: 'distance',
+        unit: 'm',
+        description: 'distance along the bed to a point of interest (e.g. the dam)',
+        optional: true,
+        range: { ...positive, max: 1e6 },
+      },
     ],
     results: [
       { name: 'plunge_depth', unit: 'm', description: 'water depth at the plunge line' },
-      { name: 'insertion_depth', unit: 'm', description: 'depth where the current leaves the bed as an interflow (when it does)' },
-      { name: 'insertion_distance', unit: 'm', description: 'distance along the bed from the plunge line to the insertion' },
-      { name: 'discharge_at_end', unit: 'm3/s', description: 'discharge of the current where it leaves the bed or ends' },
-      { name: 'travel_time', unit: 's', description: 'travel time to the point of interest (when the current reaches it on the bed)' },
+      {
+        name: 'insertion_depth',
+        unit: 'm',
+        description: 'depth where the current leaves the bed as an interflow (when it does)',
+      },
+      {
+        name: 'insertion_distance',
+        unit: 'm',
+        description: 'distance along the bed from the plunge line to the insertion',
+      },
+      {
+        name: 'discharge_at_end',
+        unit: 'm3/s',
+        description: 'discharge of the current where it leaves the bed or ends',
+      },
+      {
+        name: 'travel_time',
+        unit: 's',
+        description: 'travel time to the point of interest (when the current reaches it on the bed)',
+      },
       { name: 'outcome', unit: '', description: 'what the inflow does, in words' },
     ],
     run: (a) => runUnderflow(a),

@@ -45,5 +45,9 @@ export function entrainmentParker1987(ri: number): Scalar {
 
 /** The entrainment law by name, without validity warnings (for integrations). */
 export function entrainment(law: EntrainmentLaw, ri: number): number {
-  return law === 'parker1987' ? 0.075 / Math.sqrt(1 + 718 * Math.max(0, ri) ** 2.4) : ri >= 0.8 ? 0 : (0.08 - 0.1 * ri) / (1 + 5 * ri);
+  return law === 'parker1987'
+    ? 0.075 / Math.sqrt(1 + 718 * Math.max(0, ri) ** 2.4)
+    : ri >= 0.8
+      ? 0
+      : (0.08 - 0.1 * ri) / (1 + 5 * ri);
 }

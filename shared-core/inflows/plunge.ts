@@ -10,7 +10,12 @@ export const PLUNGE_AKIYAMA_STEFAN_1984: MethodInfo = {
     'Koh, R.C.Y., Imberger, J., Brooks, N.H. (1979). Mixing in Inland and Coastal Waters, Academic Press, Ch. 6 (coefficient 1.6 from memory).',
   equation: 'h_p = (q² / (g′ F_p²))^⅓, q = Q/B',
   validity: {
-    plunge_froude: { min: 0.2, max: 0.8, unit: '1', note: 'range of laboratory and field plunge Froude numbers (from memory)' },
+    plunge_froude: {
+      min: 0.2,
+      max: 0.8,
+      unit: '1',
+      note: 'range of laboratory and field plunge Froude numbers (from memory)',
+    },
   },
 };
 
@@ -26,8 +31,15 @@ export const DEFAULT_PLUNGE_FROUDE = 0.5;
  * @source Akiyama & Stefan (1984); Fischer et al. (1979)
  * @validity 0.2 ≤ F_p ≤ 0.8; a gently sloping, prismatic approach channel
  */
-export function plungeDepthAkiyamaStefan1984(discharge: number, width: number, gPrime: number, plungeFroude = DEFAULT_PLUNGE_FROUDE): Scalar {
-  const q = requireInRange('discharge', discharge, 'm3/s', { ...positive, max: 1e5 }) / requireInRange('width', width, 'm', { ...positive, max: 1e5 });
+export function plungeDepthAkiyamaStefan1984(
+  discharge: number,
+  width: number,
+  gPrime: number,
+  plungeFroude = DEFAULT_PLUNGE_FROUDE,
+): Scalar {
+  const q =
+    requireInRange('discharge', discharge, 'm3/s', { ...positive, max: 1e5 }) /
+    requireInRange('width', width, 'm', { ...positive, max: 1e5 });
   const g = requireInRange('g_prime', gPrime, 'm/s2', { ...positive, max: 20 });
   const fp = requireInRange('plunge_froude', plungeFroude, '1', { ...positive, max: 5 });
   return scalar(PLUNGE_AKIYAMA_STEFAN_1984, Math.cbrt((q * q) / (g * fp * fp)), 'm', { plunge_froude: fp });
@@ -59,11 +71,17 @@ export interface MixedInflow {
  * @param discharge [m3/s] inflow; @param inflow property values (density [kg/m3], temperature [degC], …)
  * @param surface the same properties of the reservoir water at the plunge line; @param mixing Φ [1]
  */
-export function mixAtPlunge(discharge: number, inflow: Record<string, number>, surface: Record<string, number>, mixing = 0.1): MixedInflow {
+export function mixAtPlunge(
+  discharge: number,
+  inflow: Record<string, number>,
+  surface: Record<string, number>,
+  mixing = 0.1,
+): MixedInflow {
   const q = requireInRange('discharge', discharge, 'm3/s', { ...positive, max: 1e5 });
   const phi = requireInRange('initial_mixing', mixing, '1', { ...nonNegative, max: 5 });
   const values: Record<string, number> = {};
   for (const [k, v] of Object.entries(inflow)) values[k] = (v + phi * (surface[k] ?? v)) / (1 + phi);
-  const warnings = phi > 0.5 ? [`initial_mixing = ${phi} is above the reported range 0 … 0.5 of ${PLUNGE_INITIAL_MIXING.title}.`] : [];
+  const warnings =
+    phi > 0.5 ? [`initial_mixing = ${phi} is above the reported range 0 … 0.5 of ${PLUNGE_INITIAL_MIXING.title}.`] : [];
   return { discharge: q * (1 + phi), values, warnings };
 }

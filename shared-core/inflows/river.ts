@@ -40,18 +40,41 @@ export interface RiverInflowResult {
  * river entering a reservoir whose profile is measured. g′ uses the surface water density as reference.
  */
 export function riverInflowPath(p: Profile, r: RiverInflow): RiverInflowResult {
-  const rho = waterDensity({ temperature: r.temperature, salinity: r.salinity ?? 0, sediment: r.sediment ?? 0, eos: p.eos });
+  const rho = waterDensity({
+    temperature: r.temperature,
+    salinity: r.salinity ?? 0,
+    sediment: r.sediment ?? 0,
+    eos: p.eos,
+  });
   const rhoSurf = p.density[0];
-  const gPrime = requireInRange('g_prime', (GRAVITY * (rho.value - rhoSurf)) / rhoSurf, 'm/s2', { min: 0, minExclusive: true });
+  const gPrime = requireInRange('g_prime', (GRAVITY * (rho.value - rhoSurf)) / rhoSurf, 'm/s2', {
+    min: 0,
+    minExclusive: true,
+  });
   const plunge = plungeDepthAkiyamaStefan1984(r.discharge, r.width, gPrime, r.plungeFroude ?? DEFAULT_PLUNGE_FROUDE);
-  const mixed = mixAtPlunge(r.discharge, { density: rho.value, temperature: r.temperature }, { density: rhoSurf, temperature: p.temperature[0] }, r.initialMixing ?? 0.1);
+  const mixed = mixAtPlunge(
+    r.discharge,
+    { density: rho.value, temperature: r.temperature },
+    { density: rhoSurf, temperature: p.temperature[0] },
+    r.initialMixing ?? 0.1,
+  );
   const underflow = underflowEllisonTurner1959(p, {
-    discharge: mixed.discharge, width: r.width, density: mixed.values.density, temperature: mixed.values.temperature,
-    startDepth: Math.min(plunge.value, p.depth[p.depth.length - 1]), bedSlope: r.bedSlope, dragCoefficient: r.dragCoefficient, law: r.law, distanceToPoint: r.distanceToPoint,
+    discharge: mixed.discharge,
+    width: r.width,
+    density: mixed.values.density,
+    temperature: mixed.values.temperature,
+    startDepth: Math.min(plunge.value, p.depth[p.depth.length - 1]),
+    bedSlope: r.bedSlope,
+    dragCoefficient: r.dragCoefficient,
+    law: r.law,
+    distanceToPoint: r.distanceToPoint,
   });
   return {
-    inflowDensity: rho.value, gPrime, plungeDepth: plunge.value,
+    inflowDensity: rho.value,
+    gPrime,
+    plungeDepth: plunge.value,
     mixed: { discharge: mixed.discharge, density: mixed.values.density, temperature: mixed.values.temperature },
-    underflow, warnings: [...rho.warnings, ...plunge.warnings, ...mixed.warnings, ...underflow.warnings],
+    underflow,
+    warnings: [...rho.warnings, ...plunge.warnings, ...mixed.warnings, ...underflow.warnings],
   };
 }

@@ -101,12 +101,22 @@ export function underflowEllisonTurner1959(p: Profile, input: UnderflowInput): U
   const s = requireInRange('bed_slope', input.bedSlope, '1', { ...positive, max: 1 });
   const cd = requireInRange('drag_coefficient', input.dragCoefficient ?? DEFAULT_DRAG, '1', { ...positive, max: 1 });
   const law = input.law ?? 'parker1987';
-  const point = input.distanceToPoint === undefined ? undefined : requireInRange('distance_to_point', input.distanceToPoint, 'm', { ...positive, max: 1e7 });
+  const point =
+    input.distanceToPoint === undefined
+      ? undefined
+      : requireInRange('distance_to_point', input.distanceToPoint, 'm', { ...positive, max: 1e7 });
   const sin = s / Math.sqrt(1 + s * s);
-  const ri = normalRichardson(s, cd, law), e = entrainment(law, ri);
+  const ri = normalRichardson(s, cd, law),
+    e = entrainment(law, ri);
   const warnings: string[] = [];
-  if (s < 0.001 || s > 0.2) warnings.push(`bed_slope = ${s} is outside 0.001 … 0.2 of ${UNDERFLOW_NORMAL_STATE.title}; the result is an extrapolation.`);
-  if (e === 0) warnings.push('At this slope and drag the normal-state Richardson number exceeds 0.8: the current entrains nothing (Ellison & Turner 1959).');
+  if (s < 0.001 || s > 0.2)
+    warnings.push(
+      `bed_slope = ${s} is outside 0.001 … 0.2 of ${UNDERFLOW_NORMAL_STATE.title}; the result is an extrapolation.`,
+    );
+  if (e === 0)
+    warnings.push(
+      'At this slope and drag the normal-state Richardson number exceeds 0.8: the current entrains nothing (Ellison & Turner 1959).',
+    );
   const rhoA = (d: number) => interpolateAt(p.depth, p.density, d);
   const tA = (d: number) => interpolateAt(p.depth, p.temperature, d);
   const depthAt = (x: number) => d0 + x * sin;
@@ -115,30 +125,62 @@ export function underflowEllisonTurner1959(p: Profile, input: UnderflowInput): U
     return g > 0 ? Math.cbrt((g * (q / b) * sin) / (cd + e)) : 0;
   };
   if (rho0 <= rhoA(d0)) {
-    throw new InputError('density', rho0, 'kg/m3', `> ${rhoA(d0).toFixed(3)} kg/m3 (the ambient at the start depth)`, 'the current is not denser than the water where it starts: it does not flow down the bed');
+    throw new InputError(
+      'density',
+      rho0,
+      'kg/m3',
+      `> ${rhoA(d0).toFixed(3)} kg/m3 (the ambient at the start depth)`,
+      'the current is not denser than the water where it starts: it does not flow down the bed',
+    );
   }
   const xEnd = Math.min(point ?? Infinity, (bed - d0) / sin);
   // U → 0 as g′ → 0 at insertion; dt/dx = 1/U is floored at 1 % of the starting speed so the integrable end singularity
   // stays finite (it adds less than a few % of the last step's time)
   const uFloor = 0.01 * speed(q0, rho0, d0);
   const rhs = (_x: number, y: readonly number[]) => {
-    const [q, rho, temp] = y, d = depthAt(_x), u = speed(q, rho, d), w = e * u * b;
+    const [q, rho, temp] = y,
+      d = depthAt(_x),
+      u = speed(q, rho, d),
+      w = e * u * b;
     return [w, (w * (rhoA(d) - rho)) / q, (w * (tA(d) - temp)) / q, 1 / Math.max(u, uFloor)];
   };
   const sol = solveOde(rhs, 0, [q0, rho0, temp0, 0], xEnd, {
-    rtol: 1e-7, atol: 1e-9, maxSteps: 20000,
+    rtol: 1e-7,
+    atol: 1e-9,
+    maxSteps: 20000,
     events: [{ name: 'insertion', g: (x, y) => y[1] - rhoA(depthAt(x)), direction: 'falling', terminal: true }],
   });
-  const path: UnderflowPath = { distance: sol.t, depth: sol.t.map(depthAt), discharge: sol.y.map((y) => y[0]), density: sol.y.map((y) => y[1]), temperature: sol.y.map((y) => y[2]), time: sol.y.map((y) => y[3]) };
+  const path: UnderflowPath = {
+    distance: sol.t,
+    depth: sol.t.map(depthAt),
+    discharge: sol.y.map((y) => y[0]),
+    density: sol.y.map((y) => y[1]),
+    temperature: sol.y.map((y) => y[2]),
+    time: sol.y.map((y) => y[3]),
+  };
   const last = sol.t.length - 1;
   const inserted = sol.status === 'terminal-event';
   const reachedPoint = point !== undefined && sol.status === 'completed' && point <= (bed - d0) / sin;
-  if (inserted && point !== undefined) warnings.push(`The current leaves the bed at ${path.depth[last].toFixed(1)} m depth, ${sol.t[last].toFixed(0)} m from the start, before the point of interest; its travel beyond as an interflow is not estimated here.`);
-  if (!inserted && !reachedPoint && sol.status === 'completed') warnings.push(`The current reaches the deepest bed (${bed} m) still denser than the water there: it pools at the bottom.`);
-  if (sol.status === 'max-steps' || sol.status === 'step-failed') warnings.push(`The integration stopped early: ${sol.message}.`);
+  if (inserted && point !== undefined)
+    warnings.push(
+      `The current leaves the bed at ${path.depth[last].toFixed(1)} m depth, ${sol.t[last].toFixed(0)} m from the start, before the point of interest; its travel beyond as an interflow is not estimated here.`,
+    );
+  if (!inserted && !reachedPoint && sol.status === 'completed')
+    warnings.push(
+      `The current reaches the deepest bed (${bed} m) still denser than the water there: it pools at the bottom.`,
+    );
+  if (sol.status === 'max-steps' || sol.status === 'step-failed')
+    warnings.push(`The integration stopped early: ${sol.message}.`);
   return {
-    path, insertionDepth: inserted ? path.depth[last] : undefined, travelTimeToPoint: reachedPoint ? path.time[last] : undefined,
-    richardson: ri, entrainment: e, status: sol.status, message: sol.message,
-    events: sol.events.map((ev) => ({ name: ev.name, distance: ev.t })), evaluations: sol.evaluations, warnings,
+    path,
+    insertionDepth: inserted ? path.depth[last] : undefined,
+    travelTimeToPoint: reachedPoint ? path.time[last] : undefined,
+    richardson: ri,
+    entrainment: e,
+    status: sol.status,
+    message: sol.message,
+    events: sol.events.map((ev) => ({ name: ev.name, distance: ev.t })),
+    evaluations: sol.evaluations,
+    warnings,
   };
 }

@@ -13,7 +13,8 @@ export const INTERNAL_SEICHE_TWO_LAYER: MethodInfo = {
   source:
     'Mortimer, C.H. (1974). Lake hydrodynamics. Mitt. Int. Ver. Theor. Angew. Limnol. 20, 124–197 (internal Merian formula ' +
     'T = 2L/c_i); interfacial long-wave speed from Lamb (1932) §231 / Gill (1982) §6.2 (free surface, full density ratio).',
-  equation: 'T = 2L / c_i, c_i the interfacial root of c⁴ − g(h1 + h2)c² + (1 − ρ1/ρ2)g²h1h2 = 0 (≈ √(g′h1h2/(h1 + h2)))',
+  equation:
+    'T = 2L / c_i, c_i the interfacial root of c⁴ − g(h1 + h2)c² + (1 − ρ1/ρ2)g²h1h2 = 0 (≈ √(g′h1h2/(h1 + h2)))',
   validity: {},
 };
 
@@ -28,7 +29,10 @@ export function internalSeichePeriodTwoLayer(basinLength: number, state: TwoLaye
   const L = requireInRange('basin_length', basinLength, 'm', LENGTH);
   const c = twoLayerFreeSurfaceCelerities(state).interfacial;
   const H = state.upperThickness + state.lowerThickness;
-  const warnings = L < 10 * H ? [`The basin is only ${(L / H).toFixed(1)} depths long: the long-wave seiche formula needs L ≫ H.`] : [];
+  const warnings =
+    L < 10 * H
+      ? [`The basin is only ${(L / H).toFixed(1)} depths long: the long-wave seiche formula needs L ≫ H.`]
+      : [];
   return scalar(INTERNAL_SEICHE_TWO_LAYER, (2 * L) / c, 's', {}, warnings);
 }
 
@@ -95,10 +99,20 @@ export interface WindStress {
 export function windStressLargePond1981(windSpeed: number, rhoWater = 1000, dragCoefficient?: number): WindStress {
   const U = requireInRange('wind_speed', windSpeed, 'm/s', { min: 0, max: 60 });
   const rw = requireInRange('rho_water', rhoWater, 'kg/m3', { min: 900, max: 1300 });
-  const cd = dragCoefficient === undefined ? dragCoefficientLargePond1981(U) : requireInRange('drag_coefficient', dragCoefficient, '1', { ...positive, max: 0.01 });
+  const cd =
+    dragCoefficient === undefined
+      ? dragCoefficientLargePond1981(U)
+      : requireInRange('drag_coefficient', dragCoefficient, '1', { ...positive, max: 0.01 });
   const stress = AIR_DENSITY * cd * U * U;
-  const warnings = dragCoefficient === undefined ? validityWarnings(WIND_STRESS_LARGE_POND_1981, { wind_speed: U }) : [];
-  return { stress, shearVelocity: Math.sqrt(stress / rw), dragCoefficient: cd, method: WIND_STRESS_LARGE_POND_1981.id, warnings };
+  const warnings =
+    dragCoefficient === undefined ? validityWarnings(WIND_STRESS_LARGE_POND_1981, { wind_speed: U }) : [];
+  return {
+    stress,
+    shearVelocity: Math.sqrt(stress / rw),
+    dragCoefficient: cd,
+    method: WIND_STRESS_LARGE_POND_1981.id,
+    warnings,
+  };
 }
 
 export const WEDDERBURN_NUMBER: MethodInfo = {
@@ -119,7 +133,12 @@ export const WEDDERBURN_NUMBER: MethodInfo = {
  * @source Thompson & Imberger (1980); Imberger & Patterson (1990)
  * @validity two-layer idealisation, steady wind over a time of order a quarter seiche period
  */
-export function wedderburnNumber(gPrime: number, upperThickness: number, shearVelocity: number, basinLength: number): Scalar {
+export function wedderburnNumber(
+  gPrime: number,
+  upperThickness: number,
+  shearVelocity: number,
+  basinLength: number,
+): Scalar {
   const g = requireInRange('g_prime', gPrime, 'm/s2', { ...positive, max: 20 });
   const h = requireInRange('upper_thickness', upperThickness, 'm', { ...positive, max: 11000 });
   const u = requireInRange('shear_velocity', shearVelocity, 'm/s', { ...positive, max: 1 });
@@ -137,8 +156,10 @@ export function upwellingRiskStatement(wedderburn: number, upperThickness: numbe
   const W = requireInRange('wedderburn', wedderburn, '1', positive);
   const lift = Math.min(upperThickness, upperThickness / W);
   const liftText = `${lift.toPrecision(2)} m`;
-  if (W < 1) return `High upwelling risk (W = ${W.toPrecision(2)} < 1): a steady wind of this strength can tilt the thermocline up to the surface at the upwind shore, bringing cold, possibly low-oxygen lower-layer water to shallow intakes there; the downwind end deepens.`;
-  if (W < 10) return `Moderate risk (W = ${W.toPrecision(2)}): the thermocline tilts strongly; near the upwind shore it may rise by up to about ${liftText}, so lower-layer water can reach intakes close above the thermocline, but it is not expected at the surface.`;
+  if (W < 1)
+    return `High upwelling risk (W = ${W.toPrecision(2)} < 1): a steady wind of this strength can tilt the thermocline up to the surface at the upwind shore, bringing cold, possibly low-oxygen lower-layer water to shallow intakes there; the downwind end deepens.`;
+  if (W < 10)
+    return `Moderate risk (W = ${W.toPrecision(2)}): the thermocline tilts strongly; near the upwind shore it may rise by up to about ${liftText}, so lower-layer water can reach intakes close above the thermocline, but it is not expected at the surface.`;
   return `Low risk (W = ${W.toPrecision(2)} ≥ 10): the thermocline tilts only slightly (about ${liftText} or less at the upwind shore); wind mixing stays in the upper layer.`;
 }
 
@@ -181,37 +202,78 @@ export interface LakeNumberResult {
  * @validity L_N < 1: strong wind-driven tilting and upwelling of hypolimnetic water; L_N ≫ 1: stable
  */
 export function lakeNumberImbergerPatterson1990(
-  densityColumn: { depth: readonly number[]; density: readonly number[] }, hypsography: Hypsography,
-  shearVelocity: number, thermoclineDepth: number, rho0?: number, cells = 2000,
+  densityColumn: { depth: readonly number[]; density: readonly number[] },
+  hypsography: Hypsography,
+  shearVelocity: number,
+  thermoclineDepth: number,
+  rho0?: number,
+  cells = 2000,
 ): LakeNumberResult {
   const u = requireInRange('shear_velocity', shearVelocity, 'm/s', { ...positive, max: 1 });
   const { depth: hd, area } = hypsography;
-  if (hd.length < 2 || hd.length !== area.length) throw new InputError('hypsography', hd.length, '', '≥ 2 depth–area pairs', 'the hypsographic curve needs at least two depth–area pairs of equal length');
-  hd.forEach((d, i) => { requireInRange(`hypsography depth[${i}]`, d, 'm', { min: i === 0 ? 0 : hd[i - 1], minExclusive: i > 0, max: i === 0 ? 0 : 11000 }); requireInRange(`hypsography area[${i}]`, area[i], 'm2', { min: 0, max: 1e12 }); });
-  if (!(area[0] > 0)) throw new InputError('hypsography area[0]', area[0], 'm2', '> 0', 'the surface area must be positive');
+  if (hd.length < 2 || hd.length !== area.length)
+    throw new InputError(
+      'hypsography',
+      hd.length,
+      '',
+      '≥ 2 depth–area pairs',
+      'the hypsographic curve needs at least two depth–area pairs of equal length',
+    );
+  hd.forEach((d, i) => {
+    requireInRange(`hypsography depth[${i}]`, d, 'm', {
+      min: i === 0 ? 0 : hd[i - 1],
+      minExclusive: i > 0,
+      max: i === 0 ? 0 : 11000,
+    });
+    requireInRange(`hypsography area[${i}]`, area[i], 'm2', { min: 0, max: 1e12 });
+  });
+  if (!(area[0] > 0))
+    throw new InputError('hypsography area[0]', area[0], 'm2', '> 0', 'the surface area must be positive');
   const zm = hd[hd.length - 1];
-  const zT = zm - requireInRange('thermocline_depth', thermoclineDepth, 'm', { min: 0, max: zm, minExclusive: true, maxExclusive: true });
-  if (densityColumn.depth.length < 2 || densityColumn.depth.length !== densityColumn.density.length) throw new InputError('density', densityColumn.density.length, '', 'one density per depth');
+  const zT =
+    zm -
+    requireInRange('thermocline_depth', thermoclineDepth, 'm', {
+      min: 0,
+      max: zm,
+      minExclusive: true,
+      maxExclusive: true,
+    });
+  if (densityColumn.depth.length < 2 || densityColumn.depth.length !== densityColumn.density.length)
+    throw new InputError('density', densityColumn.density.length, '', 'one density per depth');
   densityColumn.density.forEach((r, i) => requireInRange(`density[${i}]`, r, 'kg/m3', { min: 500, max: 3000 }));
   const dz = zm / cells;
-  let vol = 0, mom = 0;
-  const zs: number[] = [], as: number[] = [], rs: number[] = [];
+  let vol = 0,
+    mom = 0;
+  const zs: number[] = [],
+    as: number[] = [],
+    rs: number[] = [];
   for (let j = 0; j <= cells; j++) {
     const z = j * dz; // height above the bottom
-    zs.push(z); as.push(interpolateAt(hd, area, zm - z)); rs.push(interpolateAt(densityColumn.depth, densityColumn.density, zm - z));
+    zs.push(z);
+    as.push(interpolateAt(hd, area, zm - z));
+    rs.push(interpolateAt(densityColumn.depth, densityColumn.density, zm - z));
     const w = j === 0 || j === cells ? dz / 2 : dz;
-    vol += w * as[j]; mom += w * as[j] * z;
+    vol += w * as[j];
+    mom += w * as[j] * z;
   }
   const zg = mom / vol;
-  let st = 0, hypo = 0, hypoVol = 0;
+  let st = 0,
+    hypo = 0,
+    hypoVol = 0;
   for (let j = 0; j <= cells; j++) {
     const w = j === 0 || j === cells ? dz / 2 : dz;
     st += w * (zg - zs[j]) * as[j] * rs[j];
-    if (zs[j] <= zT) { hypo += w * as[j] * rs[j]; hypoVol += w * as[j]; }
+    if (zs[j] <= zT) {
+      hypo += w * as[j] * rs[j];
+      hypoVol += w * as[j];
+    }
   }
   const r0 = rho0 === undefined ? hypo / hypoVol : requireInRange('rho0', rho0, 'kg/m3', { min: 500, max: 3000 });
   const A0 = area[0];
   const value = (GRAVITY * st * (1 - zT / zm)) / (r0 * u * u * Math.pow(A0, 1.5) * (1 - zg / zm));
-  const warnings = st <= 0 ? ['The Schmidt stability is not positive: the column is mixed or unstable, and the Lake number has no meaning.'] : [];
+  const warnings =
+    st <= 0
+      ? ['The Schmidt stability is not positive: the column is mixed or unstable, and the Lake number has no meaning.']
+      : [];
   return { value, schmidtStability: (GRAVITY * st) / A0, centreOfVolumeHeight: zg, method: LAKE_NUMBER.id, warnings };
 }

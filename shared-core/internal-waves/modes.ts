@@ -73,31 +73,48 @@ export function verticalModesFromN2(column: N2Column, bottom: number, options: M
   const wanted = requireInRange('modes', options.modes ?? 3, '1', { min: 1, max: 50 });
   const cells = Math.round(requireInRange('cells', options.cells ?? 800, '1', { min: 4 * wanted + 8, max: 200000 }));
   const surface = options.surface ?? 'rigid-lid';
-  if (column.depth.length === 0 || column.depth.length !== column.n2.length) throw new InputError('n2', column.n2.length, '', 'one N² per depth', 'the N² column needs as many values as depths');
+  if (column.depth.length === 0 || column.depth.length !== column.n2.length)
+    throw new InputError(
+      'n2',
+      column.n2.length,
+      '',
+      'one N² per depth',
+      'the N² column needs as many values as depths',
+    );
   column.n2.forEach((v, i) => requireInRange(`n2[${i}]`, v, '1/s2', { min: -1, max: 1 }));
   const dz = H / cells;
   const depth = Array.from({ length: cells + 1 }, (_, j) => j * dz);
   const warnings: string[] = [];
   const raw = depth.map((d) => interpolateAt(column.depth, column.n2, d));
-  if (raw.some((v) => v < 0)) warnings.push('N² is negative somewhere (a density inversion); those levels are treated as neutral (N² = 0).');
+  if (raw.some((v) => v < 0))
+    warnings.push('N² is negative somewhere (a density inversion); those levels are treated as neutral (N² = 0).');
   const n2 = raw.map((v) => Math.max(0, v));
   const first = surface === 'free-surface' ? 0 : 1; // rigid lid: w(0) = 0 removes the surface node
   const nodes = cells - first; // bottom node (w = 0) excluded
   const pencil: TridiagonalPencil = {
     diag: Array.from({ length: nodes }, (_, i) => (first + i === 0 ? 1 : 2) / dz),
     off: new Array<number>(nodes - 1).fill(-1 / dz),
-    weight: Array.from({ length: nodes }, (_, i) => (first + i === 0 ? n2[0] * dz / 2 + GRAVITY : n2[first + i] * dz)),
+    weight: Array.from({ length: nodes }, (_, i) =>
+      first + i === 0 ? (n2[0] * dz) / 2 + GRAVITY : n2[first + i] * dz,
+    ),
   };
   const positiveWeights = pencil.weight!.filter((w) => w > 0).length;
   const extra = surface === 'free-surface' ? 1 : 0;
   if (positiveWeights < wanted + extra) {
-    throw new InputError('n2', Math.max(...n2), '1/s2', 'a stable stratification (N² > 0 over part of the column)', `the column has too little stratification for ${wanted} internal modes`);
+    throw new InputError(
+      'n2',
+      Math.max(...n2),
+      '1/s2',
+      'a stable stratification (N² > 0 over part of the column)',
+      `the column has too little stratification for ${wanted} internal modes`,
+    );
   }
   const pairs = lowestEigenpairs(pencil, wanted + extra);
   const toShape = (v: number[]) => {
     const w = depth.map((_, j) => (j < first || j === cells ? 0 : v[j - first]));
     const u = depth.map((_, j) => {
-      const up = Math.max(j - 1, 0), down = Math.min(j + 1, cells);
+      const up = Math.max(j - 1, 0),
+        down = Math.min(j + 1, cells);
       return (w[down] - w[up]) / ((down - up) * dz);
     });
     return { w: scaleToUnit(w), u: scaleToUnit(u) };
@@ -126,8 +143,10 @@ export function verticalModesFromProfile(p: Profile, options: ModeOptions = {}):
   const dz = H / cells;
   const depth = Array.from({ length: cells + 1 }, (_, j) => j * dz);
   const n2 = depth.map((d) => {
-    const a = Math.max(0, d - dz / 2), b = Math.min(H, d + dz / 2);
-    const ra = interpolateAt(p.depth, p.density, a), rb = interpolateAt(p.depth, p.density, b);
+    const a = Math.max(0, d - dz / 2),
+      b = Math.min(H, d + dz / 2);
+    const ra = interpolateAt(p.depth, p.density, a),
+      rb = interpolateAt(p.depth, p.density, b);
     return (GRAVITY * (rb - ra)) / (((ra + rb) / 2) * (b - a));
   });
   const out = verticalModesFromN2({ depth, n2 }, H, { ...options, cells });

@@ -22,7 +22,8 @@ export function checkTwoLayer(s: TwoLayer): TwoLayer {
   const r1 = requireInRange('rho_upper', s.rhoUpper, 'kg/m3', DENSITY);
   const r2 = requireInRange('rho_lower', s.rhoLower, 'kg/m3', { min: r1, minExclusive: true, max: DENSITY.max });
   return {
-    rhoUpper: r1, rhoLower: r2,
+    rhoUpper: r1,
+    rhoLower: r2,
     upperThickness: requireInRange('upper_thickness', s.upperThickness, 'm', THICKNESS),
     lowerThickness: requireInRange('lower_thickness', s.lowerThickness, 'm', THICKNESS),
   };
@@ -31,7 +32,9 @@ export function checkTwoLayer(s: TwoLayer): TwoLayer {
 /** Warning when Δρ/ρ2 is large enough that Boussinesq forms lose accuracy. */
 function boussinesqWarnings(s: TwoLayer): string[] {
   const r = (s.rhoLower - s.rhoUpper) / s.rhoLower;
-  return r > 0.1 ? [`Δρ/ρ = ${r.toFixed(3)} exceeds 0.1: use the full density-ratio forms, not the Boussinesq one.`] : [];
+  return r > 0.1
+    ? [`Δρ/ρ = ${r.toFixed(3)} exceeds 0.1: use the full density-ratio forms, not the Boussinesq one.`]
+    : [];
 }
 
 export const INTERFACIAL_CELERITY_BOUSSINESQ: MethodInfo = {
@@ -90,9 +93,11 @@ export function interfacialCelerityRigidLid(state: TwoLayer, wavelength?: number
   const s = checkTwoLayer(state);
   const k = wavenumber(wavelength);
   const dr = s.rhoLower - s.rhoUpper;
-  const c2 = k === 0
-    ? (GRAVITY * dr * s.upperThickness * s.lowerThickness) / (s.rhoUpper * s.lowerThickness + s.rhoLower * s.upperThickness)
-    : (GRAVITY * dr) / (k * (s.rhoUpper * coth(k * s.upperThickness) + s.rhoLower * coth(k * s.lowerThickness)));
+  const c2 =
+    k === 0
+      ? (GRAVITY * dr * s.upperThickness * s.lowerThickness) /
+        (s.rhoUpper * s.lowerThickness + s.rhoLower * s.upperThickness)
+      : (GRAVITY * dr) / (k * (s.rhoUpper * coth(k * s.upperThickness) + s.rhoLower * coth(k * s.lowerThickness)));
   return scalar(INTERFACIAL_DISPERSION_RIGID_LID, Math.sqrt(c2), 'm/s', {});
 }
 
@@ -102,7 +107,8 @@ export const INTERFACIAL_DISPERSION_FREE_SURFACE: MethodInfo = {
   source:
     'Lamb, H. (1932). Hydrodynamics, 6th ed. Cambridge Univ. Press, §231: ω⁴(ρ2 coth kh1 coth kh2 + ρ1) − ω²ρ2gk(coth kh1 + coth kh2) ' +
     '+ (ρ2 − ρ1)g²k² = 0; long-wave limit c⁴ − g(h1 + h2)c² + (1 − ρ1/ρ2)g²h1h2 = 0 (Gill 1982, §6.2).',
-  equation: 'ω² = [B ∓ √(B² − 4AC)]/(2A), A = ρ2 coth kh1 coth kh2 + ρ1, B = ρ2gk(coth kh1 + coth kh2), C = (ρ2 − ρ1)g²k²; c = ω/k',
+  equation:
+    'ω² = [B ∓ √(B² − 4AC)]/(2A), A = ρ2 coth kh1 coth kh2 + ρ1, B = ρ2gk(coth kh1 + coth kh2), C = (ρ2 − ρ1)g²k²; c = ω/k',
   validity: {},
 };
 
@@ -131,10 +137,15 @@ export function twoLayerFreeSurfaceCelerities(state: TwoLayer, wavelength?: numb
   // In c² = ω²/k²: A c⁴ − (B/k) c² + C/k² = 0 with coth kh ≈ 1/(kh) folded in for k → 0 (all terms × k²).
   let A: number, B: number, C: number;
   if (k === 0 || k * Math.max(h1, h2) < 1e-6) {
-    A = r2 / (h1 * h2); B = r2 * GRAVITY * (h1 + h2) / (h1 * h2); C = (r2 - r1) * GRAVITY * GRAVITY;
+    A = r2 / (h1 * h2);
+    B = (r2 * GRAVITY * (h1 + h2)) / (h1 * h2);
+    C = (r2 - r1) * GRAVITY * GRAVITY;
   } else {
-    const c1 = coth(k * h1), c2 = coth(k * h2);
-    A = k * k * (r2 * c1 * c2 + r1); B = r2 * GRAVITY * k * (c1 + c2); C = (r2 - r1) * GRAVITY * GRAVITY;
+    const c1 = coth(k * h1),
+      c2 = coth(k * h2);
+    A = k * k * (r2 * c1 * c2 + r1);
+    B = r2 * GRAVITY * k * (c1 + c2);
+    C = (r2 - r1) * GRAVITY * GRAVITY;
   }
   const root = Math.sqrt(Math.max(0, B * B - 4 * A * C));
   return {
@@ -173,7 +184,13 @@ export function dispersionCurve(state: TwoLayer, points = 60, kMin?: number, kMa
     const k = lo * Math.pow(hi / lo, i / (n - 1));
     const wavelength = (2 * Math.PI) / k;
     const fs = twoLayerFreeSurfaceCelerities(s, wavelength);
-    return { k, wavelength, rigidLid: interfacialCelerityRigidLid(s, wavelength).value, interfacial: fs.interfacial, surface: fs.surface };
+    return {
+      k,
+      wavelength,
+      rigidLid: interfacialCelerityRigidLid(s, wavelength).value,
+      interfacial: fs.interfacial,
+      surface: fs.surface,
+    };
   });
 }
 
@@ -185,9 +202,14 @@ export const SOLITARY_WAVE_KDV: MethodInfo = {
     '(KdV, two-layer α = 3c0(h1 − h2)/(2h1h2), c = c0 + αa/3; polarity of a follows the sign of α); limiting amplitude: ' +
     'the conjugate state with the interface at mid-depth, |a| ≤ |h2 − h1|/2 (Boussinesq; Amick, C.J., Turner, R.E.L. (1986). ' +
     'Trans. Amer. Math. Soc. 298, 431–484; Lamb, K.G., Wan, B. (1998). Phys. Fluids 10, 2061–2079).',
-  equation: 'c = c0 (1 + |a| |h2 − h1| / (2 h1 h2)); depression when h1 < h2, elevation when h1 > h2; |a| ≤ |h2 − h1|/2',
+  equation:
+    'c = c0 (1 + |a| |h2 − h1| / (2 h1 h2)); depression when h1 < h2, elevation when h1 > h2; |a| ≤ |h2 − h1|/2',
   validity: {
-    relative_amplitude: { max: 0.5, unit: '1', note: '|a|/a_max; first-order KdV overestimates the speed of large waves' },
+    relative_amplitude: {
+      max: 0.5,
+      unit: '1',
+      note: '|a|/a_max; first-order KdV overestimates the speed of large waves',
+    },
   },
 };
 
@@ -226,13 +248,30 @@ export function solitaryWaveKdv(state: TwoLayer, amplitude: number): SolitaryWav
   const equal = Math.abs(h1 - h2) <= 1e-9 * (h1 + h2);
   const polarity: Polarity = equal ? 'none' : h1 < h2 ? 'depression' : 'elevation';
   const warnings = boussinesqWarnings(s);
-  if (equal && a > 0) warnings.push('The layers are equally thick: the quadratic nonlinearity vanishes and the first-order correction is zero; a higher-order (Gardner) theory is needed.');
-  else if (a > limit) warnings.push(`The amplitude ${a.toPrecision(3)} m exceeds the limiting amplitude |h2 − h1|/2 = ${limit.toPrecision(3)} m: no solitary wave of this size exists; expect a broad, flat-crested wave or a bore.`);
-  else if (a > 0.5 * limit) warnings.push(`The amplitude is more than half the limiting amplitude (${limit.toPrecision(3)} m): first-order KdV overestimates the speed of such large waves.`);
+  if (equal && a > 0)
+    warnings.push(
+      'The layers are equally thick: the quadratic nonlinearity vanishes and the first-order correction is zero; a higher-order (Gardner) theory is needed.',
+    );
+  else if (a > limit)
+    warnings.push(
+      `The amplitude ${a.toPrecision(3)} m exceeds the limiting amplitude |h2 − h1|/2 = ${limit.toPrecision(3)} m: no solitary wave of this size exists; expect a broad, flat-crested wave or a bore.`,
+    );
+  else if (a > 0.5 * limit)
+    warnings.push(
+      `The amplitude is more than half the limiting amplitude (${limit.toPrecision(3)} m): first-order KdV overestimates the speed of such large waves.`,
+    );
   const celerity = c0 + (Math.abs(alpha) * a) / 3;
   const beta = (c0 * h1 * h2) / 6;
   const halfWidth = a > 0 && !equal ? Math.sqrt((12 * beta) / (Math.abs(alpha) * a)) : Infinity;
-  return { celerity, linearCelerity: c0, polarity, limitingAmplitude: limit, halfWidth, method: SOLITARY_WAVE_KDV.id, warnings };
+  return {
+    celerity,
+    linearCelerity: c0,
+    polarity,
+    limitingAmplitude: limit,
+    halfWidth,
+    method: SOLITARY_WAVE_KDV.id,
+    warnings,
+  };
 }
 
 /** Plain-language polarity statement for reports and the CLI. */

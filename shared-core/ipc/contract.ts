@@ -15,30 +15,53 @@ export const CHANNELS = {
    * native open dialog; null when cancelled. The browser shell has no dialog: there `name` picks a file of
    * its workspace folder (as listed by 'site.recent'), and a request without `name` answers null.
    */
-  'site.open': { request: z.object({ name: z.string().min(1).max(255).optional() }).strict(), response: z.object({ path: filePath, text: siteText }).nullable() },
+  'site.open': {
+    request: z.object({ name: z.string().min(1).max(255).optional() }).strict(),
+    response: z.object({ path: filePath, text: siteText }).nullable(),
+  },
   /** read a known path (recent files, reopen) */
-  'site.read': { request: z.object({ path: filePath }).strict(), response: z.object({ path: filePath, text: siteText }) },
+  'site.read': {
+    request: z.object({ path: filePath }).strict(),
+    response: z.object({ path: filePath, text: siteText }),
+  },
   /** atomic save to a known path (temporary file, flush, rename) */
-  'site.save': { request: z.object({ path: filePath, text: siteText }).strict(), response: z.object({ path: filePath }) },
+  'site.save': {
+    request: z.object({ path: filePath, text: siteText }).strict(),
+    response: z.object({ path: filePath }),
+  },
   /** native save dialog then atomic save; null when cancelled */
-  'site.saveAs': { request: z.object({ text: siteText, suggestedName: z.string().max(255) }).strict(), response: z.object({ path: filePath }).nullable() },
+  'site.saveAs': {
+    request: z.object({ text: siteText, suggestedName: z.string().max(255) }).strict(),
+    response: z.object({ path: filePath }).nullable(),
+  },
   'site.recent': { request: empty, response: z.object({ paths: z.array(filePath) }) },
   /** autosave of the unsaved document to the recovery file */
   'recovery.write': { request: z.object({ text: siteText, path: filePath.nullable() }).strict(), response: empty },
   /** the recovery file left by a session that did not end cleanly, or null */
-  'recovery.check': { request: empty, response: z.object({ text: siteText, path: filePath.nullable(), savedAt: z.string() }).nullable() },
+  'recovery.check': {
+    request: empty,
+    response: z.object({ text: siteText, path: filePath.nullable(), savedAt: z.string() }).nullable(),
+  },
   'recovery.clear': { request: empty, response: empty },
   /** writes the report of a site (text of the site document) into a folder; returns the files written */
   'report.export': {
-    request: z.object({
-      text: siteText, formats: z.array(exportFormat).min(1), units: z.enum(['si', 'us']), outDir: filePath.nullable(),
-      /** the site's file, when it has one (named in the report) */
-      path: filePath.nullable().optional(),
-    }).strict(),
+    request: z
+      .object({
+        text: siteText,
+        formats: z.array(exportFormat).min(1),
+        units: z.enum(['si', 'us']),
+        outDir: filePath.nullable(),
+        /** the site's file, when it has one (named in the report) */
+        path: filePath.nullable().optional(),
+      })
+      .strict(),
     response: z.object({ outDir: filePath, files: z.array(z.string()) }).nullable(),
   },
   /** copies a PNG (base64) to the system clipboard */
-  'clipboard.writeImage': { request: z.object({ pngBase64: z.string().min(1).max(100_000_000) }).strict(), response: empty },
+  'clipboard.writeImage': {
+    request: z.object({ pngBase64: z.string().min(1).max(100_000_000) }).strict(),
+    response: empty,
+  },
   'app.info': { request: empty, response: z.object({ version: z.string(), shell: z.enum(['electron', 'browser']) }) },
 } as const;
 
@@ -66,5 +89,8 @@ export function parseRequest<C extends Channel>(channel: C, payload: unknown): R
   const r = spec.request.safeParse(payload ?? {});
   if (r.success) return { ok: true, value: r.data as RequestOf<C> };
   const i = r.error.issues[0];
-  return { ok: false, error: { code: 'invalid-request', message: `${channel}: ${i.path.join('.') || '(request)'}: ${i.message}` } };
+  return {
+    ok: false,
+    error: { code: 'invalid-request', message: `${channel}: ${i.path.join('.') || '(request)'}: ${i.message}` },
+  };
 }

@@ -36,7 +36,9 @@ export interface JetPath {
   /** distance along the centreline [m] */
   s: number[];
   /** horizontal position: x along the current, y across it [m]; z height above the port [m] */
-  x: number[]; y: number[]; z: number[];
+  x: number[];
+  y: number[];
+  z: number[];
   /** depth below the surface [m] */
   depth: number[];
   /** horizontal distance from the port √(x²+y²) [m] */
@@ -67,14 +69,30 @@ export const JET_PATH_COLUMNS: Record<keyof JetPath, { label: string; unit: stri
 };
 
 export type JetEventKind =
-  | 'surface contact' | 'bed contact' | 'return to port level' | 'maximum rise' | 'lowest point' | 'neutral buoyancy'
-  | 'plumes merge' | 'edge reaches surface' | 'edge reaches bed' | 'momentum spent' | 'end of near field';
+  | 'surface contact'
+  | 'bed contact'
+  | 'return to port level'
+  | 'maximum rise'
+  | 'lowest point'
+  | 'neutral buoyancy'
+  | 'plumes merge'
+  | 'edge reaches surface'
+  | 'edge reaches bed'
+  | 'momentum spent'
+  | 'end of near field';
 
 /** One event on the path, with the state there. */
 export interface JetEvent {
   kind: JetEventKind;
-  s: number; x: number; y: number; z: number; depth: number; horizontalDistance: number;
-  radius: number; dilutionCentreline: number; dilutionAverage: number;
+  s: number;
+  x: number;
+  y: number;
+  z: number;
+  depth: number;
+  horizontalDistance: number;
+  radius: number;
+  dilutionCentreline: number;
+  dilutionAverage: number;
 }
 
 export interface JetTrajectory {
@@ -103,7 +121,11 @@ export interface JetTrajectory {
  */
 export function buoyantJetTrajectory(input: BuoyantJetInput): JetTrajectory {
   const run = prepareJetRun(input);
-  return assembleTrajectory(run, [traceStretch(run, { geometry: 'round', start: run.start, sStart: 0 })], input.ambient);
+  return assembleTrajectory(
+    run,
+    [traceStretch(run, { geometry: 'round', start: run.start, sStart: 0 })],
+    input.ambient,
+  );
 }
 
 /**
@@ -114,32 +136,80 @@ export function buoyantJetTrajectory(input: BuoyantJetInput): JetTrajectory {
 export function assembleTrajectory(run: JetRun, stretches: readonly Stretch[], ambient: AmbientWater): JetTrajectory {
   const { H, tE, tRef, amb } = run;
   const pointAt = (st: Stretch, state: JetState, s: number) => {
-    const L = localJet(state, st.ctx), Sa = state.Q / st.qRef;
-    return { s, x: state.x, y: state.y, z: state.z, depth: H - state.z, horizontalDistance: Math.hypot(state.x, state.y), radius: L.b, dilutionCentreline: Math.max(1, Sa * CENTRELINE_TO_AVERAGE), dilutionAverage: Sa, L, state };
+    const L = localJet(state, st.ctx),
+      Sa = state.Q / st.qRef;
+    return {
+      s,
+      x: state.x,
+      y: state.y,
+      z: state.z,
+      depth: H - state.z,
+      horizontalDistance: Math.hypot(state.x, state.y),
+      radius: L.b,
+      dilutionCentreline: Math.max(1, Sa * CENTRELINE_TO_AVERAGE),
+      dilutionAverage: Sa,
+      L,
+      state,
+    };
   };
   const pts = stretches.flatMap((st, k) => st.states.map((v, i) => pointAt(st, v, st.s[i])).slice(k > 0 ? 1 : 0));
   const path: JetPath = {
-    s: pts.map((p) => p.s), x: pts.map((p) => p.x), y: pts.map((p) => p.y), z: pts.map((p) => p.z), depth: pts.map((p) => p.depth),
-    horizontalDistance: pts.map((p) => p.horizontalDistance), radius: pts.map((p) => p.radius),
-    dilutionCentreline: pts.map((p) => p.dilutionCentreline), dilutionAverage: pts.map((p) => p.dilutionAverage),
+    s: pts.map((p) => p.s),
+    x: pts.map((p) => p.x),
+    y: pts.map((p) => p.y),
+    z: pts.map((p) => p.z),
+    depth: pts.map((p) => p.depth),
+    horizontalDistance: pts.map((p) => p.horizontalDistance),
+    radius: pts.map((p) => p.radius),
+    dilutionCentreline: pts.map((p) => p.dilutionCentreline),
+    dilutionAverage: pts.map((p) => p.dilutionAverage),
     densityExcess: pts.map((p) => p.L.densityExcess),
-    ...(tE !== undefined && amb.temperature ? { temperatureExcess: pts.map((p) => tRef + p.state.Th / p.state.Q - amb.temperature!(p.depth)) } : {}),
+    ...(tE !== undefined && amb.temperature
+      ? { temperatureExcess: pts.map((p) => tRef + p.state.Th / p.state.Q - amb.temperature!(p.depth)) }
+      : {}),
   };
-  const events: JetEvent[] = stretches.flatMap((st) => st.fired.map((e) => {
-    const { L: _l, state: _s, ...p } = pointAt(st, e.state, e.s);
-    return { kind: e.name as JetEventKind, ...p };
-  }));
+  const events: JetEvent[] = stretches.flatMap((st) =>
+    st.fired.map((e) => {
+      const { L: _l, state: _s, ...p } = pointAt(st, e.state, e.s);
+      return { kind: e.name as JetEventKind, ...p };
+    }),
+  );
   const last = stretches[stretches.length - 1];
-  const status = last.status, message = last.message;
+  const status = last.status,
+    message = last.message;
   if (status === 'terminal-event') events.push({ ...events[events.length - 1], kind: 'end of near field' });
   const maxRise = Math.max(...path.z);
   const outcome = describeOutcome(events, status, maxRise, path, run.bed === undefined ? undefined : run.bed - H);
-  const warnings = [...amb.warnings, ...run.scales.warnings, ...pathWarnings({
-    events, status, message, scales: run.scales, angleDeg: run.angleDeg, dense: run.rhoE > run.rhoRef, current: amb.current(H), velocity: run.U,
-    profileBottom: profileBottom(ambient), portDepth: H, merged: stretches.some((st) => st.geometry === 'plane'),
-  })];
+  const warnings = [
+    ...amb.warnings,
+    ...run.scales.warnings,
+    ...pathWarnings({
+      events,
+      status,
+      message,
+      scales: run.scales,
+      angleDeg: run.angleDeg,
+      dense: run.rhoE > run.rhoRef,
+      current: amb.current(H),
+      velocity: run.U,
+      profileBottom: profileBottom(ambient),
+      portDepth: H,
+      merged: stretches.some((st) => st.geometry === 'plane'),
+    }),
+  ];
   const evaluations = stretches.reduce((n, st) => n + st.evaluations, 0);
-  return { status, message, evaluations, path, events, outcome: outcome.kind, outcomeText: outcome.text, maxRise, scales: run.scales, warnings };
+  return {
+    status,
+    message,
+    evaluations,
+    path,
+    events,
+    outcome: outcome.kind,
+    outcomeText: outcome.text,
+    maxRise,
+    scales: run.scales,
+    warnings,
+  };
 }
 
 function profileBottom(a: AmbientWater): number | undefined {

@@ -4,7 +4,13 @@ import { InputError } from '../core/errors';
 import { positive, nonNegative } from '../core/range';
 import { JET_LENGTH_SCALES, jetLengthScales } from './length-scales';
 import { BUOYANT_JET } from './closure';
-import { buoyantJetTrajectory, JET_PATH_COLUMNS, type BuoyantJetInput, type JetPath, type JetTrajectory } from './buoyant-jet';
+import {
+  buoyantJetTrajectory,
+  JET_PATH_COLUMNS,
+  type BuoyantJetInput,
+  type JetPath,
+  type JetTrajectory,
+} from './buoyant-jet';
 import { LINE_PLUME_RSB1989, linePlumeRobertsSnyderBaumgartner1989 } from './line-plume';
 import { DIFFUSER_PLUME, diffuserPlume, type DiffuserInput } from './diffuser';
 import { REQUIRED_DILUTION, requiredDilution } from '../mixing-zone/required-dilution';
@@ -24,22 +30,40 @@ export function buoyantJetInputFromArgs(a: CalcArgs): BuoyantJetInput {
   const profile = arg.profile(a);
   const rhoA = arg.optNum(a, 'ambient_density');
   if ((profile === undefined) === (rhoA === undefined)) {
-    throw new InputError(profile ? 'ambient_density' : 'file', '(missing)', '', 'exactly one of ambient_density and file', 'give either a uniform ambient_density or a profile file, not both and not neither');
+    throw new InputError(
+      profile ? 'ambient_density' : 'file',
+      '(missing)',
+      '',
+      'exactly one of ambient_density and file',
+      'give either a uniform ambient_density or a profile file, not both and not neither',
+    );
   }
   const input: BuoyantJetInput = {
-    diameter: arg.num(a, 'diameter'), velocity: arg.num(a, 'velocity'), angle: arg.num(a, 'angle'),
-    portDepth: arg.num(a, 'port_depth'), effluentDensity: arg.num(a, 'effluent_density'),
-    ambient: profile ? { kind: 'profile', profile } : { kind: 'uniform', density: rhoA as number }, current: arg.num(a, 'current'),
+    diameter: arg.num(a, 'diameter'),
+    velocity: arg.num(a, 'velocity'),
+    angle: arg.num(a, 'angle'),
+    portDepth: arg.num(a, 'port_depth'),
+    effluentDensity: arg.num(a, 'effluent_density'),
+    ambient: profile ? { kind: 'profile', profile } : { kind: 'uniform', density: rhoA as number },
+    current: arg.num(a, 'current'),
   };
   return input;
 }
 
 /** The merged-diffuser input from resolved diffuser-plume arguments (shared by the calc method and the compliance table). */
 export function diffuserInputFromArgs(a: CalcArgs): DiffuserInput {
-  const ports = arg.optNum(a, 'ports'), length = arg.optNum(a, 'diffuser_length');
+  const ports = arg.optNum(a, 'ports'),
+    length = arg.optNum(a, 'diffuser_length');
   let spacing = arg.optNum(a, 'spacing');
   if (spacing === undefined && length !== undefined) {
-    if (ports === undefined || ports < 2) throw new InputError('ports', ports ?? '(missing)', '1', '≥ 2 with diffuser_length', 'the spacing follows from diffuser_length only with the number of ports (at least 2)');
+    if (ports === undefined || ports < 2)
+      throw new InputError(
+        'ports',
+        ports ?? '(missing)',
+        '1',
+        '≥ 2 with diffuser_length',
+        'the spacing follows from diffuser_length only with the number of ports (at least 2)',
+      );
     spacing = length / (ports - 1);
   }
   return { ...buoyantJetInputFromArgs(a), spacing, ports, currentAngle: arg.optNum(a, 'current_angle') };
@@ -49,8 +73,19 @@ export function diffuserInputFromArgs(a: CalcArgs): DiffuserInput {
 export function jetPathSeries(t: JetTrajectory): Series[] {
   const col = (k: keyof JetPath) => ({ ...JET_PATH_COLUMNS[k], values: [...(t.path[k] ?? [])] });
   return [
-    { title: 'Plume centreline', x: col('horizontalDistance'), y: [col('depth')], depthAxis: true, caption: `Centreline path in the vertical section (${t.outcomeText})` },
-    { title: 'Dilution along the path', x: col('horizontalDistance'), y: [col('dilutionCentreline'), col('dilutionAverage')], caption: 'Centreline and flux-average dilution against horizontal distance from the port' },
+    {
+      title: 'Plume centreline',
+      x: col('horizontalDistance'),
+      y: [col('depth')],
+      depthAxis: true,
+      caption: `Centreline path in the vertical section (${t.outcomeText})`,
+    },
+    {
+      title: 'Dilution along the path',
+      x: col('horizontalDistance'),
+      y: [col('dilutionCentreline'), col('dilutionAverage')],
+      caption: 'Centreline and flux-average dilution against horizontal distance from the port',
+    },
   ];
 }
 
@@ -58,12 +93,49 @@ export function jetPathSeries(t: JetTrajectory): Series[] {
 const jetPortParams: ParamSpec[] = [
   { kind: 'number', name: 'diameter', unit: 'm', description: 'port diameter', range: { ...positive, max: 20 } },
   { kind: 'number', name: 'velocity', unit: 'm/s', description: 'exit velocity', range: { ...positive, max: 100 } },
-  { kind: 'number', name: 'angle', unit: 'deg', description: 'vertical angle above horizontal', range: { min: -90, max: 90 } },
-  { kind: 'number', name: 'port_depth', unit: 'm', description: 'port depth below the surface', range: { ...positive, max: 11000 } },
-  { kind: 'number', name: 'effluent_density', unit: 'kg/m3', description: 'effluent density', range: { min: 900, max: 1300 } },
-  { kind: 'number', name: 'ambient_density', unit: 'kg/m3', description: 'uniform ambient density (or give file)', optional: true, range: { min: 900, max: 1300 } },
-  { kind: 'profile', name: 'file', description: 'CSV profile of the ambient (or give ambient_density); its deepest sample is taken as the bed', optional: true },
-  { kind: 'number', name: 'current', unit: 'm/s', description: 'current speed, taken along the jet direction (co-flowing: the lower, cautious near-field dilution)', default: 0, range: { ...nonNegative, max: 10 } },
+  {
+    kind: 'number',
+    name: 'angle',
+    unit: 'deg',
+    description: 'vertical angle above horizontal',
+    range: { min: -90, max: 90 },
+  },
+  {
+    kind: 'number',
+    name: 'port_depth',
+    unit: 'm',
+    description: 'port depth below the surface',
+    range: { ...positive, max: 11000 },
+  },
+  {
+    kind: 'number',
+    name: 'effluent_density',
+    unit: 'kg/m3',
+    description: 'effluent density',
+    range: { min: 900, max: 1300 },
+  },
+  {
+    kind: 'number',
+    name: 'ambient_density',
+    unit: 'kg/m3',
+    description: 'uniform ambient density (or give file)',
+    optional: true,
+    range: { min: 900, max: 1300 },
+  },
+  {
+    kind: 'profile',
+    name: 'file',
+    description: 'CSV profile of the ambient (or give ambient_density); its deepest sample is taken as the bed',
+    optional: true,
+  },
+  {
+    kind: 'number',
+    name: 'current',
+    unit: 'm/s',
+    description: 'current speed, taken along the jet direction (co-flowing: the lower, cautious near-field dilution)',
+    default: 0,
+    range: { ...nonNegative, max: 10 },
+  },
 ];
 
 /** Runs the buoyant-jet model for the CLI and reports the headline results. */
@@ -72,7 +144,10 @@ function runBuoyantJet(a: CalcArgs): CalcOutput {
   const results: Record<string, ResultValue> = { max_rise: num(t.maxRise, 'm') };
   const ev = (k: string) => t.events.find((e) => e.kind === k);
   const ret = ev('return to port level');
-  if (ret) { results.return_distance = num(ret.horizontalDistance, 'm'); results.return_dilution = num(ret.dilutionCentreline, '1'); }
+  if (ret) {
+    results.return_distance = num(ret.horizontalDistance, 'm');
+    results.return_dilution = num(ret.dilutionCentreline, '1');
+  }
   const neutral = ev('neutral buoyancy');
   if (t.outcome === 'trapped' && neutral) results.trap_height = num(neutral.z, 'm');
   const surf = ev('surface contact');
@@ -85,19 +160,32 @@ function runBuoyantJet(a: CalcArgs): CalcOutput {
 function runDiffuserPlume(a: CalcArgs): CalcOutput {
   const r = diffuserPlume(diffuserInputFromArgs(a));
   // the governing dilution first: cards and summaries show the first numeric result
-  const results: Record<string, ResultValue> = { dilution: num(r.dilution, '1'), dilution_average: num(r.dilutionAverage, '1'), rise_height: num(r.riseHeight, 'm'), regime: text(r.regimeText) };
+  const results: Record<string, ResultValue> = {
+    dilution: num(r.dilution, '1'),
+    dilution_average: num(r.dilutionAverage, '1'),
+    rise_height: num(r.riseHeight, 'm'),
+    regime: text(r.regimeText),
+  };
   if (r.merge) {
     results.merge_height = num(r.merge.z, 'm');
     results.merge_distance = num(r.merge.horizontalDistance, 'm');
     results.merge_dilution = num(r.merge.dilutionCentreline, '1');
   }
-  results.single_port_dilution = num(r.isolated.path.dilutionCentreline[r.isolated.path.dilutionCentreline.length - 1], '1');
+  results.single_port_dilution = num(
+    r.isolated.path.dilutionCentreline[r.isolated.path.dilutionCentreline.length - 1],
+    '1',
+  );
   results.outcome = text((r.governing === 'merged' ? r.merged : r.isolated).outcomeText);
   const single = r.isolated.path;
-  const series: Series[] = [...jetPathSeries(r.merged), {
-    title: 'Single-port dilution', x: { ...JET_PATH_COLUMNS.horizontalDistance, values: [...single.horizontalDistance] },
-    y: [{ ...JET_PATH_COLUMNS.dilutionCentreline, values: [...single.dilutionCentreline] }], caption: 'Centreline dilution of one port without neighbours, for comparison',
-  }];
+  const series: Series[] = [
+    ...jetPathSeries(r.merged),
+    {
+      title: 'Single-port dilution',
+      x: { ...JET_PATH_COLUMNS.horizontalDistance, values: [...single.horizontalDistance] },
+      y: [{ ...JET_PATH_COLUMNS.dilutionCentreline, values: [...single.dilutionCentreline] }],
+      caption: 'Centreline dilution of one port without neighbours, for comparison',
+    },
+  ];
   return { results, warnings: r.warnings, sources: [DIFFUSER_PLUME.source, BUOYANT_JET.source], series };
 }
 
@@ -110,17 +198,51 @@ export const jetCalcMethods: CalcMethod[] = [
     params: [
       { kind: 'number', name: 'diameter', unit: 'm', description: 'port diameter', range: { ...positive, max: 20 } },
       { kind: 'number', name: 'velocity', unit: 'm/s', description: 'exit velocity', range: { ...positive, max: 100 } },
-      { kind: 'number', name: 'g_prime', unit: 'm/s2', description: 'reduced gravity g(ρ_a − ρ_e)/ρ_a, positive for a rising effluent', range: { min: -5, max: 5 } },
-      { kind: 'number', name: 'current', unit: 'm/s', description: 'ambient current speed', default: 0, range: { ...nonNegative, max: 10 } },
-      { kind: 'number', name: 'buoyancy_frequency', unit: '1/s', description: 'ambient buoyancy frequency N', default: 0, range: { ...nonNegative, max: 2 } },
+      {
+        kind: 'number',
+        name: 'g_prime',
+        unit: 'm/s2',
+        description: 'reduced gravity g(ρ_a − ρ_e)/ρ_a, positive for a rising effluent',
+        range: { min: -5, max: 5 },
+      },
+      {
+        kind: 'number',
+        name: 'current',
+        unit: 'm/s',
+        description: 'ambient current speed',
+        default: 0,
+        range: { ...nonNegative, max: 10 },
+      },
+      {
+        kind: 'number',
+        name: 'buoyancy_frequency',
+        unit: '1/s',
+        description: 'ambient buoyancy frequency N',
+        default: 0,
+        range: { ...nonNegative, max: 2 },
+      },
     ],
     results: [
-      ...lengthScaleResults.map(([name, , description]) => ({ name, unit: 'm', description: `${description} (omitted when the process is absent)` })),
-      { name: 'froude', unit: '1', description: 'port densimetric Froude number (omitted for a neutrally buoyant jet)' },
+      ...lengthScaleResults.map(([name, , description]) => ({
+        name,
+        unit: 'm',
+        description: `${description} (omitted when the process is absent)`,
+      })),
+      {
+        name: 'froude',
+        unit: '1',
+        description: 'port densimetric Froude number (omitted for a neutrally buoyant jet)',
+      },
       { name: 'regime', unit: '', description: 'which process dominates where, in words' },
     ],
     run(a) {
-      const r = jetLengthScales({ diameter: arg.num(a, 'diameter'), velocity: arg.num(a, 'velocity'), gPrime: arg.num(a, 'g_prime'), current: arg.num(a, 'current'), buoyancyFrequency: arg.num(a, 'buoyancy_frequency') });
+      const r = jetLengthScales({
+        diameter: arg.num(a, 'diameter'),
+        velocity: arg.num(a, 'velocity'),
+        gPrime: arg.num(a, 'g_prime'),
+        current: arg.num(a, 'current'),
+        buoyancyFrequency: arg.num(a, 'buoyancy_frequency'),
+      });
       const results: Record<string, ResultValue> = {};
       for (const [name, key] of lengthScaleResults) if (Number.isFinite(r[key])) results[name] = num(r[key], 'm');
       if (Number.isFinite(r.froude)) results.froude = num(r.froude, '1');
@@ -135,7 +257,11 @@ export const jetCalcMethods: CalcMethod[] = [
     params: jetPortParams,
     results: [
       { name: 'max_rise', unit: 'm', description: 'highest centreline point above the port' },
-      { name: 'return_distance', unit: 'm', description: 'horizontal distance where the centreline falls back to port level (dense jets)' },
+      {
+        name: 'return_distance',
+        unit: 'm',
+        description: 'horizontal distance where the centreline falls back to port level (dense jets)',
+      },
       { name: 'return_dilution', unit: '1', description: 'centreline dilution at the return point' },
       { name: 'trap_height', unit: 'm', description: 'height above the port of neutral buoyancy, when trapped' },
       { name: 'surface_dilution', unit: '1', description: 'centreline dilution where the plume reaches the surface' },
@@ -149,20 +275,66 @@ export const jetCalcMethods: CalcMethod[] = [
     topic: 'jets',
     params: [
       ...jetPortParams,
-      { kind: 'number', name: 'spacing', unit: 'm', description: 'port spacing along the diffuser (or give diffuser_length and ports)', optional: true, range: { ...positive, max: 1e4 } },
-      { kind: 'number', name: 'ports', unit: '1', description: 'number of ports (1: a single port)', optional: true, range: { min: 1, max: 500 } },
-      { kind: 'number', name: 'diffuser_length', unit: 'm', description: 'length from the first to the last port', optional: true, range: { ...positive, max: 1e5 } },
-      { kind: 'number', name: 'current_angle', unit: 'deg', description: 'angle between the current and the diffuser axis (90: across it, the case modelled)', optional: true, range: { min: 0, max: 90 } },
+      {
+        kind: 'number',
+        name: 'spacing',
+        unit: 'm',
+        description: 'port spacing along the diffuser (or give diffuser_length and ports)',
+        optional: true,
+        range: { ...positive, max: 1e4 },
+      },
+      {
+        kind: 'number',
+        name: 'ports',
+        unit: '1',
+        description: 'number of ports (1: a single port)',
+        optional: true,
+        range: { min: 1, max: 500 },
+      },
+      {
+        kind: 'number',
+        name: 'diffuser_length',
+        unit: 'm',
+        description: 'length from the first to the last port',
+        optional: true,
+        range: { ...positive, max: 1e5 },
+      },
+      {
+        kind: 'number',
+        name: 'current_angle',
+        unit: 'deg',
+        description: 'angle between the current and the diffuser axis (90: across it, the case modelled)',
+        optional: true,
+        range: { min: 0, max: 90 },
+      },
     ],
     results: [
-      { name: 'dilution', unit: '1', description: 'governing centreline dilution at the end of the near field: the smaller of merged and single-port' },
+      {
+        name: 'dilution',
+        unit: '1',
+        description:
+          'governing centreline dilution at the end of the near field: the smaller of merged and single-port',
+      },
       { name: 'dilution_average', unit: '1', description: 'flux-average dilution there' },
-      { name: 'rise_height', unit: 'm', description: 'highest centreline point above the ports (governing path; 0 for a sinking plume)' },
+      {
+        name: 'rise_height',
+        unit: 'm',
+        description: 'highest centreline point above the ports (governing path; 0 for a sinking plume)',
+      },
       { name: 'regime', unit: '', description: 'whether the plumes merge and which regime governs, in words' },
-      { name: 'merge_height', unit: 'm', description: 'height above the ports where neighbouring plumes merge, negative below (omitted when they do not)' },
+      {
+        name: 'merge_height',
+        unit: 'm',
+        description:
+          'height above the ports where neighbouring plumes merge, negative below (omitted when they do not)',
+      },
       { name: 'merge_distance', unit: 'm', description: 'horizontal distance from the ports where they merge' },
       { name: 'merge_dilution', unit: '1', description: 'centreline dilution where they merge' },
-      { name: 'single_port_dilution', unit: '1', description: 'centreline dilution of one port without neighbours, at the end of its near field' },
+      {
+        name: 'single_port_dilution',
+        unit: '1',
+        description: 'centreline dilution of one port without neighbours, at the end of its near field',
+      },
       { name: 'outcome', unit: '', description: 'how the near field ends, in words' },
     ],
     run: (a) => runDiffuserPlume(a),
@@ -172,18 +344,52 @@ export const jetCalcMethods: CalcMethod[] = [
     title: LINE_PLUME_RSB1989.title,
     topic: 'jets',
     params: [
-      { kind: 'number', name: 'discharge_per_length', unit: 'm2/s', description: 'diffuser discharge per unit length q', range: { ...positive, max: 100 } },
-      { kind: 'number', name: 'g_prime', unit: 'm/s2', description: 'reduced gravity of the effluent (rising)', range: { ...positive, max: 5 } },
-      { kind: 'number', name: 'buoyancy_frequency', unit: '1/s', description: 'buoyancy frequency N of the linear stratification', range: { ...positive, max: 2 } },
-      { kind: 'number', name: 'current', unit: 'm/s', description: 'current perpendicular to the diffuser', default: 0, range: { ...nonNegative, max: 10 } },
+      {
+        kind: 'number',
+        name: 'discharge_per_length',
+        unit: 'm2/s',
+        description: 'diffuser discharge per unit length q',
+        range: { ...positive, max: 100 },
+      },
+      {
+        kind: 'number',
+        name: 'g_prime',
+        unit: 'm/s2',
+        description: 'reduced gravity of the effluent (rising)',
+        range: { ...positive, max: 5 },
+      },
+      {
+        kind: 'number',
+        name: 'buoyancy_frequency',
+        unit: '1/s',
+        description: 'buoyancy frequency N of the linear stratification',
+        range: { ...positive, max: 2 },
+      },
+      {
+        kind: 'number',
+        name: 'current',
+        unit: 'm/s',
+        description: 'current perpendicular to the diffuser',
+        default: 0,
+        range: { ...nonNegative, max: 10 },
+      },
     ],
     results: [
       { name: 'rise_height', unit: 'm', description: 'top of the wastefield above the diffuser' },
       { name: 'dilution', unit: '1', description: 'minimum dilution at the end of the near field' },
     ],
     run(a) {
-      const r = linePlumeRobertsSnyderBaumgartner1989(arg.num(a, 'discharge_per_length'), arg.num(a, 'g_prime'), arg.num(a, 'buoyancy_frequency'), arg.num(a, 'current'));
-      return { results: { rise_height: num(r.riseHeight, 'm'), dilution: num(r.dilution, '1') }, warnings: r.warnings, sources: [LINE_PLUME_RSB1989.source] };
+      const r = linePlumeRobertsSnyderBaumgartner1989(
+        arg.num(a, 'discharge_per_length'),
+        arg.num(a, 'g_prime'),
+        arg.num(a, 'buoyancy_frequency'),
+        arg.num(a, 'current'),
+      );
+      return {
+        results: { rise_height: num(r.riseHeight, 'm'), dilution: num(r.dilution, '1') },
+        warnings: r.warnings,
+        sources: [LINE_PLUME_RSB1989.source],
+      };
     },
   },
   {
@@ -191,9 +397,19 @@ export const jetCalcMethods: CalcMethod[] = [
     title: REQUIRED_DILUTION.title,
     topic: 'jets',
     params: [
-      { kind: 'number', name: 'effluent', unit: '1', description: 'effluent concentration (any unit, the same for all three)' },
+      {
+        kind: 'number',
+        name: 'effluent',
+        unit: '1',
+        description: 'effluent concentration (any unit, the same for all three)',
+      },
       { kind: 'number', name: 'ambient', unit: '1', description: 'ambient (background) concentration' },
-      { kind: 'number', name: 'criterion', unit: '1', description: 'water-quality criterion at the mixing-zone boundary' },
+      {
+        kind: 'number',
+        name: 'criterion',
+        unit: '1',
+        description: 'water-quality criterion at the mixing-zone boundary',
+      },
     ],
     results: [{ name: 'dilution', unit: '1', description: '(C_e − C_a)/(C_c − C_a), at least 1' }],
     run(a) {

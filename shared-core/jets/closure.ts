@@ -39,7 +39,7 @@ export const RICHARDSON_PLANE_PLUME = PLANE_ENTRAINMENT.alphaPlume;
 export type JetGeometry = 'round' | 'plane';
 
 /** Centreline dilution = flux-average dilution × λ²/(1+λ²) for Gaussian profiles of width ratio λ. */
-export const CENTRELINE_TO_AVERAGE = (ENTRAINMENT.lambda ** 2) / (1 + ENTRAINMENT.lambda ** 2);
+export const CENTRELINE_TO_AVERAGE = ENTRAINMENT.lambda ** 2 / (1 + ENTRAINMENT.lambda ** 2);
 
 export const BUOYANT_JET: MethodInfo = {
   id: 'buoyant-jet',
@@ -63,11 +63,15 @@ export const BUOYANT_JET: MethodInfo = {
 
 /** State vector of the model, in SI. */
 export interface JetState {
-  x: number; y: number; z: number;
+  x: number;
+  y: number;
+  z: number;
   /** volume flux [m3/s] */
   Q: number;
   /** momentum flux vector Q·u [m4/s2] */
-  Mx: number; My: number; Mz: number;
+  Mx: number;
+  My: number;
+  Mz: number;
   /** Q(ρ_jet − ρ_ref) [kg/s] */
   R: number;
   /** Q(T_jet − T_ref) [m3 K/s] */
@@ -88,7 +92,11 @@ export interface ClosureContext {
 
 /** Local jet properties derived from the state. */
 export interface JetLocal {
-  u: number; ex: number; ey: number; ez: number; b: number;
+  u: number;
+  ex: number;
+  ey: number;
+  ez: number;
+  b: number;
   /** ρ_jet − ρ_ambient [kg/m3] */
   densityExcess: number;
   /** −g Δρ/ρ_ref [m/s2], positive upward */
@@ -101,7 +109,9 @@ export interface JetLocal {
 export function localJet(s: JetState, c: ClosureContext): JetLocal {
   const m = Math.hypot(s.Mx, s.My, s.Mz);
   const u = m / s.Q;
-  const ex = s.Mx / m, ey = s.My / m, ez = s.Mz / m;
+  const ex = s.Mx / m,
+    ey = s.My / m,
+    ez = s.Mz / m;
   const plane = c.geometry === 'plane';
   const b = plane ? s.Q / (2 * u) : Math.sqrt(s.Q / (Math.PI * u));
   const d = c.portDepth - s.z;
@@ -114,7 +124,9 @@ export function localJet(s: JetState, c: ClosureContext): JetLocal {
   const k = plane ? PLANE_ENTRAINMENT : ENTRAINMENT;
   const f = Math.min(1, Math.max(0, ri / (plane ? RICHARDSON_PLANE_PLUME : RICHARDSON_PLUME)));
   const alpha = k.alphaJet + (k.alphaPlume - k.alphaJet) * f;
-  const entrainment = plane ? 2 * alpha * Math.abs(shear) : 2 * Math.PI * b * (alpha * Math.abs(shear) + ENTRAINMENT.betaCrossflow * cross);
+  const entrainment = plane
+    ? 2 * alpha * Math.abs(shear)
+    : 2 * Math.PI * b * (alpha * Math.abs(shear) + ENTRAINMENT.betaCrossflow * cross);
   return { u, ex, ey, ez, b, densityExcess, gPrime, ambientCurrent: ua, entrainment };
 }
 
@@ -124,9 +136,13 @@ export function jetDerivative(s: JetState, c: ClosureContext): JetState {
   const d = c.portDepth - s.z;
   const E = L.entrainment;
   return {
-    x: L.ex, y: L.ey, z: L.ez,
+    x: L.ex,
+    y: L.ey,
+    z: L.ez,
     Q: E,
-    Mx: E * L.ambientCurrent, My: 0, Mz: (s.Q * L.gPrime) / L.u,
+    Mx: E * L.ambientCurrent,
+    My: 0,
+    Mz: (s.Q * L.gPrime) / L.u,
     R: E * (c.density(d) - c.rhoRef),
     Th: c.temperature ? E * (c.temperature(d) - c.tRef) : 0,
   };

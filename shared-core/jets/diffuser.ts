@@ -2,7 +2,13 @@ import { InputError, formatNumber } from '../core/errors';
 import { requireInRange } from '../core/range';
 import { validityWarnings, type MethodInfo } from '../core/method';
 import { GRAVITY } from '../quantities';
-import { assembleTrajectory, buoyantJetTrajectory, type BuoyantJetInput, type JetEvent, type JetTrajectory } from './buoyant-jet';
+import {
+  assembleTrajectory,
+  buoyantJetTrajectory,
+  type BuoyantJetInput,
+  type JetEvent,
+  type JetTrajectory,
+} from './buoyant-jet';
 import { prepareJetRun, traceStretch, type Stretch } from './trace';
 
 export const DIFFUSER_PLUME: MethodInfo = {
@@ -23,7 +29,12 @@ export const DIFFUSER_PLUME: MethodInfo = {
     'q = 2bu, α = α_j + (α_p − α_j)·clamp(Ri/α_p, 0, 1), Ri = g′b e_z/u²; S_c = S_avg·λ²/(1+λ²) kept from the round plumes; ' +
     'governing dilution = min(S_merged, S_single port) at the end of the near field',
   validity: {
-    froude_current: { min: 0, max: 100, unit: '1', note: 'F = u³/b of the line-plume experiments of Roberts, Snyder & Baumgartner (1989)' },
+    froude_current: {
+      min: 0,
+      max: 100,
+      unit: '1',
+      note: 'F = u³/b of the line-plume experiments of Roberts, Snyder & Baumgartner (1989)',
+    },
   },
 };
 
@@ -63,7 +74,8 @@ export interface DiffuserPlume {
 }
 
 const m = (x: number) => formatNumber(Number(x.toPrecision(3)));
-const endDilution = (t: JetTrajectory, key: 'dilutionCentreline' | 'dilutionAverage') => t.path[key][t.path[key].length - 1];
+const endDilution = (t: JetTrajectory, key: 'dilutionCentreline' | 'dilutionAverage') =>
+  t.path[key][t.path[key].length - 1];
 
 /**
  * Near field of a multiport diffuser: each port's round buoyant jet is followed until neighbouring plumes merge (top-hat
@@ -80,13 +92,34 @@ const endDilution = (t: JetTrajectory, key: 'dilutionCentreline' | 'dilutionAver
  */
 export function diffuserPlume(input: DiffuserInput): DiffuserPlume {
   const ports = input.ports === undefined ? undefined : requireInRange('ports', input.ports, '1', { min: 1, max: 500 });
-  if (ports !== undefined && !Number.isInteger(ports)) throw new InputError('ports', ports, '1', 'a whole number of ports');
-  const currentAngle = input.currentAngle === undefined ? undefined : requireInRange('current_angle', input.currentAngle, 'deg', { min: 0, max: 90 });
+  if (ports !== undefined && !Number.isInteger(ports))
+    throw new InputError('ports', ports, '1', 'a whole number of ports');
+  const currentAngle =
+    input.currentAngle === undefined
+      ? undefined
+      : requireInRange('current_angle', input.currentAngle, 'deg', { min: 0, max: 90 });
   const isolated = buoyantJetTrajectory({ ...input, horizontalAngle: 0 });
   if (ports === 1) {
-    return { merged: isolated, isolated, regime: 'single port', governing: 'isolated', dilution: endDilution(isolated, 'dilutionCentreline'), dilutionAverage: endDilution(isolated, 'dilutionAverage'), riseHeight: isolated.maxRise, regimeText: 'One port: the single-port buoyant-jet result applies.', warnings: isolated.warnings };
+    return {
+      merged: isolated,
+      isolated,
+      regime: 'single port',
+      governing: 'isolated',
+      dilution: endDilution(isolated, 'dilutionCentreline'),
+      dilutionAverage: endDilution(isolated, 'dilutionAverage'),
+      riseHeight: isolated.maxRise,
+      regimeText: 'One port: the single-port buoyant-jet result applies.',
+      warnings: isolated.warnings,
+    };
   }
-  if (input.spacing === undefined) throw new InputError('spacing', '(missing)', 'm', `> port diameter (${input.diameter} m)`, 'a diffuser with several ports needs the port spacing');
+  if (input.spacing === undefined)
+    throw new InputError(
+      'spacing',
+      '(missing)',
+      'm',
+      `> port diameter (${input.diameter} m)`,
+      'a diffuser with several ports needs the port spacing',
+    );
   const s = requireInRange('spacing', input.spacing, 'm', { min: input.diameter, minExclusive: true, max: 1e4 });
   const run = prepareJetRun({ ...input, horizontalAngle: 0, portSpacing: s });
   const round = traceStretch(run, { geometry: 'round', start: run.start, sStart: 0, stopAtMerge: true });
@@ -94,12 +127,28 @@ export function diffuserPlume(input: DiffuserInput): DiffuserPlume {
   const stretches: Stretch[] = [round];
   if (mergeEvent) {
     const per = (k: 'Q' | 'Mx' | 'My' | 'Mz' | 'R' | 'Th') => mergeEvent.state[k] / s;
-    const start = { ...mergeEvent.state, Q: per('Q'), Mx: per('Mx'), My: per('My'), Mz: per('Mz'), R: per('R'), Th: per('Th') };
-    stretches.push(traceStretch(run, { geometry: 'plane', start, sStart: mergeEvent.s, neutralPassed: round.fired.some((e) => e.name === 'neutral buoyancy') }));
+    const start = {
+      ...mergeEvent.state,
+      Q: per('Q'),
+      Mx: per('Mx'),
+      My: per('My'),
+      Mz: per('Mz'),
+      R: per('R'),
+      Th: per('Th'),
+    };
+    stretches.push(
+      traceStretch(run, {
+        geometry: 'plane',
+        start,
+        sStart: mergeEvent.s,
+        neutralPassed: round.fired.some((e) => e.name === 'neutral buoyancy'),
+      }),
+    );
   }
   const merged = assembleTrajectory(run, stretches, input.ambient);
   const merge = merged.events.find((e) => e.kind === 'plumes merge');
-  const governing = endDilution(merged, 'dilutionCentreline') <= endDilution(isolated, 'dilutionCentreline') ? 'merged' : 'isolated';
+  const governing =
+    endDilution(merged, 'dilutionCentreline') <= endDilution(isolated, 'dilutionCentreline') ? 'merged' : 'isolated';
   const g = governing === 'merged' ? merged : isolated;
   const length = ports === undefined ? undefined : (ports - 1) * s;
   const bPort = Math.abs((GRAVITY * (run.rhoRef - run.rhoE)) / run.rhoRef) * (run.Q0 / s);
@@ -113,20 +162,37 @@ export function diffuserPlume(input: DiffuserInput): DiffuserPlume {
       (governing === 'isolated' ? ' The single-port dilution is the smaller here and governs.' : '')
     : `Neighbouring plumes (spacing ${m(s)} m) do not merge within the near field: the ports act as isolated round plumes.`;
   const warnings = [...merged.warnings];
-  if (froudeCurrent !== undefined) warnings.push(...validityWarnings(DIFFUSER_PLUME, { froude_current: froudeCurrent }));
+  if (froudeCurrent !== undefined)
+    warnings.push(...validityWarnings(DIFFUSER_PLUME, { froude_current: froudeCurrent }));
   if (merge && uPort > 0) {
-    warnings.push('After merging the line plume is followed as in still water; Roberts, Snyder & Baumgartner (1989) found that a current across the diffuser raises the dilution (for F = u³/b > 0.1) and lowers the rise, so the merged dilution errs low and the rise height high, and the merged plume is not carried downstream.');
+    warnings.push(
+      'After merging the line plume is followed as in still water; Roberts, Snyder & Baumgartner (1989) found that a current across the diffuser raises the dilution (for F = u³/b > 0.1) and lowers the rise, so the merged dilution errs low and the rise height high, and the merged plume is not carried downstream.',
+    );
   }
   if (uPort > 0 && (currentAngle === undefined || currentAngle < 60)) {
-    warnings.push(currentAngle === undefined
-      ? 'The current is taken across the diffuser (the ports’ plumes side by side); a current along the diffuser sweeps each plume onto the next, which this model does not describe.'
-      : `The current runs at ${m(currentAngle)}° to the diffuser: plumes are swept onto their downstream neighbours and merge sooner than modelled; the model describes a current across the diffuser (Roberts, Snyder & Baumgartner 1989 found lower dilutions for currents along the diffuser; from memory).`);
+    warnings.push(
+      currentAngle === undefined
+        ? 'The current is taken across the diffuser (the ports’ plumes side by side); a current along the diffuser sweeps each plume onto the next, which this model does not describe.'
+        : `The current runs at ${m(currentAngle)}° to the diffuser: plumes are swept onto their downstream neighbours and merge sooner than modelled; the model describes a current across the diffuser (Roberts, Snyder & Baumgartner 1989 found lower dilutions for currents along the diffuser; from memory).`,
+    );
   }
   if (merge && length !== undefined && length < g.maxRise) {
-    warnings.push(`The diffuser (${m(length)} m long) is shorter than the rise (${m(g.maxRise)} m): water entrained at its ends makes the plume tend to one round plume of the total flow, so the line-plume continuation errs low (common practice, no source).`);
+    warnings.push(
+      `The diffuser (${m(length)} m long) is shorter than the rise (${m(g.maxRise)} m): water entrained at its ends makes the plume tend to one round plume of the total flow, so the line-plume continuation errs low (common practice, no source).`,
+    );
   }
   return {
-    merged, isolated, merge, regime, governing, dilution: endDilution(g, 'dilutionCentreline'), dilutionAverage: endDilution(g, 'dilutionAverage'),
-    riseHeight: g.maxRise, froudeCurrent, length, regimeText, warnings: [...new Set(warnings)],
+    merged,
+    isolated,
+    merge,
+    regime,
+    governing,
+    dilution: endDilution(g, 'dilutionCentreline'),
+    dilutionAverage: endDilution(g, 'dilutionAverage'),
+    riseHeight: g.maxRise,
+    froudeCurrent,
+    length,
+    regimeText,
+    warnings: [...new Set(warnings)],
   };
 }

@@ -73,7 +73,10 @@ export function jetLengthScales(d: JetDischarge): JetLengthScales {
   const g = requireInRange('g_prime', d.gPrime, 'm/s2', { min: -5, max: 5 });
   const ua = requireInRange('current', d.current ?? 0, 'm/s', { ...nonNegative, max: 10 });
   const N = requireInRange('buoyancy_frequency', d.buoyancyFrequency ?? 0, '1/s', { ...nonNegative, max: 2 });
-  const Q = (Math.PI * D * D * U) / 4, M = U * Q, B = g * Q, absB = Math.abs(B);
+  const Q = (Math.PI * D * D * U) / 4,
+    M = U * Q,
+    B = g * Q,
+    absB = Math.abs(B);
   const froude = g === 0 ? Infinity : U / Math.sqrt(Math.abs(g) * D);
   const lQ = Q / Math.sqrt(M);
   const lM = absB > 0 ? M ** 0.75 / Math.sqrt(absB) : Infinity;
@@ -83,8 +86,18 @@ export function jetLengthScales(d: JetDischarge): JetLengthScales {
   const lBN = N > 0 ? (absB / N ** 3) ** 0.25 : Infinity;
   const warnings = Number.isFinite(froude) ? validityWarnings(JET_LENGTH_SCALES, { froude }) : [];
   return {
-    froude, volumeFlux: Q, momentumFlux: M, buoyancyFlux: B, lQ, lM, lCrossflowMomentum: lm, lCrossflowBuoyancy: lb,
-    lStratMomentum: lMN, lStratBuoyancy: lBN, regime: describeRegime(g, lQ, lM, lm, lb, lMN), warnings,
+    froude,
+    volumeFlux: Q,
+    momentumFlux: M,
+    buoyancyFlux: B,
+    lQ,
+    lM,
+    lCrossflowMomentum: lm,
+    lCrossflowBuoyancy: lb,
+    lStratMomentum: lMN,
+    lStratBuoyancy: lBN,
+    regime: describeRegime(g, lQ, lM, lm, lb, lMN),
+    warnings,
   };
 }
 
@@ -93,26 +106,36 @@ function describeRegime(g: number, lQ: number, lM: number, lm: number, lb: numbe
   const out = [`Within about ${fmt(lQ)} m of the port the flow still remembers the port's shape.`];
   if (g === 0) out.push('The effluent has the ambient density: it behaves as a pure momentum jet.');
   else if (g > 0) {
-    out.push(lM <= 5 * lQ
-      ? `Buoyancy takes over almost at once (within about ${fmt(lM)} m): the discharge rises as a plume.`
-      : `The discharge mixes as a momentum jet for about ${fmt(lM)} m, then rises as a buoyant plume.`);
+    out.push(
+      lM <= 5 * lQ
+        ? `Buoyancy takes over almost at once (within about ${fmt(lM)} m): the discharge rises as a plume.`
+        : `The discharge mixes as a momentum jet for about ${fmt(lM)} m, then rises as a buoyant plume.`,
+    );
   } else {
-    out.push(`The effluent is denser than the water around it: its momentum carries it about ${fmt(lM)} m before its weight turns it back towards the bed.`);
+    out.push(
+      `The effluent is denser than the water around it: its momentum carries it about ${fmt(lM)} m before its weight turns it back towards the bed.`,
+    );
   }
   if (Number.isFinite(lm)) {
-    out.push(lm < lM
-      ? `The current bends the jet over after about ${fmt(lm)} m, before buoyancy takes over.`
-      : `The current bends the jet over after about ${fmt(lm)} m.`);
+    out.push(
+      lm < lM
+        ? `The current bends the jet over after about ${fmt(lm)} m, before buoyancy takes over.`
+        : `The current bends the jet over after about ${fmt(lm)} m.`,
+    );
     if (g !== 0) {
-      out.push(lb < lM
-        ? `The current is strong: beyond about ${fmt(lb)} m it carries the plume along faster than buoyancy can lift or sink it.`
-        : `Buoyancy keeps control of the vertical motion for about ${fmt(lb)} m; further on the current carries the plume along.`);
+      out.push(
+        lb < lM
+          ? `The current is strong: beyond about ${fmt(lb)} m it carries the plume along faster than buoyancy can lift or sink it.`
+          : `Buoyancy keeps control of the vertical motion for about ${fmt(lb)} m; further on the current carries the plume along.`,
+      );
     }
   } else out.push('There is no current: the jet is not deflected sideways.');
   if (Number.isFinite(lMN)) {
-    out.push(lMN < Math.min(lM, lm)
-      ? `The density layering stops the rise early, after a few times ${fmt(lMN)} m, while the jet still has momentum.`
-      : 'The density layering limits the rise after the jet has turned into a plume (scale (B/N³)^¼).');
+    out.push(
+      lMN < Math.min(lM, lm)
+        ? `The density layering stops the rise early, after a few times ${fmt(lMN)} m, while the jet still has momentum.`
+        : 'The density layering limits the rise after the jet has turned into a plume (scale (B/N³)^¼).',
+    );
   } else out.push('The ambient is unstratified: nothing stops the plume below the surface.');
   return out;
 }

@@ -8,7 +8,8 @@ export const LINE_PLUME_RSB1989: MethodInfo = {
     'Roberts, P.J.W., Snyder, W.H., Baumgartner, D.J. (1989). Ocean outfalls. I: Submerged wastefield formation. ' +
     'J. Hydraul. Eng. 115(1), 1–25 (zero current: z_e = 2.5 l_b, z_m = 1.7 l_b, h_e = 1.5 l_b, S_m qN/b^⅔ = 0.86; ' +
     'current perpendicular to the diffuser, F > 0.1: S_m qN/b^⅔ = 2.19 F^⅙ − 0.52; coefficients from memory).',
-  equation: 'b = g′q, l_b = b^⅓/N, F = u³/b; z_e = 2.5 l_b; S_m = (qN/b^⅔)⁻¹·{0.86 (F ≤ 0.1); 2.19F^⅙ − 0.52 (F > 0.1)}',
+  equation:
+    'b = g′q, l_b = b^⅓/N, F = u³/b; z_e = 2.5 l_b; S_m = (qN/b^⅔)⁻¹·{0.86 (F ≤ 0.1); 2.19F^⅙ − 0.52 (F > 0.1)}',
   validity: {
     froude_current: { min: 0, max: 100, unit: '1', note: 'F = u³/b of the experiments' },
   },
@@ -50,10 +51,23 @@ export function linePlumeRobertsSnyderBaumgartner1989(q: number, gPrime: number,
   const scaleS = b ** (2 / 3) / (qq * n);
   const coeff = F <= 0.1 ? 0.86 : 2.19 * F ** (1 / 6) - 0.52;
   const warnings = validityWarnings(LINE_PLUME_RSB1989, { froude_current: F });
-  if (F > 0.1) warnings.push('With a current (F > 0.1) the rise height is given for zero current; Roberts, Snyder & Baumgartner (1989) found the wastefield rises less in strong currents, so the value is an upper estimate.');
+  if (F > 0.1)
+    warnings.push(
+      'With a current (F > 0.1) the rise height is given for zero current; Roberts, Snyder & Baumgartner (1989) found the wastefield rises less in strong currents, so the value is an upper estimate.',
+    );
   const dilution = Math.max(1, coeff * scaleS);
-  if (coeff * scaleS < 1) warnings.push('The formula gives a dilution below 1: the discharge is far outside the experiments; 1 is reported.');
-  return { buoyancyFlux: b, lb, froudeCurrent: F, riseHeight: 2.5 * lb, heightMinDilution: 1.7 * lb, thickness: 1.5 * lb, dilution, warnings };
+  if (coeff * scaleS < 1)
+    warnings.push('The formula gives a dilution below 1: the discharge is far outside the experiments; 1 is reported.');
+  return {
+    buoyancyFlux: b,
+    lb,
+    froudeCurrent: F,
+    riseHeight: 2.5 * lb,
+    heightMinDilution: 1.7 * lb,
+    thickness: 1.5 * lb,
+    dilution,
+    warnings,
+  };
 }
 
 /**
@@ -62,5 +76,8 @@ export function linePlumeRobertsSnyderBaumgartner1989(q: number, gPrime: number,
  * buoyantJetTrajectory); diffuserPlume() (diffuser.ts) follows the merged plume as a line plume from there.
  */
 export function diffuserLineSource(portDischarge: number, spacing: number): number {
-  return requireInRange('port_discharge', portDischarge, 'm3/s', positive) / requireInRange('port_spacing', spacing, 'm', positive);
+  return (
+    requireInRange('port_discharge', portDischarge, 'm3/s', positive) /
+    requireInRange('port_spacing', spacing, 'm', positive)
+  );
 }

@@ -3,45 +3,73 @@ import type { JetEvent, JetPath } from './buoyant-jet';
 import type { JetLengthScales } from './length-scales';
 
 /** How the near field of a discharge ends. */
-export type JetOutcome = 'surfaces' | 'trapped' | 'reaches bed' | 'returns to port level' | 'falls back on itself' | 'unfinished' | 'failed';
+export type JetOutcome =
+  'surfaces' | 'trapped' | 'reaches bed' | 'returns to port level' | 'falls back on itself' | 'unfinished' | 'failed';
 
 const m = (x: number) => (Math.abs(x) >= 100 ? x.toFixed(0) : Math.abs(x) >= 10 ? x.toFixed(1) : x.toFixed(2));
 const s = (x: number) => (x >= 100 ? x.toFixed(0) : x.toFixed(1));
 
 /** The outcome of a trajectory and a sentence that states it. */
-export function describeOutcome(events: JetEvent[], status: OdeStatus, maxRise: number, path: JetPath, bedBelowPort?: number): { kind: JetOutcome; text: string } {
+export function describeOutcome(
+  events: JetEvent[],
+  status: OdeStatus,
+  maxRise: number,
+  path: JetPath,
+  bedBelowPort?: number,
+): { kind: JetOutcome; text: string } {
   const find = (k: JetEvent['kind']) => events.find((e) => e.kind === k);
   const end = find('end of near field');
   const ret = find('return to port level');
   const neutral = find('neutral buoyancy');
   const last = path.s.length - 1;
   if (status === 'step-failed' || status === 'max-steps') {
-    return { kind: 'failed', text: `The integration stopped early (${status}) ${m(path.s[last])} m along the path; the results are incomplete.` };
+    return {
+      kind: 'failed',
+      text: `The integration stopped early (${status}) ${m(path.s[last])} m along the path; the results are incomplete.`,
+    };
   }
-  const retText = ret ? ` It falls back through port level ${m(ret.horizontalDistance)} m from the port with a centreline dilution of ${s(ret.dilutionCentreline)}.` : '';
+  const retText = ret
+    ? ` It falls back through port level ${m(ret.horizontalDistance)} m from the port with a centreline dilution of ${s(ret.dilutionCentreline)}.`
+    : '';
   const rise = `The centreline rises at most ${m(maxRise)} m above the port.`;
   if (!end) {
-    return { kind: 'unfinished', text: `${rise}${retText} Within the ${m(path.s[last])} m of path followed it neither reached the surface or the bed nor became trapped; the near field continues beyond.` };
+    return {
+      kind: 'unfinished',
+      text: `${rise}${retText} Within the ${m(path.s[last])} m of path followed it neither reached the surface or the bed nor became trapped; the near field continues beyond.`,
+    };
   }
   const prev = events[events.length - 2];
   switch (prev.kind) {
     case 'surface contact':
-      return { kind: 'surfaces', text: `The plume reaches the surface ${m(end.horizontalDistance)} m from the port with a centreline dilution of ${s(end.dilutionCentreline)} (average ${s(end.dilutionAverage)}); from there it spreads along the surface, which this model does not follow.` };
+      return {
+        kind: 'surfaces',
+        text: `The plume reaches the surface ${m(end.horizontalDistance)} m from the port with a centreline dilution of ${s(end.dilutionCentreline)} (average ${s(end.dilutionAverage)}); from there it spreads along the surface, which this model does not follow.`,
+      };
     case 'maximum rise':
     case 'lowest point':
     case 'momentum spent':
       if (prev.kind === 'momentum spent' && !neutral) {
-        return { kind: 'falls back on itself', text: `The jet is stopped ${m(end.z)} m above the port with a centreline dilution of ${s(end.dilutionCentreline)} and falls back onto itself (a fountain); the integral model ends there.` };
+        return {
+          kind: 'falls back on itself',
+          text: `The jet is stopped ${m(end.z)} m above the port with a centreline dilution of ${s(end.dilutionCentreline)} and falls back onto itself (a fountain); the integral model ends there.`,
+        };
       }
       return {
         kind: 'trapped',
-        text: `The density layering traps the plume below the surface: it becomes neutrally buoyant ${m(neutral?.z ?? end.z)} m above the port (depth ${m(neutral?.depth ?? end.depth)} m), ` +
+        text:
+          `The density layering traps the plume below the surface: it becomes neutrally buoyant ${m(neutral?.z ?? end.z)} m above the port (depth ${m(neutral?.depth ?? end.depth)} m), ` +
           `overshoots to ${m(end.z)} m and will spread sideways near the neutral level; the centreline dilution at the turning point is ${s(end.dilutionCentreline)}.`,
       };
     case 'bed contact':
-      return { kind: 'reaches bed', text: `${rise}${retText} The centreline reaches the bed ${m(end.horizontalDistance)} m from the port with a centreline dilution of ${s(end.dilutionCentreline)}; beyond it the effluent spreads as a density current on the bed.` };
+      return {
+        kind: 'reaches bed',
+        text: `${rise}${retText} The centreline reaches the bed ${m(end.horizontalDistance)} m from the port with a centreline dilution of ${s(end.dilutionCentreline)}; beyond it the effluent spreads as a density current on the bed.`,
+      };
     case 'return to port level':
-      return { kind: 'returns to port level', text: `${rise}${retText} No bed below the port is known, so the path ends there; the dense effluent then spreads as a current along the bed.` };
+      return {
+        kind: 'returns to port level',
+        text: `${rise}${retText} No bed below the port is known, so the path ends there; the dense effluent then spreads as a current along the bed.`,
+      };
     default:
       return { kind: 'unfinished', text: `${rise} The path ends at ${prev.kind}.` };
   }
@@ -67,19 +95,46 @@ export function pathWarnings(c: WarningContext): string[] {
   const w: string[] = [];
   const find = (k: JetEvent['kind']) => c.events.find((e) => e.kind === k);
   if (c.status === 'step-failed' || c.status === 'max-steps') w.push(`The integration did not finish: ${c.message}.`);
-  if (c.scales.froude < 0.5) w.push(`The port Froude number is very low (${c.scales.froude.toFixed(2)}): ambient water may enter the port and the jet starts as a lazy plume; the model is uncertain near the port.`);
-  const surf = find('edge reaches surface'), surfC = find('surface contact');
-  if (surf && (!surfC || surf.s < surfC.s - 1e-9)) w.push(`The plume's edge touches the surface ${m(surf.horizontalDistance)} m from the port, before its centreline does: surface interaction is not modelled beyond that point.`);
+  if (c.scales.froude < 0.5)
+    w.push(
+      `The port Froude number is very low (${c.scales.froude.toFixed(2)}): ambient water may enter the port and the jet starts as a lazy plume; the model is uncertain near the port.`,
+    );
+  const surf = find('edge reaches surface'),
+    surfC = find('surface contact');
+  if (surf && (!surfC || surf.s < surfC.s - 1e-9))
+    w.push(
+      `The plume's edge touches the surface ${m(surf.horizontalDistance)} m from the port, before its centreline does: surface interaction is not modelled beyond that point.`,
+    );
   const bedEdge = find('edge reaches bed');
-  if (bedEdge) w.push(`The plume's lower edge touches the bed ${m(bedEdge.horizontalDistance)} m from the port: it may attach to the bed, which a free-jet model does not describe.`);
-  if (c.dense && c.angleDeg < 15) w.push('A dense jet aimed less than 15° above horizontal close to the bed may attach to the bed (wall jet); the free-jet result may overstate its dilution.');
+  if (bedEdge)
+    w.push(
+      `The plume's lower edge touches the bed ${m(bedEdge.horizontalDistance)} m from the port: it may attach to the bed, which a free-jet model does not describe.`,
+    );
+  if (c.dense && c.angleDeg < 15)
+    w.push(
+      'A dense jet aimed less than 15° above horizontal close to the bed may attach to the bed (wall jet); the free-jet result may overstate its dilution.',
+    );
   const merge = find('plumes merge');
-  if (merge && !c.merged) w.push(`Neighbouring plumes merge ${m(merge.s)} m along the path (centreline dilution ${s(merge.dilutionCentreline)}): beyond it the single-port dilution is too high; use the merged-diffuser estimate.`);
-  if (merge && c.merged) w.push(`Neighbouring plumes merge ${m(merge.s)} m along the path (centreline dilution ${s(merge.dilutionCentreline)}); beyond it the path is that of a line plume with the merged fluxes per unit diffuser length.`);
-  if (c.current > c.velocity) w.push('The current is faster than the jet: the jet is swept downstream at once and the near-field result depends mostly on the crossflow entrainment coefficient.');
+  if (merge && !c.merged)
+    w.push(
+      `Neighbouring plumes merge ${m(merge.s)} m along the path (centreline dilution ${s(merge.dilutionCentreline)}): beyond it the single-port dilution is too high; use the merged-diffuser estimate.`,
+    );
+  if (merge && c.merged)
+    w.push(
+      `Neighbouring plumes merge ${m(merge.s)} m along the path (centreline dilution ${s(merge.dilutionCentreline)}); beyond it the path is that of a line plume with the merged fluxes per unit diffuser length.`,
+    );
+  if (c.current > c.velocity)
+    w.push(
+      'The current is faster than the jet: the jet is swept downstream at once and the near-field result depends mostly on the crossflow entrainment coefficient.',
+    );
   if (c.dense && c.angleDeg > 15 && c.angleDeg < 80) {
-    w.push('Integral models of this kind under-predict the dilution of inclined dense jets measured in the laboratory by tens of percent (Roberts, Ferrier & Daviero 1997; Kikkert, Davidson & Nokes 2007); the dilutions here err on the low side.');
+    w.push(
+      'Integral models of this kind under-predict the dilution of inclined dense jets measured in the laboratory by tens of percent (Roberts, Ferrier & Daviero 1997; Kikkert, Davidson & Nokes 2007); the dilutions here err on the low side.',
+    );
   }
-  if (c.profileBottom !== undefined && c.portDepth > c.profileBottom) w.push(`The port (depth ${m(c.portDepth)} m) lies below the deepest profile sample (${m(c.profileBottom)} m): the ambient there is extrapolated.`);
+  if (c.profileBottom !== undefined && c.portDepth > c.profileBottom)
+    w.push(
+      `The port (depth ${m(c.portDepth)} m) lies below the deepest profile sample (${m(c.profileBottom)} m): the ambient there is extrapolated.`,
+    );
   return w;
 }

@@ -24,20 +24,34 @@ export interface BoundaryDilution {
 export function dilutionAtBoundary(t: JetTrajectory, boundary: MixingZoneBoundary): BoundaryDilution {
   const R = requireInRange('boundary_distance', boundary.distance, 'm', nonNegative);
   const key = boundary.measure === 'horizontal' ? 'horizontalDistance' : 's';
-  const xs = t.path[key], n = xs.length;
+  const xs = t.path[key],
+    n = xs.length;
   for (let i = 1; i < n; i++) {
     if (xs[i] >= R && xs[i - 1] < R) {
       const f = (R - xs[i - 1]) / (xs[i] - xs[i - 1]);
       const lerp = (c: number[]) => c[i - 1] + f * (c[i] - c[i - 1]);
       return {
-        dilutionCentreline: lerp(t.path.dilutionCentreline), dilutionAverage: lerp(t.path.dilutionAverage), reached: true,
-        pathDistance: lerp(t.path.s), note: `at the boundary, ${R} m ${boundary.measure === 'horizontal' ? 'from the port' : 'along the path'}`,
+        dilutionCentreline: lerp(t.path.dilutionCentreline),
+        dilutionAverage: lerp(t.path.dilutionAverage),
+        reached: true,
+        pathDistance: lerp(t.path.s),
+        note: `at the boundary, ${R} m ${boundary.measure === 'horizontal' ? 'from the port' : 'along the path'}`,
       };
     }
   }
-  if (xs[0] >= R) return { dilutionCentreline: 1, dilutionAverage: 1, reached: true, pathDistance: 0, note: 'the boundary is at the port: no dilution' };
+  if (xs[0] >= R)
+    return {
+      dilutionCentreline: 1,
+      dilutionAverage: 1,
+      reached: true,
+      pathDistance: 0,
+      note: 'the boundary is at the port: no dilution',
+    };
   return {
-    dilutionCentreline: t.path.dilutionCentreline[n - 1], dilutionAverage: t.path.dilutionAverage[n - 1], reached: false, pathDistance: t.path.s[n - 1],
+    dilutionCentreline: t.path.dilutionCentreline[n - 1],
+    dilutionAverage: t.path.dilutionAverage[n - 1],
+    reached: false,
+    pathDistance: t.path.s[n - 1],
     note: `the near field ends (${t.outcome}) before the boundary; far-field mixing up to the boundary is not included`,
   };
 }

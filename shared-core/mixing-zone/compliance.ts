@@ -40,10 +40,22 @@ export interface ComplianceRow {
 }
 
 /** Constituent for a temperature-excess limit: ΔT at the boundary must not exceed maxExcess [degC]. */
-export function temperatureExcessLimit(name: string, effluentTemperature: number, ambientTemperature: number, maxExcess: number): Constituent {
+export function temperatureExcessLimit(
+  name: string,
+  effluentTemperature: number,
+  ambientTemperature: number,
+  maxExcess: number,
+): Constituent {
   const dt = requireInRange('max_temperature_excess', maxExcess, 'degC', { min: 0, minExclusive: true, max: 50 });
   const cool = effluentTemperature < ambientTemperature;
-  return { name, unit: 'degC', effluent: effluentTemperature, ambient: ambientTemperature, criterion: ambientTemperature + (cool ? -dt : dt), limit: cool ? 'minimum' : 'maximum' };
+  return {
+    name,
+    unit: 'degC',
+    effluent: effluentTemperature,
+    ambient: ambientTemperature,
+    criterion: ambientTemperature + (cool ? -dt : dt),
+    limit: cool ? 'minimum' : 'maximum',
+  };
 }
 
 /**
@@ -53,15 +65,22 @@ export function temperatureExcessLimit(name: string, effluentTemperature: number
  * required dilution (far-field mixing not modelled).
  * @param uncertainty relative band [1] (default 0.2: a screening band, common practice, no source)
  */
-export function complianceTable(conditions: readonly ComplianceCondition[], constituents: readonly Constituent[], uncertainty = 0.2): { rows: ComplianceRow[]; caution: string } {
+export function complianceTable(
+  conditions: readonly ComplianceCondition[],
+  constituents: readonly Constituent[],
+  uncertainty = 0.2,
+): { rows: ComplianceRow[]; caution: string } {
   const band = requireInRange('uncertainty', uncertainty, '1', { ...nonNegative, max: 1 });
-  if (!conditions.length) throw new InputError('conditions', 0, '', 'at least one', 'give at least one ambient condition');
-  if (!constituents.length) throw new InputError('constituents', 0, '', 'at least one', 'give at least one constituent');
+  if (!conditions.length)
+    throw new InputError('conditions', 0, '', 'at least one', 'give at least one ambient condition');
+  if (!constituents.length)
+    throw new InputError('constituents', 0, '', 'at least one', 'give at least one constituent');
   const rows: ComplianceRow[] = [];
   for (const cond of conditions) {
-    const bd: BoundaryDilution = typeof cond.dilution === 'number'
-      ? { dilutionCentreline: cond.dilution, dilutionAverage: cond.dilution, reached: true, note: 'dilution given' }
-      : cond.dilution;
+    const bd: BoundaryDilution =
+      typeof cond.dilution === 'number'
+        ? { dilutionCentreline: cond.dilution, dilutionAverage: cond.dilution, reached: true, note: 'dilution given' }
+        : cond.dilution;
     const achieved = requireInRange(`dilution of ${cond.name}`, bd.dilutionCentreline, '1', { min: 1 });
     for (const c of constituents) {
       const ambient = cond.ambient?.[c.name] ?? c.ambient;
@@ -71,11 +90,16 @@ export function complianceTable(conditions: readonly ComplianceCondition[], cons
         req = requiredDilution(c.effluent, ambient, c.criterion, c.limit).value;
       } catch (e) {
         if (!(e instanceof InputError)) throw e;
-        rows.push({ ...base, verdict: 'does not meet', note: `the ambient (${ambient} ${c.unit}) already fails the criterion (${c.criterion} ${c.unit})` });
+        rows.push({
+          ...base,
+          verdict: 'does not meet',
+          note: `the ambient (${ambient} ${c.unit}) already fails the criterion (${c.criterion} ${c.unit})`,
+        });
         continue;
       }
       const margin = achieved / req - 1;
-      let verdict: Verdict = achieved >= req * (1 + band) ? 'meets' : achieved * (1 + band) < req ? 'does not meet' : 'cannot tell';
+      let verdict: Verdict =
+        achieved >= req * (1 + band) ? 'meets' : achieved * (1 + band) < req ? 'does not meet' : 'cannot tell';
       let note = bd.note;
       if (!bd.reached && achieved < req * (1 + band)) {
         verdict = 'cannot tell';

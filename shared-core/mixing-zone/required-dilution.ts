@@ -33,11 +33,22 @@ export function requiredDilution(effluent: number, ambient: number, criterion: n
   const kind: LimitKind = limit ?? (ce < cc && ca > cc ? 'minimum' : 'maximum');
   const sign = kind === 'maximum' ? 1 : -1;
   if (sign * (ce - cc) <= 0) {
-    return { value: 1, unit: '1', method: REQUIRED_DILUTION.id, warnings: ['The effluent already meets the criterion before any dilution.'] };
+    return {
+      value: 1,
+      unit: '1',
+      method: REQUIRED_DILUTION.id,
+      warnings: ['The effluent already meets the criterion before any dilution.'],
+    };
   }
   if (sign * (cc - ca) <= 0) {
     const word = kind === 'maximum' ? 'at or above' : 'at or below';
-    throw new InputError('ambient', ca, '', `${kind === 'maximum' ? 'below' : 'above'} the criterion ${cc}`, `the ambient is already ${word} the criterion (${cc}): no dilution can meet it`);
+    throw new InputError(
+      'ambient',
+      ca,
+      '',
+      `${kind === 'maximum' ? 'below' : 'above'} the criterion ${cc}`,
+      `the ambient is already ${word} the criterion (${cc}): no dilution can meet it`,
+    );
   }
   return { value: (ce - ca) / (cc - ca), unit: '1', method: REQUIRED_DILUTION.id, warnings: [] };
 }

@@ -57,7 +57,15 @@ const A = [
 const B5 = [35 / 384, 0, 500 / 1113, 125 / 192, -2187 / 6784, 11 / 84, 0];
 const E = [71 / 57600, 0, -71 / 16695, 71 / 1920, -17253 / 339200, 22 / 525, -1 / 40];
 /** Shampine's dense-output coefficients for the 4th-order continuous extension. */
-const D = [-12715105075 / 11282082432, 0, 87487479700 / 32700410799, -10690763975 / 1880347072, 701980252875 / 199316789632, -1453857185 / 822651844, 69997945 / 29380423];
+const D = [
+  -12715105075 / 11282082432,
+  0,
+  87487479700 / 32700410799,
+  -10690763975 / 1880347072,
+  701980252875 / 199316789632,
+  -1453857185 / 822651844,
+  69997945 / 29380423,
+];
 
 function axpy(y: readonly number[], h: number, ks: number[][], coeffs: readonly number[]): number[] {
   return y.map((yi, i) => {
@@ -81,18 +89,41 @@ function interpolate(y: readonly number[], y1: readonly number[], ks: number[][]
 }
 
 /** Integrates y' = f(t, y) from t0 to t1 (t1 > t0). Never throws on a failed step: it reports the status. */
-export function solveOde(f: (t: number, y: readonly number[]) => number[], t0: number, y0: readonly number[], t1: number, options: OdeOptions = {}): OdeSolution {
-  const rtol = options.rtol ?? 1e-6, atol = options.atol ?? 1e-9, maxSteps = options.maxSteps ?? 20000;
+export function solveOde(
+  f: (t: number, y: readonly number[]) => number[],
+  t0: number,
+  y0: readonly number[],
+  t1: number,
+  options: OdeOptions = {},
+): OdeSolution {
+  const rtol = options.rtol ?? 1e-6,
+    atol = options.atol ?? 1e-9,
+    maxSteps = options.maxSteps ?? 20000;
   const hMax = options.hMax ?? t1 - t0;
   const events = options.events ?? [];
   let evaluations = 0;
-  const rhs = (t: number, y: readonly number[]) => { evaluations++; return f(t, y); };
-  let t = t0, y = [...y0], h = Math.min(options.h0 ?? (t1 - t0) / 1000, hMax);
+  const rhs = (t: number, y: readonly number[]) => {
+    evaluations++;
+    return f(t, y);
+  };
+  let t = t0,
+    y = [...y0],
+    h = Math.min(options.h0 ?? (t1 - t0) / 1000, hMax);
   let k1 = rhs(t, y);
-  const ts = [t], ys = [[...y]], fired: FiredEvent[] = [];
+  const ts = [t],
+    ys = [[...y]],
+    fired: FiredEvent[] = [];
   let gPrev = events.map((e) => e.g(t, y));
   for (let step = 0; step < maxSteps; step++) {
-    if (t >= t1) return { status: 'completed', message: 'reached the end of the interval', t: ts, y: ys, events: fired, evaluations };
+    if (t >= t1)
+      return {
+        status: 'completed',
+        message: 'reached the end of the interval',
+        t: ts,
+        y: ys,
+        events: fired,
+        evaluations,
+      };
     h = Math.min(h, t1 - t, hMax);
     const ks: number[][] = [k1];
     for (let s = 1; s < 7; s++) ks.push(rhs(t + C[s] * h, axpy(y, h, ks, A[s])));
@@ -105,13 +136,29 @@ export function solveOde(f: (t: number, y: readonly number[]) => number[], t0: n
       err = Math.max(err, Math.abs(h * e) / sc);
     }
     if (!Number.isFinite(err) || y1.some((v) => !Number.isFinite(v))) {
-      if (h < 1e-12 * Math.max(1, Math.abs(t))) return { status: 'step-failed', message: `the equations gave a non-finite value at t = ${t}`, t: ts, y: ys, events: fired, evaluations };
+      if (h < 1e-12 * Math.max(1, Math.abs(t)))
+        return {
+          status: 'step-failed',
+          message: `the equations gave a non-finite value at t = ${t}`,
+          t: ts,
+          y: ys,
+          events: fired,
+          evaluations,
+        };
       h /= 10;
       continue;
     }
     if (err > 1) {
       h *= Math.max(0.2, 0.9 * err ** -0.2);
-      if (h < 1e-12 * Math.max(1, Math.abs(t))) return { status: 'step-failed', message: `step size underflow at t = ${t}`, t: ts, y: ys, events: fired, evaluations };
+      if (h < 1e-12 * Math.max(1, Math.abs(t)))
+        return {
+          status: 'step-failed',
+          message: `step size underflow at t = ${t}`,
+          t: ts,
+          y: ys,
+          events: fired,
+          evaluations,
+        };
       continue;
     }
     const tNew = t + h;
@@ -120,14 +167,19 @@ export function solveOde(f: (t: number, y: readonly number[]) => number[], t0: n
     const gNew = events.map((e) => e.g(tNew, y1));
     const crossings: { i: number; theta: number }[] = [];
     events.forEach((e, i) => {
-      const a = gPrev[i], b = gNew[i], dir = e.direction ?? 'either';
-      const rising = a < 0 && b >= 0, falling = a > 0 && b <= 0;
+      const a = gPrev[i],
+        b = gNew[i],
+        dir = e.direction ?? 'either';
+      const rising = a < 0 && b >= 0,
+        falling = a > 0 && b <= 0;
       if (!((dir !== 'falling' && rising) || (dir !== 'rising' && falling))) return;
-      let lo = 0, hi = 1;
+      let lo = 0,
+        hi = 1;
       for (let it = 0; it < 60; it++) {
         const mid = (lo + hi) / 2;
         const gm = e.g(t + mid * h, interpolate(y, y1, ks, h, mid));
-        if ((gm < 0) === (a < 0)) lo = mid; else hi = mid;
+        if (gm < 0 === a < 0) lo = mid;
+        else hi = mid;
       }
       crossings.push({ i, theta: hi });
     });
@@ -136,15 +188,30 @@ export function solveOde(f: (t: number, y: readonly number[]) => number[], t0: n
       const e = events[c.i];
       const ev = { name: e.name, t: t + c.theta * h, y: interpolate(y, y1, ks, h, c.theta) };
       fired.push(ev);
-      if (e.terminal) { stop = ev; break; }
+      if (e.terminal) {
+        stop = ev;
+        break;
+      }
     }
     if (stop) {
-      ts.push(stop.t); ys.push(stop.y);
+      ts.push(stop.t);
+      ys.push(stop.y);
       return { status: 'terminal-event', message: `stopped at ${stop.name}`, t: ts, y: ys, events: fired, evaluations };
     }
-    t = tNew; y = y1; k1 = ks[6]; gPrev = gNew;
-    ts.push(t); ys.push([...y]);
+    t = tNew;
+    y = y1;
+    k1 = ks[6];
+    gPrev = gNew;
+    ts.push(t);
+    ys.push([...y]);
     h *= Math.min(5, 0.9 * Math.max(err, 1e-10) ** -0.2);
   }
-  return { status: 'max-steps', message: `stopped after ${maxSteps} steps before the end of the interval`, t: ts, y: ys, events: fired, evaluations };
+  return {
+    status: 'max-steps',
+    message: `stopped after ${maxSteps} steps before the end of the interval`,
+    t: ts,
+    y: ys,
+    events: fired,
+    evaluations,
+  };
 }

@@ -3,30 +3,67 @@
  * Source: Brent, R.P. (1973). Algorithms for Minimization without Derivatives, Ch. 4 (zeroin).
  * Returns undefined when the bracket does not hold a sign change.
  */
-export function brentRoot(f: (x: number) => number, a: number, b: number, tol = 1e-12, maxIter = 200): number | undefined {
-  let fa = f(a), fb = f(b);
+export function brentRoot(
+  f: (x: number) => number,
+  a: number,
+  b: number,
+  tol = 1e-12,
+  maxIter = 200,
+): number | undefined {
+  let fa = f(a),
+    fb = f(b);
   if (fa === 0) return a;
   if (fb === 0) return b;
   if (!(fa * fb < 0)) return undefined;
-  let c = a, fc = fa, d = b - a, e = d;
+  let c = a,
+    fc = fa,
+    d = b - a,
+    e = d;
   for (let i = 0; i < maxIter; i++) {
-    if (fb * fc > 0) { c = a; fc = fa; d = b - a; e = d; }
-    if (Math.abs(fc) < Math.abs(fb)) { a = b; b = c; c = a; fa = fb; fb = fc; fc = fa; }
+    if (fb * fc > 0) {
+      c = a;
+      fc = fa;
+      d = b - a;
+      e = d;
+    }
+    if (Math.abs(fc) < Math.abs(fb)) {
+      a = b;
+      b = c;
+      c = a;
+      fa = fb;
+      fb = fc;
+      fc = fa;
+    }
     const tol1 = 2 * Number.EPSILON * Math.abs(b) + 0.5 * tol;
     const m = 0.5 * (c - b);
     if (Math.abs(m) <= tol1 || fb === 0) return b;
     if (Math.abs(e) >= tol1 && Math.abs(fa) > Math.abs(fb)) {
       const s = fb / fa;
       let p: number, q: number;
-      if (a === c) { p = 2 * m * s; q = 1 - s; } else {
-        const qq = fa / fc, r = fb / fc;
+      if (a === c) {
+        p = 2 * m * s;
+        q = 1 - s;
+      } else {
+        const qq = fa / fc,
+          r = fb / fc;
         p = s * (2 * m * qq * (qq - r) - (b - a) * (r - 1));
         q = (qq - 1) * (r - 1) * (s - 1);
       }
-      if (p > 0) q = -q; else p = -p;
-      if (2 * p < Math.min(3 * m * q - Math.abs(tol1 * q), Math.abs(e * q))) { e = d; d = p / q; } else { d = m; e = d; }
-    } else { d = m; e = d; }
-    a = b; fa = fb;
+      if (p > 0) q = -q;
+      else p = -p;
+      if (2 * p < Math.min(3 * m * q - Math.abs(tol1 * q), Math.abs(e * q))) {
+        e = d;
+        d = p / q;
+      } else {
+        d = m;
+        e = d;
+      }
+    } else {
+      d = m;
+      e = d;
+    }
+    a = b;
+    fa = fb;
     b += Math.abs(d) > tol1 ? d : m > 0 ? tol1 : -tol1;
     fb = f(b);
   }
@@ -34,9 +71,15 @@ export function brentRoot(f: (x: number) => number, a: number, b: number, tol = 
 }
 
 /** Expands [a, b] geometrically (upwards in b) until f changes sign; returns the bracket or undefined. */
-export function bracketUpwards(f: (x: number) => number, a: number, b: number, maxB: number): [number, number] | undefined {
+export function bracketUpwards(
+  f: (x: number) => number,
+  a: number,
+  b: number,
+  maxB: number,
+): [number, number] | undefined {
   const fa = f(a);
-  let lo = a, hi = b;
+  let lo = a,
+    hi = b;
   while (hi <= maxB) {
     if (fa * f(hi) <= 0) return [lo, hi];
     lo = hi;

@@ -48,7 +48,8 @@ export function sturmCount(p: TridiagonalPencil, lambda: number): number {
 
 /** Gershgorin-type interval [lo, hi] holding every eigenvalue when B = I. */
 function gershgorin(p: TridiagonalPencil): [number, number] {
-  let lo = Infinity, hi = -Infinity;
+  let lo = Infinity,
+    hi = -Infinity;
   const n = p.diag.length;
   for (let i = 0; i < n; i++) {
     const r = (i > 0 ? Math.abs(p.off[i - 1]) : 0) + (i < n - 1 ? Math.abs(p.off[i]) : 0);
@@ -80,7 +81,8 @@ export function kthEigenvalue(p: TridiagonalPencil, k: number): number {
   for (let i = 0; i < 2000; i++) {
     const mid = 0.5 * (lo + hi);
     if (mid <= lo || mid >= hi || hi - lo <= 4 * Number.EPSILON * Math.max(Math.abs(lo), Math.abs(hi))) break;
-    if (sturmCount(p, mid) >= k) hi = mid; else lo = mid;
+    if (sturmCount(p, mid) >= k) hi = mid;
+    else lo = mid;
   }
   return 0.5 * (lo + hi);
 }
@@ -100,12 +102,19 @@ function solveShifted(p: TridiagonalPencil, sigma: number, r: readonly number[])
     if (Math.abs(below) > Math.abs(a[i])) {
       // swap rows i and i+1
       const [ai, bi, ci, xi] = [a[i], b[i], c[i], x[i]];
-      a[i] = below; b[i] = a[i + 1]; c[i] = b[i + 1]; x[i] = x[i + 1];
+      a[i] = below;
+      b[i] = a[i + 1];
+      c[i] = b[i + 1];
+      x[i] = x[i + 1];
       const m = ai / a[i];
-      a[i + 1] = bi - m * b[i]; b[i + 1] = ci - m * c[i]; x[i + 1] = xi - m * x[i];
+      a[i + 1] = bi - m * b[i];
+      b[i + 1] = ci - m * c[i];
+      x[i + 1] = xi - m * x[i];
     } else {
       const m = a[i] === 0 ? 0 : below / a[i];
-      a[i + 1] -= m * b[i]; b[i + 1] -= m * c[i]; x[i + 1] -= m * x[i];
+      a[i + 1] -= m * b[i];
+      b[i + 1] -= m * c[i];
+      x[i + 1] -= m * x[i];
     }
   }
   for (let i = n - 1; i >= 0; i--) {
@@ -116,7 +125,8 @@ function solveShifted(p: TridiagonalPencil, sigma: number, r: readonly number[])
 }
 
 function normalise(p: TridiagonalPencil, v: number[]): number[] {
-  let norm = 0, big = 0;
+  let norm = 0,
+    big = 0;
   v.forEach((x, i) => {
     norm += x * x * weightAt(p, i);
     if (Math.abs(x) > Math.abs(big)) big = x;
@@ -132,7 +142,14 @@ export function eigenvectorFor(p: TridiagonalPencil, lambda: number): number[] {
   const sigma = lambda * (1 + 64 * Number.EPSILON) + (lambda === 0 ? 1e-300 : 0);
   let v = Array.from({ length: n }, (_, i) => 1 + 0.5 * Math.sin(1.3 * i + 0.7));
   for (let sweep = 0; sweep < 3; sweep++) {
-    v = normalise(p, solveShifted(p, sigma, v.map((x, i) => x * weightAt(p, i))));
+    v = normalise(
+      p,
+      solveShifted(
+        p,
+        sigma,
+        v.map((x, i) => x * weightAt(p, i)),
+      ),
+    );
     if (v.some((x) => !Number.isFinite(x))) throw new RangeError('inverse iteration failed');
   }
   return v;
@@ -141,7 +158,8 @@ export function eigenvectorFor(p: TridiagonalPencil, lambda: number): number[] {
 /** The k smallest eigenpairs of the pencil, in ascending order of eigenvalue. */
 export function lowestEigenpairs(p: TridiagonalPencil, k: number): Eigenpair[] {
   const n = p.diag.length;
-  if (p.off.length !== n - 1 || (p.weight && p.weight.length !== n)) throw new RangeError('inconsistent pencil lengths');
+  if (p.off.length !== n - 1 || (p.weight && p.weight.length !== n))
+    throw new RangeError('inconsistent pencil lengths');
   if (p.weight?.some((w) => !(w >= 0))) throw new RangeError('weights must be non-negative');
   return Array.from({ length: Math.min(k, n) }, (_, i) => {
     const value = kthEigenvalue(p, i + 1);

@@ -2,7 +2,16 @@ import { num } from '../calc/resolve';
 import { arg, type CalcMethod } from '../calc/types';
 import { InputError } from '../core/errors';
 import { DENSITY_METHODS } from '../water/density';
-import { n2Profile, mixedLayerDepth, thermoclineDepth, twoLayerFit, stabilityFlags, MIXED_LAYER_THRESHOLD, THERMOCLINE_MAX_GRADIENT, TWO_LAYER_FIT } from './stratification';
+import {
+  n2Profile,
+  mixedLayerDepth,
+  thermoclineDepth,
+  twoLayerFit,
+  stabilityFlags,
+  MIXED_LAYER_THRESHOLD,
+  THERMOCLINE_MAX_GRADIENT,
+  TWO_LAYER_FIT,
+} from './stratification';
 import type { Profile } from './profile';
 import type { CalcOutput, Series } from '../calc/types';
 
@@ -13,10 +22,17 @@ export function summariseProfile(p: Profile): CalcOutput {
   const fit = twoLayerFit(p);
   const n2 = n2Profile(p).n2;
   const warnings = [...p.warnings, ...fit.warnings];
-  if (mld.mixedToBottom) warnings.push('The density never exceeds the surface value by 0.03 kg/m³: the column is mixed to the bottom.');
-  if (th.weak) warnings.push(`The largest density gradient is ${th.gradient.toFixed(3)} kg/m³ per m, below 0.1: there is no distinct thermocline.`);
+  if (mld.mixedToBottom)
+    warnings.push('The density never exceeds the surface value by 0.03 kg/m³: the column is mixed to the bottom.');
+  if (th.weak)
+    warnings.push(
+      `The largest density gradient is ${th.gradient.toFixed(3)} kg/m³ per m, below 0.1: there is no distinct thermocline.`,
+    );
   const unstable = stabilityFlags(p).filter((f) => f.stability === 'unstable');
-  for (const f of unstable) warnings.push(`Density inversion between ${f.top} m and ${f.bottom} m (N² = ${f.n2.toExponential(2)} 1/s²): unstable or a sensor error.`);
+  for (const f of unstable)
+    warnings.push(
+      `Density inversion between ${f.top} m and ${f.bottom} m (N² = ${f.n2.toExponential(2)} 1/s²): unstable or a sensor error.`,
+    );
   return {
     results: {
       mixed_layer_depth: num(mld.value, 'm'),
@@ -28,7 +44,12 @@ export function summariseProfile(p: Profile): CalcOutput {
       g_prime: num(fit.gPrime, 'm/s2'),
     },
     warnings,
-    sources: [DENSITY_METHODS[p.eos].source, MIXED_LAYER_THRESHOLD.source, THERMOCLINE_MAX_GRADIENT.source, TWO_LAYER_FIT.source],
+    sources: [
+      DENSITY_METHODS[p.eos].source,
+      MIXED_LAYER_THRESHOLD.source,
+      THERMOCLINE_MAX_GRADIENT.source,
+      TWO_LAYER_FIT.source,
+    ],
     series: profileSeries(p),
   };
 }
@@ -38,12 +59,44 @@ export function profileSeries(p: Profile): Series[] {
   const depth = { label: 'Depth', unit: 'm', values: [...p.depth] };
   const n2 = n2Profile(p);
   const out: Series[] = [
-    { title: 'Temperature', x: depth, y: [{ label: 'Temperature', unit: 'degC', values: [...p.temperature] }], depthAxis: true, caption: 'Measured temperature against depth' },
-    { title: 'Density', x: depth, y: [{ label: 'Density', unit: 'kg/m3', values: [...p.density] }], depthAxis: true, caption: `Potential density (${p.eos}) against depth` },
-    { title: 'Buoyancy frequency squared', x: { label: 'Depth', unit: 'm', values: n2.depth }, y: [{ label: 'N²', unit: '1/s2', values: n2.n2 }], depthAxis: true, caption: 'N² between samples, at mid-depths' },
+    {
+      title: 'Temperature',
+      x: depth,
+      y: [{ label: 'Temperature', unit: 'degC', values: [...p.temperature] }],
+      depthAxis: true,
+      caption: 'Measured temperature against depth',
+    },
+    {
+      title: 'Density',
+      x: depth,
+      y: [{ label: 'Density', unit: 'kg/m3', values: [...p.density] }],
+      depthAxis: true,
+      caption: `Potential density (${p.eos}) against depth`,
+    },
+    {
+      title: 'Buoyancy frequency squared',
+      x: { label: 'Depth', unit: 'm', values: n2.depth },
+      y: [{ label: 'N²', unit: '1/s2', values: n2.n2 }],
+      depthAxis: true,
+      caption: 'N² between samples, at mid-depths',
+    },
   ];
-  if (p.salinity.some((s) => s > 0)) out.splice(1, 0, { title: 'Salinity', x: depth, y: [{ label: 'Salinity', unit: 'PSU', values: [...p.salinity] }], depthAxis: true, caption: 'Measured practical salinity against depth' });
-  for (const c of p.extra) out.push({ title: c.name, x: depth, y: [{ label: c.name, unit: c.unit || '1', values: [...c.values] }], depthAxis: true, caption: `${c.name} against depth` });
+  if (p.salinity.some((s) => s > 0))
+    out.splice(1, 0, {
+      title: 'Salinity',
+      x: depth,
+      y: [{ label: 'Salinity', unit: 'PSU', values: [...p.salinity] }],
+      depthAxis: true,
+      caption: 'Measured practical salinity against depth',
+    });
+  for (const c of p.extra)
+    out.push({
+      title: c.name,
+      x: depth,
+      y: [{ label: c.name, unit: c.unit || '1', values: [...c.values] }],
+      depthAxis: true,
+      caption: `${c.name} against depth`,
+    });
   return out;
 }
 
@@ -52,7 +105,14 @@ export const profileCalcMethods: CalcMethod[] = [
     id: 'profile-summary',
     title: 'Stratification summary of a measured profile',
     topic: 'profile',
-    params: [{ kind: 'profile', name: 'file', description: 'path to a CSV profile (depth or elevation, temperature, optional salinity, sediment, extra columns)' }],
+    params: [
+      {
+        kind: 'profile',
+        name: 'file',
+        description:
+          'path to a CSV profile (depth or elevation, temperature, optional salinity, sediment, extra columns)',
+      },
+    ],
     results: [
       { name: 'mixed_layer_depth', unit: 'm', description: 'density-threshold mixed-layer depth' },
       { name: 'thermocline_depth', unit: 'm', description: 'depth of the largest density gradient' },

@@ -15,8 +15,20 @@ const ROLE_PATTERNS: [Role, RegExp][] = [
   ['sediment', /^(sediment|ssc|tss|suspended_?(sediment|solids)|sed)$/i],
 ];
 
-const SI_UNIT: Record<Role, string> = { depth: 'm', elevation: 'm', temperature: 'degC', salinity: 'PSU', sediment: 'kg/m3' };
-const DEFAULT_UNIT: Record<Role, string> = { depth: 'm', elevation: 'm', temperature: 'degC', salinity: 'PSU', sediment: 'kg/m3' };
+const SI_UNIT: Record<Role, string> = {
+  depth: 'm',
+  elevation: 'm',
+  temperature: 'degC',
+  salinity: 'PSU',
+  sediment: 'kg/m3',
+};
+const DEFAULT_UNIT: Record<Role, string> = {
+  depth: 'm',
+  elevation: 'm',
+  temperature: 'degC',
+  salinity: 'PSU',
+  sediment: 'kg/m3',
+};
 
 export interface ParsedHeader {
   name: string;
@@ -31,7 +43,11 @@ export function parseHeader(header: string): ParsedHeader {
   const spaced = /^(.*\S)\s+(\S*[/°%]\S*|m|ft|psu|ppt|degC|degF|C|F)$/i.exec(h);
   if (spaced) return { name: spaced[1].trim(), unit: spaced[2].trim() };
   const suffix = /^(.*?)_(m|ft|degc|degf|c|f|psu|ppt|mgl|kgm3)$/i.exec(h);
-  if (suffix) return { name: suffix[1], unit: ({ mgl: 'mg/L', kgm3: 'kg/m3' } as Record<string, string>)[suffix[2].toLowerCase()] ?? suffix[2] };
+  if (suffix)
+    return {
+      name: suffix[1],
+      unit: ({ mgl: 'mg/L', kgm3: 'kg/m3' } as Record<string, string>)[suffix[2].toLowerCase()] ?? suffix[2],
+    };
   return { name: h, unit: '' };
 }
 
@@ -64,11 +80,18 @@ export interface ProfileTable {
  * with # ignored. With a separator other than a comma, decimal commas are turned into points.
  */
 export function readCsvTable(text: string): ProfileTable {
-  const body = text.replace(/^\uFEFF/, '').split(/\r?\n/).filter((l) => !/^\s*#/.test(l)).join('\n');
+  const body = text
+    .replace(/^\uFEFF/, '')
+    .split(/\r?\n/)
+    .filter((l) => !/^\s*#/.test(l))
+    .join('\n');
   const parsed = Papa.parse<string[]>(body, { skipEmptyLines: 'greedy', delimitersToGuess: [',', ';', '\t', '|'] });
   const [header = [], ...data] = parsed.data;
   const decimalComma = parsed.meta.delimiter !== ',';
-  return { columns: header.map((h) => h.trim()), rows: data.map((r) => r.map((c) => (decimalComma ? c.replace(',', '.') : c))) };
+  return {
+    columns: header.map((h) => h.trim()),
+    rows: data.map((r) => r.map((c) => (decimalComma ? c.replace(',', '.') : c))),
+  };
 }
 
 /**
@@ -81,15 +104,26 @@ export function parseProfileCsv(text: string, options: CsvProfileOptions = {}): 
 
 /** Builds a Profile from a table of header texts and cells, converting every unit to SI. */
 export function profileFromTable(table: ProfileTable, options: CsvProfileOptions = {}): Profile {
-  if (table.rows.length < 2) throw new ProfileError([{ row: 0, column: '(file)', message: 'needs a header line and at least 2 data rows' }]);
+  if (table.rows.length < 2)
+    throw new ProfileError([{ row: 0, column: '(file)', message: 'needs a header line and at least 2 data rows' }]);
   const headers = table.columns.map(parseHeader);
   const issues: ProfileIssue[] = [];
   const roles = headers.map((h) => roleOf(h.name));
   const find = (r: Role) => roles.indexOf(r);
   const depthCol = find('depth') >= 0 ? find('depth') : find('elevation');
   const tempCol = find('temperature');
-  if (depthCol < 0) issues.push({ row: 0, column: '(header)', message: `no depth or elevation column among: ${headers.map((h) => h.name).join(', ')}` });
-  if (tempCol < 0) issues.push({ row: 0, column: '(header)', message: `no temperature column among: ${headers.map((h) => h.name).join(', ')}` });
+  if (depthCol < 0)
+    issues.push({
+      row: 0,
+      column: '(header)',
+      message: `no depth or elevation column among: ${headers.map((h) => h.name).join(', ')}`,
+    });
+  if (tempCol < 0)
+    issues.push({
+      row: 0,
+      column: '(header)',
+      message: `no temperature column among: ${headers.map((h) => h.name).join(', ')}`,
+    });
   if (issues.length) throw new ProfileError(issues);
 
   const data = table.rows;
@@ -98,7 +132,11 @@ export function profileFromTable(table: ProfileTable, options: CsvProfileOptions
     const h = headers[c];
     return data.map((r, i) => {
       if (r.length !== headers.length) {
-        issues.push({ row: i + 1, column: h.name, message: `has ${r.length} fields, the header has ${headers.length}` });
+        issues.push({
+          row: i + 1,
+          column: h.name,
+          message: `has ${r.length} fields, the header has ${headers.length}`,
+        });
         return NaN;
       }
       const cell = r[c];
@@ -123,20 +161,33 @@ export function profileFromTable(table: ProfileTable, options: CsvProfileOptions
     depth = depth.map((z) => surface - z);
   }
   const col = (r: Role) => (find(r) >= 0 ? column(find(r)) : undefined);
-  const temperature = column(tempCol), salinity = col('salinity'), sediment = col('sediment');
-  const extra: ProfileColumn[] = headers.flatMap((h, c) => (roles[c] ? [] : [{ name: h.name, unit: h.unit, values: column(c) }]));
+  const temperature = column(tempCol),
+    salinity = col('salinity'),
+    sediment = col('sediment');
+  const extra: ProfileColumn[] = headers.flatMap((h, c) =>
+    roles[c] ? [] : [{ name: h.name, unit: h.unit, values: column(c) }],
+  );
   if (issues.length) throw new ProfileError(dedupe(issues));
   // sort by depth when the table is ordered bottom-up (elevation tables usually are)
   const order = depth.map((_, i) => i);
   if (depth.length > 1 && depth[0] > depth[depth.length - 1]) order.reverse();
   const pick = (v: number[] | undefined) => v && order.map((i) => v[i]);
   return makeProfile({
-    depth: pick(depth)!, temperature: pick(temperature)!, salinity: pick(salinity), sediment: pick(sediment),
-    extra: extra.map((e) => ({ ...e, values: pick(e.values)! })), eos: options.eos,
+    depth: pick(depth)!,
+    temperature: pick(temperature)!,
+    salinity: pick(salinity),
+    sediment: pick(sediment),
+    extra: extra.map((e) => ({ ...e, values: pick(e.values)! })),
+    eos: options.eos,
   });
 }
 
 function dedupe(issues: ProfileIssue[]): ProfileIssue[] {
   const seen = new Set<string>();
-  return issues.filter((i) => { const k = `${i.row}|${i.column}|${i.message}`; if (seen.has(k)) return false; seen.add(k); return true; });
+  return issues.filter((i) => {
+    const k = `${i.row}|${i.column}|${i.message}`;
+    if (seen.has(k)) return false;
+    seen.add(k);
+    return true;
+  });
 }

@@ -43,7 +43,13 @@ export interface ProfileIssue {
 export class ProfileError extends Error {
   readonly issues: ProfileIssue[];
   constructor(issues: ProfileIssue[]) {
-    super(issues.map((i) => (i.row > 0 ? `row ${i.row}, column "${i.column}": ${i.message}` : `column "${i.column}": ${i.message}`)).join('\n'));
+    super(
+      issues
+        .map((i) =>
+          i.row > 0 ? `row ${i.row}, column "${i.column}": ${i.message}` : `column "${i.column}": ${i.message}`,
+        )
+        .join('\n'),
+    );
     this.name = 'ProfileError';
     this.issues = issues;
   }
@@ -64,7 +70,12 @@ function checkColumn(name: keyof typeof LIMITS, values: readonly number[], n: nu
   const { min, max, unit } = LIMITS[name];
   values.forEach((v, i) => {
     if (!Number.isFinite(v)) issues.push({ row: i + 1, column: name, message: 'value is missing or not a number' });
-    else if (v < min || v > max) issues.push({ row: i + 1, column: name, message: `${v} ${unit} is physically impossible here (allowed ${min} … ${max} ${unit})` });
+    else if (v < min || v > max)
+      issues.push({
+        row: i + 1,
+        column: name,
+        message: `${v} ${unit} is physically impossible here (allowed ${min} … ${max} ${unit})`,
+      });
   });
 }
 
@@ -80,21 +91,35 @@ export function makeProfile(input: ProfileInput): Profile {
   checkColumn('salinity', salinity, n, issues);
   checkColumn('sediment', sediment, n, issues);
   for (let i = 1; i < n; i++) {
-    const a = input.depth[i - 1], b = input.depth[i];
+    const a = input.depth[i - 1],
+      b = input.depth[i];
     if (a === b) issues.push({ row: i + 1, column: 'depth', message: `duplicate depth ${b} m (same as row ${i})` });
-    else if (b < a) issues.push({ row: i + 1, column: 'depth', message: `depth ${b} m is shallower than the row above (${a} m); depths must increase` });
+    else if (b < a)
+      issues.push({
+        row: i + 1,
+        column: 'depth',
+        message: `depth ${b} m is shallower than the row above (${a} m); depths must increase`,
+      });
   }
   for (const col of input.extra ?? []) {
-    if (col.values.length !== n) issues.push({ row: 0, column: col.name, message: `has ${col.values.length} values but depth has ${n}` });
+    if (col.values.length !== n)
+      issues.push({ row: 0, column: col.name, message: `has ${col.values.length} values but depth has ${n}` });
     col.values.forEach((v, i) => {
-      if (!Number.isFinite(v)) issues.push({ row: i + 1, column: col.name, message: 'value is missing or not a number' });
+      if (!Number.isFinite(v))
+        issues.push({ row: i + 1, column: col.name, message: 'value is missing or not a number' });
     });
   }
   if (issues.length) throw new ProfileError(issues);
   const hasSalt = salinity.some((s) => s > 0);
   const eos = input.eos ?? defaultEos(hasSalt ? 1 : 0);
   if (eos === 'fresh' && hasSalt) {
-    throw new InputError('eos', eos, '', 'eos80 or teos10 for a salty profile', 'the profile has salinity above 0; choose eos80 or teos10');
+    throw new InputError(
+      'eos',
+      eos,
+      '',
+      'eos80 or teos10 for a salty profile',
+      'the profile has salinity above 0; choose eos80 or teos10',
+    );
   }
   const warnings = new Set<string>();
   const density = input.depth.map((_, i) => {
@@ -103,8 +128,14 @@ export function makeProfile(input: ProfileInput): Profile {
     return r.value;
   });
   return {
-    depth: [...input.depth], temperature: [...input.temperature], salinity: [...salinity], sediment: [...sediment],
-    extra: (input.extra ?? []).map((c) => ({ ...c, values: [...c.values] })), eos, density, warnings: [...warnings],
+    depth: [...input.depth],
+    temperature: [...input.temperature],
+    salinity: [...salinity],
+    sediment: [...sediment],
+    extra: (input.extra ?? []).map((c) => ({ ...c, values: [...c.values] })),
+    eos,
+    density,
+    warnings: [...warnings],
   };
 }
 
@@ -113,10 +144,12 @@ export function interpolateAt(depths: readonly number[], values: readonly number
   const n = depths.length;
   if (d <= depths[0]) return values[0];
   if (d >= depths[n - 1]) return values[n - 1];
-  let lo = 0, hi = n - 1;
+  let lo = 0,
+    hi = n - 1;
   while (hi - lo > 1) {
     const mid = (lo + hi) >> 1;
-    if (depths[mid] <= d) lo = mid; else hi = mid;
+    if (depths[mid] <= d) lo = mid;
+    else hi = mid;
   }
   const f = (d - depths[lo]) / (depths[hi] - depths[lo]);
   return values[lo] + f * (values[hi] - values[lo]);

@@ -11,7 +11,8 @@ export interface N2Profile {
 
 /** Squared buoyancy frequency between consecutive samples, N² = (g/ρ̄) Δρ/Δd (depth positive down). */
 export function n2Profile(p: Profile): N2Profile {
-  const depth: number[] = [], n2: number[] = [];
+  const depth: number[] = [],
+    n2: number[] = [];
   for (let i = 1; i < p.depth.length; i++) {
     depth.push((p.depth[i - 1] + p.depth[i]) / 2);
     n2.push(buoyancyFrequencySquared(p.density[i - 1], p.density[i], p.depth[i - 1], p.depth[i]));
@@ -35,7 +36,9 @@ export interface StabilityFlag {
 export function stabilityFlags(p: Profile): StabilityFlag[] {
   const { n2 } = n2Profile(p);
   return n2.map((v, i) => ({
-    top: p.depth[i], bottom: p.depth[i + 1], n2: v,
+    top: p.depth[i],
+    bottom: p.depth[i + 1],
+    n2: v,
     stability: v > NEUTRAL_N2 ? 'stable' : v < -NEUTRAL_N2 ? 'unstable' : 'neutral',
   }));
 }
@@ -58,9 +61,13 @@ export function mixedLayerDepth(p: Profile, deltaRho = 0.03): { value: number; m
   const ref = p.density[0];
   for (let i = 1; i < p.depth.length; i++) {
     if (p.density[i] - ref >= deltaRho) {
-      const a = p.density[i - 1] - ref, b = p.density[i] - ref;
+      const a = p.density[i - 1] - ref,
+        b = p.density[i] - ref;
       const f = b === a ? 0 : (deltaRho - a) / (b - a);
-      return { value: p.depth[i - 1] + Math.max(0, Math.min(1, f)) * (p.depth[i] - p.depth[i - 1]), mixedToBottom: false };
+      return {
+        value: p.depth[i - 1] + Math.max(0, Math.min(1, f)) * (p.depth[i] - p.depth[i - 1]),
+        mixedToBottom: false,
+      };
     }
   }
   return { value: p.depth[p.depth.length - 1], mixedToBottom: true };
@@ -82,12 +89,20 @@ export const MIN_THERMOCLINE_GRADIENT = 0.1;
 
 /** Thermocline depth [m] at the largest density gradient; `weak` when that gradient is below 0.1 kg/m³/m. */
 export function thermoclineDepth(p: Profile): { value: number; gradient: number; weak: boolean } {
-  let best = 0, bestGrad = -Infinity;
+  let best = 0,
+    bestGrad = -Infinity;
   for (let i = 1; i < p.depth.length; i++) {
     const g = (p.density[i] - p.density[i - 1]) / (p.depth[i] - p.depth[i - 1]);
-    if (g > bestGrad) { bestGrad = g; best = i; }
+    if (g > bestGrad) {
+      bestGrad = g;
+      best = i;
+    }
   }
-  return { value: (p.depth[best - 1] + p.depth[best]) / 2, gradient: bestGrad, weak: bestGrad < MIN_THERMOCLINE_GRADIENT };
+  return {
+    value: (p.depth[best - 1] + p.depth[best]) / 2,
+    gradient: bestGrad,
+    weak: bestGrad < MIN_THERMOCLINE_GRADIENT,
+  };
 }
 
 export const TWO_LAYER_FIT: MethodInfo = {
@@ -117,23 +132,43 @@ export interface TwoLayerFit {
  * Caution: a two-layer reduction overestimates first-mode internal wave speeds for smooth thermoclines.
  */
 export function twoLayerFit(p: Profile, cells = 400): TwoLayerFit {
-  const top = p.depth[0], bottom = p.depth[p.depth.length - 1], dz = (bottom - top) / cells;
+  const top = p.depth[0],
+    bottom = p.depth[p.depth.length - 1],
+    dz = (bottom - top) / cells;
   const rho = Array.from({ length: cells }, (_, i) => interpolateAt(p.depth, p.density, top + (i + 0.5) * dz));
-  const s1 = [0], s2 = [0];
-  for (const r of rho) { s1.push(s1[s1.length - 1] + r); s2.push(s2[s2.length - 1] + r * r); }
+  const s1 = [0],
+    s2 = [0];
+  for (const r of rho) {
+    s1.push(s1[s1.length - 1] + r);
+    s2.push(s2[s2.length - 1] + r * r);
+  }
   const sse = (a: number, b: number) => s2[b] - s2[a] - (s1[b] - s1[a]) ** 2 / (b - a);
-  let bestK = 1, best = Infinity;
+  let bestK = 1,
+    best = Infinity;
   for (let k = 1; k < cells; k++) {
     const e = sse(0, k) + sse(k, cells);
-    if (e < best - 1e-12) { best = e; bestK = k; }
+    if (e < best - 1e-12) {
+      best = e;
+      bestK = k;
+    }
   }
-  const rhoUpper = (s1[bestK] - s1[0]) / bestK, rhoLower = (s1[cells] - s1[bestK]) / (cells - bestK);
+  const rhoUpper = (s1[bestK] - s1[0]) / bestK,
+    rhoLower = (s1[cells] - s1[bestK]) / (cells - bestK);
   const warnings: string[] = [];
   const contrast = rhoLower - rhoUpper;
-  if (contrast < 0.01) warnings.push(`The fitted layers differ by only ${contrast.toFixed(4)} kg/m³: the column is nearly mixed and a two-layer model is not meaningful.`);
-  warnings.push('A two-layer reduction of a smooth profile overestimates first-mode internal wave speeds by a few % to ≈10 %; where the profile is measured, the vertical-mode solution is the reference.');
+  if (contrast < 0.01)
+    warnings.push(
+      `The fitted layers differ by only ${contrast.toFixed(4)} kg/m³: the column is nearly mixed and a two-layer model is not meaningful.`,
+    );
+  warnings.push(
+    'A two-layer reduction of a smooth profile overestimates first-mode internal wave speeds by a few % to ≈10 %; where the profile is measured, the vertical-mode solution is the reference.',
+  );
   return {
-    upperThickness: top + bestK * dz, lowerThickness: (cells - bestK) * dz, rhoUpper, rhoLower,
-    gPrime: (GRAVITY * contrast) / rhoLower, warnings,
+    upperThickness: top + bestK * dz,
+    lowerThickness: (cells - bestK) * dz,
+    rhoUpper,
+    rhoLower,
+    gPrime: (GRAVITY * contrast) / rhoLower,
+    warnings,
   };
 }

@@ -8,7 +8,11 @@ import { prettyUnit, slug } from './format';
  */
 
 /** Line and marker styles that stay distinguishable in grayscale: dash pattern and marker differ too. */
-export const LINE_STYLES: readonly { color: string; dash: readonly number[]; marker: 'circle' | 'rect' | 'triangle' | 'crossRot' | 'rectRot' | 'star' }[] = [
+export const LINE_STYLES: readonly {
+  color: string;
+  dash: readonly number[];
+  marker: 'circle' | 'rect' | 'triangle' | 'crossRot' | 'rectRot' | 'star';
+}[] = [
   { color: '#1f4e9c', dash: [], marker: 'circle' },
   { color: '#c0392b', dash: [8, 4], marker: 'rect' },
   { color: '#2e7d32', dash: [2, 3], marker: 'triangle' },
@@ -46,7 +50,6 @@ export interface ChartSpec {
   /** the chart's data as a table: header and rows in display units (null = no value) */
   table: { header: string[]; rows: (number | null)[][] };
 }
-
 
 function axisTitle(label: string, unit: string): string {
   return unit ? `${label} (${unit})` : label;

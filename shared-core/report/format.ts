@@ -4,9 +4,27 @@
  */
 
 const PRETTY_UNITS: Record<string, string> = {
-  '1': '', degC: '°C', degF: '°F', deg: '°', 'm3/s': 'm³/s', 'kg/m3': 'kg/m³', 'm/s2': 'm/s²', 'm2/s': 'm²/s', m2: 'm²', m3: 'm³',
-  '1/s2': 's⁻²', '1/s': 's⁻¹', 'ft3/s': 'ft³/s', 'ft2/s': 'ft²/s', 'ft/s2': 'ft/s²', 'lb/ft3': 'lb/ft³', ft2: 'ft²', ft3: 'ft³',
-  'm4/s3': 'm⁴/s³', 'm3/s3': 'm³/s³', 'm4/s2': 'm⁴/s²',
+  '1': '',
+  degC: '°C',
+  degF: '°F',
+  deg: '°',
+  'm3/s': 'm³/s',
+  'kg/m3': 'kg/m³',
+  'm/s2': 'm/s²',
+  'm2/s': 'm²/s',
+  m2: 'm²',
+  m3: 'm³',
+  '1/s2': 's⁻²',
+  '1/s': 's⁻¹',
+  'ft3/s': 'ft³/s',
+  'ft2/s': 'ft²/s',
+  'ft/s2': 'ft/s²',
+  'lb/ft3': 'lb/ft³',
+  ft2: 'ft²',
+  ft3: 'ft³',
+  'm4/s3': 'm⁴/s³',
+  'm3/s3': 'm³/s³',
+  'm4/s2': 'm⁴/s²',
 };
 
 /** A unit name as typeset in a report ("m3/s" → "m³/s", "degC" → "°C", "1" → ""). */
@@ -15,7 +33,19 @@ export function prettyUnit(unit: string): string {
   return unit.replace(/([a-zA-Z])2(?![\d.])/g, '$1²').replace(/([a-zA-Z])3(?![\d.])/g, '$1³');
 }
 
-const SUPERSCRIPT: Record<string, string> = { '-': '⁻', '0': '⁰', '1': '¹', '2': '²', '3': '³', '4': '⁴', '5': '⁵', '6': '⁶', '7': '⁷', '8': '⁸', '9': '⁹' };
+const SUPERSCRIPT: Record<string, string> = {
+  '-': '⁻',
+  '0': '⁰',
+  '1': '¹',
+  '2': '²',
+  '3': '³',
+  '4': '⁴',
+  '5': '⁵',
+  '6': '⁶',
+  '7': '⁷',
+  '8': '⁸',
+  '9': '⁹',
+};
 
 /**
  * A number rounded to `digits` significant figures for tables and captions: 997.5, 0.3936, 21341,
@@ -30,7 +60,10 @@ export function formatValue(x: number, digits = 4): string {
   if (a >= 1e6 || a < 1e-3) {
     const [mantissa, exponent] = a.toExponential(digits - 1).split('e');
     const m = mantissa.includes('.') ? mantissa.replace(/\.?0+$/, '') : mantissa;
-    const e = String(Number(exponent)).split('').map((c) => SUPERSCRIPT[c] ?? c).join('');
+    const e = String(Number(exponent))
+      .split('')
+      .map((c) => SUPERSCRIPT[c] ?? c)
+      .join('');
     return `${sign}${m}×10${e}`;
   }
   if (a >= 10 ** digits) return sign + String(Math.round(a));

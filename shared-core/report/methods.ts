@@ -45,17 +45,57 @@ import * as uncertainty from '../uncertainty/propagate';
  * test/report/methods.test.ts checks that every descriptor in shared-core is found here.
  */
 const MODULES: readonly Record<string, unknown>[] = [
-  water1, water2, water3, water4, water5, water6, profile, gravity1, gravity2, gravity3, gravity4,
-  estuary1, estuary2, estuary3, estuary4, estuary5, estuary6, waves1, waves2, waves3, hydraulics1, hydraulics2, hydraulics3, hydraulics4,
-  withdrawal1, withdrawal2, withdrawal3, withdrawal4, withdrawal5, withdrawal6, jets1, jets2, jets3, jets4,
-  inflows1, inflows2, inflows3, mixing, uncertainty,
+  water1,
+  water2,
+  water3,
+  water4,
+  water5,
+  water6,
+  profile,
+  gravity1,
+  gravity2,
+  gravity3,
+  gravity4,
+  estuary1,
+  estuary2,
+  estuary3,
+  estuary4,
+  estuary5,
+  estuary6,
+  waves1,
+  waves2,
+  waves3,
+  hydraulics1,
+  hydraulics2,
+  hydraulics3,
+  hydraulics4,
+  withdrawal1,
+  withdrawal2,
+  withdrawal3,
+  withdrawal4,
+  withdrawal5,
+  withdrawal6,
+  jets1,
+  jets2,
+  jets3,
+  jets4,
+  inflows1,
+  inflows2,
+  inflows3,
+  mixing,
+  uncertainty,
 ];
 
 function isMethodInfo(x: unknown): x is MethodInfo {
   if (typeof x !== 'object' || x === null) return false;
   const m = x as Record<string, unknown>;
-  return typeof m.id === 'string' && typeof m.title === 'string' && typeof m.source === 'string' &&
-    typeof m.equation === 'string' && typeof m.validity === 'object';
+  return (
+    typeof m.id === 'string' &&
+    typeof m.title === 'string' &&
+    typeof m.source === 'string' &&
+    typeof m.equation === 'string' &&
+    typeof m.validity === 'object'
+  );
 }
 
 /** Every descriptor, in a stable order (module order, then export name), without duplicates. */

@@ -59,7 +59,12 @@ export interface UncertaintySection {
   /** each varied input: nominal value and its standard uncertainty */
   inputs: { name: string; nominal: string; standardUncertainty: string; unit: string }[];
   /** per numeric result: nominal, low, median and high, typeset, with the numbers in display units */
-  rows: { name: string; unit: string; shown: [string, string, string, string]; values: [number, number, number, number] }[];
+  rows: {
+    name: string;
+    unit: string;
+    shown: [string, string, string, string];
+    values: [number, number, number, number];
+  }[];
   warnings: string[];
 }
 
@@ -93,12 +98,24 @@ export interface ReportModel {
 }
 
 function quantity(name: string, description: string, v: ResultValue, units: UnitSystem): QuantityRow {
-  if (typeof v.value !== 'number') return { name, description, value: v.value, unit: '', shown: v.value, shownUnit: '' };
+  if (typeof v.value !== 'number')
+    return { name, description, value: v.value, unit: '', shown: v.value, shownUnit: '' };
   const d = toDisplay(v.value, v.unit, units);
-  return { name, description, value: d.value, unit: d.unit, shown: formatValue(d.value), shownUnit: prettyUnit(d.unit) };
+  return {
+    name,
+    description,
+    value: d.value,
+    unit: d.unit,
+    shown: formatValue(d.value),
+    shownUnit: prettyUnit(d.unit),
+  };
 }
 
-function quantities(values: Record<string, ResultValue>, describe: (name: string) => string, units: UnitSystem): QuantityRow[] {
+function quantities(
+  values: Record<string, ResultValue>,
+  describe: (name: string) => string,
+  units: UnitSystem,
+): QuantityRow[] {
   return Object.entries(values).map(([name, v]) => quantity(name, describe(name), v, units));
 }
 
@@ -118,11 +135,26 @@ function uncertaintySection(e: EstimateOutcome, units: UnitSystem): UncertaintyS
       const nominal = e.inputs[i.name];
       const siUnit = nominal?.unit ?? '1';
       const d = typeof nominal?.value === 'number' ? toDisplay(nominal.value, siUnit, units) : undefined;
-      return { name: i.name, nominal: d ? formatValue(d.value) : '', standardUncertainty: formatValue(spreadToDisplay(i.standardUncertainty, siUnit, units)), unit: prettyUnit(d?.unit ?? siUnit) };
+      return {
+        name: i.name,
+        nominal: d ? formatValue(d.value) : '',
+        standardUncertainty: formatValue(spreadToDisplay(i.standardUncertainty, siUnit, units)),
+        unit: prettyUnit(d?.unit ?? siUnit),
+      };
     }),
     rows: r.bands.map((b) => {
-      const values = [b.nominal, b.low, b.median, b.high].map((v) => toDisplay(v, b.unit, units).value) as [number, number, number, number];
-      return { name: b.name, unit: prettyUnit(toDisplay(0, b.unit, units).unit), shown: values.map((v) => formatValue(v)) as [string, string, string, string], values };
+      const values = [b.nominal, b.low, b.median, b.high].map((v) => toDisplay(v, b.unit, units).value) as [
+        number,
+        number,
+        number,
+        number,
+      ];
+      return {
+        name: b.name,
+        unit: prettyUnit(toDisplay(0, b.unit, units).unit),
+        shown: values.map((v) => formatValue(v)) as [string, string, string, string],
+        values,
+      };
     }),
     warnings: [...r.warnings],
   };
@@ -171,9 +203,28 @@ function complianceTable(rows: readonly ComplianceRow[]): ComplianceTable | null
   if (rows.length === 0) return null;
   const n = (x: number | null) => (x === null ? '—' : formatValue(x));
   return {
-    header: ['Feature', 'Condition', 'Constituent', 'Unit', 'Required dilution', 'Achieved dilution', 'Margin', 'Verdict', 'Note'],
-    rows: rows.map((r) => [r.feature, r.condition, r.constituent, prettyUnit(r.unit), n(r.requiredDilution), n(r.achievedDilution),
-      r.margin === null ? '—' : `${formatValue(100 * r.margin, 3)} %`, r.verdict, r.note]),
+    header: [
+      'Feature',
+      'Condition',
+      'Constituent',
+      'Unit',
+      'Required dilution',
+      'Achieved dilution',
+      'Margin',
+      'Verdict',
+      'Note',
+    ],
+    rows: rows.map((r) => [
+      r.feature,
+      r.condition,
+      r.constituent,
+      prettyUnit(r.unit),
+      n(r.requiredDilution),
+      n(r.achievedDilution),
+      r.margin === null ? '—' : `${formatValue(100 * r.margin, 3)} %`,
+      r.verdict,
+      r.note,
+    ]),
   };
 }
 
@@ -209,7 +260,14 @@ export function buildReportModel(a: Assessment, units: UnitSystem): ReportModel 
       { label: 'Display units', value: unitsLabel },
     ],
     contents,
-    summary: estimates.map((s, i) => ({ id: s.id, title: s.title, where: [s.feature, s.condition].filter(Boolean).join(' · '), keyResult: keyResult(s, a.estimates[i].results), warnings: s.warnings.length, status: s.status })),
+    summary: estimates.map((s, i) => ({
+      id: s.id,
+      title: s.title,
+      where: [s.feature, s.condition].filter(Boolean).join(' · '),
+      keyResult: keyResult(s, a.estimates[i].results),
+      warnings: s.warnings.length,
+      status: s.status,
+    })),
     estimates,
     compliance,
     references,

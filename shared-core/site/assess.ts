@@ -60,13 +60,18 @@ export interface Assessment {
   compliance: ComplianceRow[];
 }
 
-function describeInputs(method: CalcMethod, args: Record<string, unknown>, conditionName?: string): Record<string, ResultValue> {
+function describeInputs(
+  method: CalcMethod,
+  args: Record<string, unknown>,
+  conditionName?: string,
+): Record<string, ResultValue> {
   const out: Record<string, ResultValue> = {};
   for (const spec of method.params) {
     const v = args[spec.name];
     if (v === undefined) continue;
     if (spec.kind === 'number') out[spec.name] = { value: v as number, unit: spec.unit };
-    else if (spec.kind === 'profile') out[spec.name] = { value: `measured profile${conditionName ? ` of “${conditionName}”` : ''}`, unit: '' };
+    else if (spec.kind === 'profile')
+      out[spec.name] = { value: `measured profile${conditionName ? ` of “${conditionName}”` : ''}`, unit: '' };
     else out[spec.name] = { value: String(v), unit: '' };
   }
   return out;
@@ -81,8 +86,14 @@ export interface AssessOptions {
 export function runEstimate(site: Site, e: Estimate, index: number, options: AssessOptions = {}): EstimateOutcome {
   const method = findCalcMethod(e.method);
   const base = {
-    id: e.id, method: e.method, title: e.title ?? method?.title ?? e.method,
-    inputs: {}, results: {}, warnings: [] as string[], sources: [] as string[], series: [] as Series[],
+    id: e.id,
+    method: e.method,
+    title: e.title ?? method?.title ?? e.method,
+    inputs: {},
+    results: {},
+    warnings: [] as string[],
+    sources: [] as string[],
+    series: [] as Series[],
   };
   const ctx = makeContext(site, e.condition, e.feature);
   const feature = ctx.feature && { id: ctx.feature.id, name: ctx.feature.name, kind: ctx.feature.kind };
@@ -90,7 +101,8 @@ export function runEstimate(site: Site, e: Estimate, index: number, options: Ass
   const fail = (error: string): EstimateOutcome => ({ ...base, feature, condition, status: 'error', error });
   if (!method) return fail(`estimates[${index}].method: "${e.method}" is not a gprime method (see gprime calc --list)`);
   if (e.feature && !ctx.feature) return fail(`estimates[${index}].feature: no feature with id "${e.feature}"`);
-  if (e.condition && !ctx.condition) return fail(`estimates[${index}].condition: no condition with id "${e.condition}"`);
+  if (e.condition && !ctx.condition)
+    return fail(`estimates[${index}].condition: no condition with id "${e.condition}"`);
   try {
     const known = new Set(method.params.map((p) => p.name));
     const bound = Object.fromEntries(Object.entries(boundArgs(method.id, ctx)).filter(([k]) => known.has(k)));
@@ -100,7 +112,18 @@ export function runEstimate(site: Site, e: Estimate, index: number, options: Ass
     const warnings = [...(ctx.profile?.warnings ?? []), ...out.warnings];
     const wantsBand = options.bands !== false && e.uncertainty && Object.keys(e.uncertainty).length > 0;
     const uncertainty = wantsBand ? bandsFromTyped(method, raw, e.uncertainty!) : undefined;
-    return { ...base, feature, condition, status: 'ok', inputs, results: out.results, warnings: [...new Set(warnings)], sources: out.sources, series: out.series ?? [], ...(uncertainty ? { uncertainty, sources: [...out.sources, MONTE_CARLO_JCGM101.source] } : {}) };
+    return {
+      ...base,
+      feature,
+      condition,
+      status: 'ok',
+      inputs,
+      results: out.results,
+      warnings: [...new Set(warnings)],
+      sources: out.sources,
+      series: out.series ?? [],
+      ...(uncertainty ? { uncertainty, sources: [...out.sources, MONTE_CARLO_JCGM101.source] } : {}),
+    };
   } catch (err) {
     if (err instanceof InputError || err instanceof ProfileError) return fail(err.message);
     throw err;
@@ -108,7 +131,11 @@ export function runEstimate(site: Site, e: Estimate, index: number, options: Ass
 }
 
 /** Evaluates every estimate of a site. Deterministic: the same site gives the same numbers. */
-export function assessSite(site: Site, meta: { gprimeVersion: string; siteHash: string }, options: AssessOptions = {}): Assessment {
+export function assessSite(
+  site: Site,
+  meta: { gprimeVersion: string; siteHash: string },
+  options: AssessOptions = {},
+): Assessment {
   return {
     format: 'gprime-assessment',
     project: site.project,

@@ -21,7 +21,8 @@ import type { Site } from './schema';
  * A condition the model cannot run for gives 'cannot tell' rows with the reason.
  */
 export function siteCompliance(site: Site): ComplianceRow[] {
-  const method = findCalcMethod('buoyant-jet'), diffuser = findCalcMethod('diffuser-plume');
+  const method = findCalcMethod('buoyant-jet'),
+    diffuser = findCalcMethod('diffuser-plume');
   if (!method || !diffuser) return [];
   const rows: ComplianceRow[] = [];
   site.features.forEach((feature, index) => {
@@ -40,19 +41,37 @@ export function siteCompliance(site: Site): ComplianceRow[] {
           boundary = a.dilutionCentreline <= b.dilutionCentreline ? a : b;
           model = `${feature.ports} ports, ${boundary === a && d.merge ? 'merged plumes' : 'single-port plume'} (the smaller dilution); `;
         } else {
-          boundary = dilutionAtBoundary(buoyantJetTrajectory(buoyantJetInputFromArgs(resolveArgs(method, boundArgs(method.id, ctx)))), edge);
+          boundary = dilutionAtBoundary(
+            buoyantJetTrajectory(buoyantJetInputFromArgs(resolveArgs(method, boundArgs(method.id, ctx)))),
+            edge,
+          );
         }
         const table = complianceTable([{ name: condition.name, dilution: boundary }], feature.constituents);
         for (const r of table.rows) {
           rows.push({
-            ...base, constituent: r.constituent, unit: r.unit, requiredDilution: r.requiredDilution ?? null,
-            achievedDilution: r.achievedDilution, margin: r.margin ?? null, verdict: r.verdict, note: model + r.note,
+            ...base,
+            constituent: r.constituent,
+            unit: r.unit,
+            requiredDilution: r.requiredDilution ?? null,
+            achievedDilution: r.achievedDilution,
+            margin: r.margin ?? null,
+            verdict: r.verdict,
+            note: model + r.note,
           });
         }
       } catch (e) {
         if (!(e instanceof InputError || e instanceof ProfileError)) throw e;
         for (const c of feature.constituents) {
-          rows.push({ ...base, constituent: c.name, unit: c.unit, requiredDilution: null, achievedDilution: null, margin: null, verdict: 'cannot tell', note: e.message });
+          rows.push({
+            ...base,
+            constituent: c.name,
+            unit: c.unit,
+            requiredDilution: null,
+            achievedDilution: null,
+            margin: null,
+            verdict: 'cannot tell',
+            note: e.message,
+          });
         }
       }
     }

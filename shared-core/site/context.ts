@@ -44,14 +44,27 @@ export function buoyancyFrequencyAt(p: Profile, depth: number): number {
 
 /** Depth-mean buoyancy frequency between two depths [1/s] from the density difference. */
 export function meanBuoyancyFrequency(p: Profile, top: number, bottom: number): number {
-  const r1 = interpolateAt(p.depth, p.density, top), r2 = interpolateAt(p.depth, p.density, bottom);
+  const r1 = interpolateAt(p.depth, p.density, top),
+    r2 = interpolateAt(p.depth, p.density, bottom);
   return Math.sqrt(Math.max(0, (GRAVITY * (r2 - r1)) / (((r1 + r2) / 2) * Math.max(bottom - top, 1e-9))));
 }
 
-export function makeContext(site: Site, conditionId: string | undefined, featureId: string | undefined): EstimateContext {
+export function makeContext(
+  site: Site,
+  conditionId: string | undefined,
+  featureId: string | undefined,
+): EstimateContext {
   const conditionIndex = conditionId ? site.conditions.findIndex((c) => c.id === conditionId) : 0;
   const featureIndex = featureId ? site.features.findIndex((f) => f.id === featureId) : -1;
   const condition = conditionIndex >= 0 ? site.conditions[conditionIndex] : undefined;
   const profile = condition ? conditionProfile(condition) : undefined;
-  return { site, condition, conditionIndex, profile, fit: profile ? twoLayerFit(profile) : undefined, feature: featureIndex >= 0 ? site.features[featureIndex] : undefined, featureIndex };
+  return {
+    site,
+    condition,
+    conditionIndex,
+    profile,
+    fit: profile ? twoLayerFit(profile) : undefined,
+    feature: featureIndex >= 0 ? site.features[featureIndex] : undefined,
+    featureIndex,
+  };
 }

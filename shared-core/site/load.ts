@@ -12,7 +12,10 @@ export class SiteFileError extends Error {
 }
 
 function placeOf(path: readonly PropertyKey[]): string {
-  return path.reduce<string>((acc, k) => (typeof k === 'number' ? `${acc}[${k}]` : acc ? `${acc}.${String(k)}` : String(k)), '');
+  return path.reduce<string>(
+    (acc, k) => (typeof k === 'number' ? `${acc}[${k}]` : acc ? `${acc}.${String(k)}` : String(k)),
+    '',
+  );
 }
 
 /**
@@ -30,20 +33,32 @@ export function loadSite(input: string | unknown): Site {
       throw new SiteFileError(place, `not valid JSON (${(e as Error).message})`);
     }
   }
-  if (!doc || typeof doc !== 'object' || Array.isArray(doc)) throw new SiteFileError('', 'a site file must hold one JSON object');
+  if (!doc || typeof doc !== 'object' || Array.isArray(doc))
+    throw new SiteFileError('', 'a site file must hold one JSON object');
   const obj = doc as Record<string, unknown>;
-  if (obj.format !== SITE_FORMAT) throw new SiteFileError('format', `expected "${SITE_FORMAT}", found ${JSON.stringify(obj.format)}: this is not a gprime site file`);
+  if (obj.format !== SITE_FORMAT)
+    throw new SiteFileError(
+      'format',
+      `expected "${SITE_FORMAT}", found ${JSON.stringify(obj.format)}: this is not a gprime site file`,
+    );
   const version = obj.version;
-  if (typeof version !== 'number' || !Number.isInteger(version) || version < 1) throw new SiteFileError('version', `expected a whole number ≥ 1, found ${JSON.stringify(version)}`);
+  if (typeof version !== 'number' || !Number.isInteger(version) || version < 1)
+    throw new SiteFileError('version', `expected a whole number ≥ 1, found ${JSON.stringify(version)}`);
   if (version > SITE_VERSION) {
-    throw new SiteFileError('version', `this site file is version ${version}; this gprime reads versions up to ${SITE_VERSION}. Open it with a newer gprime; the file was not changed.`);
+    throw new SiteFileError(
+      'version',
+      `this site file is version ${version}; this gprime reads versions up to ${SITE_VERSION}. Open it with a newer gprime; the file was not changed.`,
+    );
   }
   let current: Record<string, unknown> = obj;
   for (let v = version; v < SITE_VERSION; v++) current = migrations[v](current);
   const parsed = siteSchema.safeParse(current);
   if (!parsed.success) {
     const issues = parsed.error.issues.slice(0, 8).map((i) => `${placeOf(i.path) || '(top)'}: ${i.message}`);
-    throw new SiteFileError(placeOf(parsed.error.issues[0].path), `${issues.length > 1 ? `${parsed.error.issues.length} problems — ` : ''}${issues.join('; ')}`);
+    throw new SiteFileError(
+      placeOf(parsed.error.issues[0].path),
+      `${issues.length > 1 ? `${parsed.error.issues.length} problems — ` : ''}${issues.join('; ')}`,
+    );
   }
   return parsed.data;
 }

@@ -7,7 +7,11 @@ import { z } from 'zod';
 export const SITE_FORMAT = 'gprime-site';
 export const SITE_VERSION = 3;
 
-const id = z.string().min(1).max(64).regex(/^[A-Za-z0-9_.-]+$/, 'use letters, digits, "_", "-" or "." only');
+const id = z
+  .string()
+  .min(1)
+  .max(64)
+  .regex(/^[A-Za-z0-9_.-]+$/, 'use letters, digits, "_", "-" or "." only');
 const name = z.string().min(1).max(200);
 export const quantitySchema = z.union([z.number().finite(), z.string().trim().min(1).max(64)]);
 export type QuantityInput = z.infer<typeof quantitySchema>;
@@ -32,7 +36,9 @@ export const conditionSchema = z.object({
 const portSchema = z.object({ name, depth: quantitySchema, capacity: quantitySchema });
 
 export const intakeSchema = z.object({
-  id, kind: z.literal('intake'), name,
+  id,
+  kind: z.literal('intake'),
+  name,
   ports: z.array(portSchema).min(1),
   /** total planned release [m3/s] */
   release: quantitySchema,
@@ -53,7 +59,9 @@ export const constituentSchema = z.object({
 });
 
 export const outfallSchema = z.object({
-  id, kind: z.literal('outfall'), name,
+  id,
+  kind: z.literal('outfall'),
+  name,
   portDepth: quantitySchema,
   diameter: quantitySchema,
   /** discharge of the whole outfall [m3/s], shared equally among its ports */
@@ -63,14 +71,20 @@ export const outfallSchema = z.object({
   ports: z.number().int().min(1).max(500).default(1),
   /** port spacing along a multiport diffuser [m] */
   spacing: quantitySchema.optional(),
-  effluent: z.object({ temperature: quantitySchema, salinity: quantitySchema.optional(), sediment: quantitySchema.optional() }),
+  effluent: z.object({
+    temperature: quantitySchema,
+    salinity: quantitySchema.optional(),
+    sediment: quantitySchema.optional(),
+  }),
   /** the regulatory mixing-zone boundary, as a distance from the port [m] */
   mixingZone: z.object({ distance: quantitySchema }),
   constituents: z.array(constituentSchema).default([]),
 });
 
 export const inflowSchema = z.object({
-  id, kind: z.literal('inflow'), name,
+  id,
+  kind: z.literal('inflow'),
+  name,
   discharge: quantitySchema,
   width: quantitySchema,
   temperature: quantitySchema,
@@ -81,7 +95,9 @@ export const inflowSchema = z.object({
 });
 
 export const channelSchema = z.object({
-  id, kind: z.literal('channel'), name,
+  id,
+  kind: z.literal('channel'),
+  name,
   /** what the channel is: an estuary mouth, a sill or a navigation lock */
   form: z.enum(['estuary', 'sill', 'contraction', 'lock']),
   depth: quantitySchema,
@@ -155,5 +171,9 @@ export type ProfileTableInput = z.infer<typeof profileTableSchema>;
 
 /** The JSON Schema of the current version (shipped as shared-core/site/site.schema.json). */
 export function siteJsonSchema(): unknown {
-  return { $id: 'https://gprime.invalid/site.schema.json', title: 'gprime site document', ...z.toJSONSchema(siteSchema, { io: 'input' }) as object };
+  return {
+    $id: 'https://gprime.invalid/site.schema.json',
+    title: 'gprime site document',
+    ...(z.toJSONSchema(siteSchema, { io: 'input' }) as object),
+  };
 }

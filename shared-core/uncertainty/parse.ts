@@ -10,7 +10,8 @@ export function parseStandardUncertainty(name: string, text: string, siUnit: str
   const trimmed = text.trim();
   if (trimmed.endsWith('%')) {
     const percent = Number(trimmed.slice(0, -1).trim().replace(',', '.'));
-    if (!(Number.isFinite(percent) && percent >= 0)) throw new InputError(field, text, '%', '≥ 0 %', 'a relative uncertainty is a number ≥ 0 followed by %');
+    if (!(Number.isFinite(percent) && percent >= 0))
+      throw new InputError(field, text, '%', '≥ 0 %', 'a relative uncertainty is a number ≥ 0 followed by %');
     return (Math.abs(nominal) * percent) / 100;
   }
   const unit = /^[-+]?[\d.,]+(?:[eE][-+]?\d+)?\s*(.*)$/.exec(trimmed)?.[1].trim() ?? '';

@@ -65,10 +65,26 @@ function checkInputs(method: CalcMethod, base: CalcArgs, inputs: readonly InputU
   for (const { name, standardUncertainty: u } of inputs) {
     const spec = method.params.find((p) => p.name === name);
     const field = `uncertainty of ${name}`;
-    if (!spec) throw new InputError(field, name, '', method.params.map((p) => p.name).join(', '), `${method.id} has no parameter "${name}"`);
-    if (spec.kind !== 'number') throw new InputError(field, name, '', 'a numeric parameter', `${name} is not a number, so it cannot carry an uncertainty`);
-    if (typeof base[name] !== 'number') throw new InputError(field, name, spec.unit, 'a parameter with a value', `${name} has no value to vary`);
-    if (!(Number.isFinite(u) && u >= 0)) throw new InputError(field, u, spec.unit, '≥ 0', 'a standard uncertainty is a finite number ≥ 0');
+    if (!spec)
+      throw new InputError(
+        field,
+        name,
+        '',
+        method.params.map((p) => p.name).join(', '),
+        `${method.id} has no parameter "${name}"`,
+      );
+    if (spec.kind !== 'number')
+      throw new InputError(
+        field,
+        name,
+        '',
+        'a numeric parameter',
+        `${name} is not a number, so it cannot carry an uncertainty`,
+      );
+    if (typeof base[name] !== 'number')
+      throw new InputError(field, name, spec.unit, 'a parameter with a value', `${name} has no value to vary`);
+    if (!(Number.isFinite(u) && u >= 0))
+      throw new InputError(field, u, spec.unit, '≥ 0', 'a standard uncertainty is a finite number ≥ 0');
     if (names.has(name)) throw new InputError(field, name, '', 'each parameter once', `${name} is given twice`);
     names.add(name);
   }
@@ -90,9 +106,17 @@ export function propagateMonteCarloJcgm101(
 ): UncertaintyResult {
   const samples = options.samples ?? 1000;
   const coverage = options.coverage ?? 0.9;
-  if (!(Number.isInteger(samples) && samples >= 100 && samples <= 100000)) throw new InputError('samples', samples, '1', '100 … 100000 (integer)');
+  if (!(Number.isInteger(samples) && samples >= 100 && samples <= 100000))
+    throw new InputError('samples', samples, '1', '100 … 100000 (integer)');
   if (!(coverage >= 0.5 && coverage <= 0.99)) throw new InputError('coverage', coverage, '1', '0.5 … 0.99');
-  if (inputs.length === 0) throw new InputError('uncertainties', '(none)', '', 'at least one input with a standard uncertainty', 'name at least one input and its standard uncertainty');
+  if (inputs.length === 0)
+    throw new InputError(
+      'uncertainties',
+      '(none)',
+      '',
+      'at least one input with a standard uncertainty',
+      'name at least one input and its standard uncertainty',
+    );
   const base = resolveArgs(method, raw);
   checkInputs(method, base, inputs);
   const nominal = runCalc(method, base);
@@ -101,7 +125,8 @@ export function propagateMonteCarloJcgm101(
   const values = new Map<string, number[]>();
   const outside = new Map<string, number>();
   const warningCounts = new Map<string, { count: number; example: string }>();
-  let failed = 0, firstFailure = '';
+  let failed = 0,
+    firstFailure = '';
   for (const row of rows) {
     const args: CalcArgs = { ...base };
     let skip = false;
@@ -142,13 +167,22 @@ export function propagateMonteCarloJcgm101(
   for (const [name, n] of outside) {
     const spec = method.params.find((p) => p.name === name)!;
     const range = spec.kind === 'number' ? describeRange(spec.range ?? {}, spec.unit) : '';
-    warnings.push(`${pct(n / samples)} of the draws put ${name} outside its allowed range ${range} and were left out: the band is for a truncated input distribution.`);
+    warnings.push(
+      `${pct(n / samples)} of the draws put ${name} outside its allowed range ${range} and were left out: the band is for a truncated input distribution.`,
+    );
   }
   if (failed) warnings.push(`${failed} of ${samples} draws could not be computed (first: ${firstFailure}).`);
-  if (evaluated < 0.5 * samples) warnings.push(`Only ${evaluated} of ${samples} draws gave results: the band is unreliable; reduce the uncertainties or check the inputs.`);
+  if (evaluated < 0.5 * samples)
+    warnings.push(
+      `Only ${evaluated} of ${samples} draws gave results: the band is unreliable; reduce the uncertainties or check the inputs.`,
+    );
   const nominalKinds = new Set(nominal.warnings.map(warningKind));
-  const occasional = [...warningCounts].filter(([kind]) => !nominalKinds.has(kind)).sort((a, b) => b[1].count - a[1].count).slice(0, 3);
-  for (const [, { count, example }] of occasional) warnings.push(`In ${pct(count / Math.max(evaluated, 1))} of the draws: ${example}`);
+  const occasional = [...warningCounts]
+    .filter(([kind]) => !nominalKinds.has(kind))
+    .sort((a, b) => b[1].count - a[1].count)
+    .slice(0, 3);
+  for (const [, { count, example }] of occasional)
+    warnings.push(`In ${pct(count / Math.max(evaluated, 1))} of the draws: ${example}`);
 
   const bands: ResultBand[] = [];
   for (const [name, r] of Object.entries(nominal.results)) {
@@ -157,10 +191,17 @@ export function propagateMonteCarloJcgm101(
     const sorted = [...list].sort((a, b) => a - b);
     const mean = sorted.reduce((a, b) => a + b, 0) / sorted.length;
     const sd = Math.sqrt(sorted.reduce((a, b) => a + (b - mean) ** 2, 0) / (sorted.length - 1));
-    if (list.length < evaluated) warnings.push(`${name} exists in only ${pct(list.length / evaluated)} of the draws; its band is of those draws.`);
+    if (list.length < evaluated)
+      warnings.push(`${name} exists in only ${pct(list.length / evaluated)} of the draws; its band is of those draws.`);
     bands.push({
-      name, unit: r.unit, nominal: r.value, mean, standardDeviation: sd,
-      low: sampleQuantile(sorted, (1 - coverage) / 2), median: sampleQuantile(sorted, 0.5), high: sampleQuantile(sorted, (1 + coverage) / 2),
+      name,
+      unit: r.unit,
+      nominal: r.value,
+      mean,
+      standardDeviation: sd,
+      low: sampleQuantile(sorted, (1 - coverage) / 2),
+      median: sampleQuantile(sorted, 0.5),
+      high: sampleQuantile(sorted, (1 + coverage) / 2),
       draws: list.length,
     });
   }

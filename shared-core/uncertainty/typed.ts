@@ -17,10 +17,27 @@ export function bandsFromTyped(
   const base = resolveArgs(method, raw);
   const inputs = Object.entries(typed).map(([name, text]) => {
     const spec = method.params.find((p) => p.name === name);
-    const numeric = method.params.filter((p) => p.kind === 'number').map((p) => p.name).join(', ');
-    if (!spec || spec.kind !== 'number') throw new InputError(`uncertainty of ${name}`, name, '', numeric, `${method.id} has no numeric parameter "${name}"; numeric parameters are ${numeric}`);
+    const numeric = method.params
+      .filter((p) => p.kind === 'number')
+      .map((p) => p.name)
+      .join(', ');
+    if (!spec || spec.kind !== 'number')
+      throw new InputError(
+        `uncertainty of ${name}`,
+        name,
+        '',
+        numeric,
+        `${method.id} has no numeric parameter "${name}"; numeric parameters are ${numeric}`,
+      );
     const nominal = base[name];
-    if (typeof nominal !== 'number') throw new InputError(`uncertainty of ${name}`, name, spec.unit, 'a parameter with a value', `give ${name} a value to vary`);
+    if (typeof nominal !== 'number')
+      throw new InputError(
+        `uncertainty of ${name}`,
+        name,
+        spec.unit,
+        'a parameter with a value',
+        `give ${name} a value to vary`,
+      );
     return { name, standardUncertainty: parseStandardUncertainty(name, text, spec.unit, nominal) };
   });
   return propagateMonteCarloJcgm101(method, raw, inputs, options);

@@ -17,17 +17,65 @@ export type UnitSystem = 'si' | 'us';
 
 /** Our unit names → mathjs unit expressions. Dimensionless units are handled apart. */
 const MATHJS_NAME: Record<string, string> = {
-  m: 'm', s: 's', 'm/s': 'm/s', 'm/s2': 'm/s^2', 'm2/s': 'm^2/s', 'm3/s': 'm^3/s', 'kg/m3': 'kg/m^3',
-  degC: 'degC', K: 'K', dbar: 'dbar', m2: 'm^2', m3: 'm^3', '1/s': '1/s', '1/s2': '1/s^2', deg: 'deg', 'Pa s': 'Pa s',
-  'kg/s': 'kg/s', Pa: 'Pa', 'W/(m K)': 'W/(m K)', 'J/(kg K)': 'J/(kg K)', 'm4/s3': 'm^4/s^3', 'm3/s3': 'm^3/s^3', 'm4/s2': 'm^4/s^2',
+  m: 'm',
+  s: 's',
+  'm/s': 'm/s',
+  'm/s2': 'm/s^2',
+  'm2/s': 'm^2/s',
+  'm3/s': 'm^3/s',
+  'kg/m3': 'kg/m^3',
+  degC: 'degC',
+  K: 'K',
+  dbar: 'dbar',
+  m2: 'm^2',
+  m3: 'm^3',
+  '1/s': '1/s',
+  '1/s2': '1/s^2',
+  deg: 'deg',
+  'Pa s': 'Pa s',
+  'kg/s': 'kg/s',
+  Pa: 'Pa',
+  'W/(m K)': 'W/(m K)',
+  'J/(kg K)': 'J/(kg K)',
+  'm4/s3': 'm^4/s^3',
+  'm3/s3': 'm^3/s^3',
+  'm4/s2': 'm^4/s^2',
 };
 
 /** Unit names accepted as spelled variants in CSV headers and typed input. */
 const ALIASES: Record<string, string> = {
-  'm3/s': 'm^3/s', 'm³/s': 'm^3/s', 'm^3/s': 'm^3/s', cms: 'm^3/s', 'ft3/s': 'ft^3/s', 'l/s': 'L/s', 'gal/min': 'gal/minute',
-  'kg/m3': 'kg/m^3', 'kg/m³': 'kg/m^3', 'mg/l': 'mg/L', 'g/l': 'g/L', 'm/s2': 'm/s^2', 'm2/s': 'm^2/s', 'm²/s': 'm^2/s', '°c': 'degC',
-  '°f': 'degF', 'c': 'degC', 'f': 'degF', degc: 'degC', degf: 'degF', 'deg c': 'degC', 'deg f': 'degF', celsius: 'degC', fahrenheit: 'degF',
-  ft: 'ft', feet: 'ft', meters: 'm', metres: 'm', 'ft/s': 'ft/s', fps: 'ft/s', 'ft/s2': 'ft/s^2', 'lb/ft3': 'lb/ft^3',
+  'm3/s': 'm^3/s',
+  'm³/s': 'm^3/s',
+  'm^3/s': 'm^3/s',
+  cms: 'm^3/s',
+  'ft3/s': 'ft^3/s',
+  'l/s': 'L/s',
+  'gal/min': 'gal/minute',
+  'kg/m3': 'kg/m^3',
+  'kg/m³': 'kg/m^3',
+  'mg/l': 'mg/L',
+  'g/l': 'g/L',
+  'm/s2': 'm/s^2',
+  'm2/s': 'm^2/s',
+  'm²/s': 'm^2/s',
+  '°c': 'degC',
+  '°f': 'degF',
+  c: 'degC',
+  f: 'degF',
+  degc: 'degC',
+  degf: 'degF',
+  'deg c': 'degC',
+  'deg f': 'degF',
+  celsius: 'degC',
+  fahrenheit: 'degF',
+  ft: 'ft',
+  feet: 'ft',
+  meters: 'm',
+  metres: 'm',
+  'ft/s': 'ft/s',
+  fps: 'ft/s',
+  'ft/s2': 'ft/s^2',
+  'lb/ft3': 'lb/ft^3',
 };
 
 const DIMENSIONLESS = new Set(['1', 'PSU', '']);
@@ -36,7 +84,14 @@ const SALINITY_UNITS = /^(psu|pss-?78|ppt|‰|g\/kg|o\/oo)$/i;
 /** Normalises a unit as typed by a user ("ft3/s", "°F", "mg/l") to mathjs syntax. */
 export function normaliseUnitText(text: string): string {
   const t = text.trim();
-  return ALIASES[t] ?? ALIASES[t.toLowerCase()] ?? t.replace(/(\w)([23])(?![\d.])/g, '$1^$2').replace(/²/g, '^2').replace(/³/g, '^3');
+  return (
+    ALIASES[t] ??
+    ALIASES[t.toLowerCase()] ??
+    t
+      .replace(/(\w)([23])(?![\d.])/g, '$1^$2')
+      .replace(/²/g, '^2')
+      .replace(/³/g, '^3')
+  );
 }
 
 function toMathUnit(field: string, text: string, value: number): Unit {
@@ -54,14 +109,26 @@ function toMathUnit(field: string, text: string, value: number): Unit {
 export function convertToSi(field: string, value: number, fromUnit: string, siUnit: string): number {
   if (DIMENSIONLESS.has(siUnit)) {
     if (fromUnit === '' || fromUnit === '1' || (siUnit === 'PSU' && SALINITY_UNITS.test(fromUnit))) return value;
-    throw new InputError(field, `${value} ${fromUnit}`, siUnit, siUnit === 'PSU' ? 'PSU (or ppt, g/kg)' : 'a plain number', `a ${siUnit === 'PSU' ? 'salinity' : 'dimensionless number'} takes no unit "${fromUnit}"`);
+    throw new InputError(
+      field,
+      `${value} ${fromUnit}`,
+      siUnit,
+      siUnit === 'PSU' ? 'PSU (or ppt, g/kg)' : 'a plain number',
+      `a ${siUnit === 'PSU' ? 'salinity' : 'dimensionless number'} takes no unit "${fromUnit}"`,
+    );
   }
   const target = MATHJS_NAME[siUnit] ?? siUnit;
   const u = toMathUnit(field, fromUnit, value);
   try {
     return u.toNumber(target);
   } catch {
-    throw new InputError(field, `${value} ${fromUnit}`, siUnit, `a quantity convertible to ${siUnit}`, `"${fromUnit}" cannot be converted to ${siUnit}`);
+    throw new InputError(
+      field,
+      `${value} ${fromUnit}`,
+      siUnit,
+      `a quantity convertible to ${siUnit}`,
+      `"${fromUnit}" cannot be converted to ${siUnit}`,
+    );
   }
 }
 
@@ -72,16 +139,32 @@ export function convertToSi(field: string, value: number, fromUnit: string, siUn
 export function parseQuantity(field: string, text: string, siUnit: string): number {
   const trimmed = text.trim();
   const m = /^([-+]?(?:\d+(?:[.,]\d*)?|[.,]\d+)(?:[eE][-+]?\d+)?)\s*(.*)$/.exec(trimmed);
-  if (!m) throw new InputError(field, text, siUnit, `a number with an optional unit (e.g. "12 ${siUnit === '1' ? '' : siUnit}")`, 'it is not a number');
+  if (!m)
+    throw new InputError(
+      field,
+      text,
+      siUnit,
+      `a number with an optional unit (e.g. "12 ${siUnit === '1' ? '' : siUnit}")`,
+      'it is not a number',
+    );
   const value = Number(m[1].replace(',', '.'));
   const unit = m[2].trim();
-  if (!Number.isFinite(value)) throw new InputError(field, text, siUnit, 'a finite number', 'it is not a finite number');
+  if (!Number.isFinite(value))
+    throw new InputError(field, text, siUnit, 'a finite number', 'it is not a finite number');
   return unit === '' ? value : convertToSi(field, value, unit, siUnit);
 }
 
 /** Display unit for each SI unit in the US customary system (the SI system displays SI). */
 const US_DISPLAY: Record<string, string> = {
-  m: 'ft', 'm/s': 'ft/s', 'm/s2': 'ft/s2', 'm2/s': 'ft2/s', 'm3/s': 'cfs', degC: 'degF', 'kg/m3': 'lb/ft3', m2: 'ft2', m3: 'ft3',
+  m: 'ft',
+  'm/s': 'ft/s',
+  'm/s2': 'ft/s2',
+  'm2/s': 'ft2/s',
+  'm3/s': 'cfs',
+  degC: 'degF',
+  'kg/m3': 'lb/ft3',
+  m2: 'ft2',
+  m3: 'ft3',
 };
 
 /** The unit a value in siUnit is displayed in under the given system. */

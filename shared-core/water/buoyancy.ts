@@ -7,7 +7,8 @@ export type DensityReference = 'lower' | 'upper' | 'mean';
 export const REDUCED_GRAVITY: MethodInfo = {
   id: 'reduced-gravity',
   title: 'Reduced gravity',
-  source: 'Turner, J.S. (1973). Buoyancy Effects in Fluids. Cambridge Univ. Press, §1.2; Simpson, J.E. (1997). Gravity Currents, 2nd ed., Ch. 1.',
+  source:
+    'Turner, J.S. (1973). Buoyancy Effects in Fluids. Cambridge Univ. Press, §1.2; Simpson, J.E. (1997). Gravity Currents, 2nd ed., Ch. 1.',
   equation: 'g′ = g (ρ_lower − ρ_upper) / ρ_ref, ρ_ref = ρ_lower, ρ_upper or their mean',
   validity: {},
 };
@@ -27,7 +28,9 @@ export function reducedGravity(rhoUpper: number, rhoLower: number, reference: De
   const warnings: string[] = [];
   if (r2 < r1) warnings.push('rho_lower is less than rho_upper: the layering is unstable and g′ is negative.');
   if (Math.abs(r2 - r1) / ref > 0.1) {
-    warnings.push(`Δρ/ρ = ${(Math.abs(r2 - r1) / ref).toFixed(3)} exceeds 0.1: the Boussinesq approximation does not hold; use methods that take the density ratio.`);
+    warnings.push(
+      `Δρ/ρ = ${(Math.abs(r2 - r1) / ref).toFixed(3)} exceeds 0.1: the Boussinesq approximation does not hold; use methods that take the density ratio.`,
+    );
   }
   return { value: g, unit: 'm/s2', method: REDUCED_GRAVITY.id, warnings };
 }
@@ -35,7 +38,8 @@ export function reducedGravity(rhoUpper: number, rhoLower: number, reference: De
 export const DENSIMETRIC_FROUDE: MethodInfo = {
   id: 'densimetric-froude',
   title: 'Densimetric Froude number',
-  source: 'Fischer, H.B., List, E.J., Koh, R.C.Y., Imberger, J., Brooks, N.H. (1979). Mixing in Inland and Coastal Waters. Academic Press, §6.2.',
+  source:
+    'Fischer, H.B., List, E.J., Koh, R.C.Y., Imberger, J., Brooks, N.H. (1979). Mixing in Inland and Coastal Waters. Academic Press, §6.2.',
   equation: 'Fr = U / √(g′ L)',
   validity: {},
 };
@@ -54,6 +58,11 @@ export function densimetricFroude(velocity: number, gPrime: number, length: numb
  * Squared buoyancy frequency between two depths, N² = (g/ρ̄)(ρ_deep − ρ_shallow)/(d_deep − d_shallow) [1/s2]
  * (depth positive down; stable when positive). Source: Turner (1973) §1.2; Gill (1982) §3.7.
  */
-export function buoyancyFrequencySquared(rhoShallow: number, rhoDeep: number, depthShallow: number, depthDeep: number): number {
+export function buoyancyFrequencySquared(
+  rhoShallow: number,
+  rhoDeep: number,
+  depthShallow: number,
+  depthDeep: number,
+): number {
   return (GRAVITY * (rhoDeep - rhoShallow)) / (((rhoShallow + rhoDeep) / 2) * (depthDeep - depthShallow));
 }

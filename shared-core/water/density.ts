@@ -43,7 +43,14 @@ export function waterDensity(state: WaterState): Scalar {
   const eos = state.eos ?? defaultEos(salinity);
   let base: Scalar;
   if (eos === 'fresh') {
-    if (salinity > 0) throw new InputError('salinity', salinity, 'PSU', '0 for eos = fresh', 'the fresh-water equation of state takes no salt; choose eos80 or teos10');
+    if (salinity > 0)
+      throw new InputError(
+        'salinity',
+        salinity,
+        'PSU',
+        '0 for eos = fresh',
+        'the fresh-water equation of state takes no salt; choose eos80 or teos10',
+      );
     base = densityPureWaterTanaka2001(state.temperature);
     if (pressure > 0) base.warnings.push('eos = fresh ignores pressure; the density is at 1 atm.');
   } else if (eos === 'eos80') {
@@ -51,9 +58,20 @@ export function waterDensity(state: WaterState): Scalar {
   } else if (eos === 'teos10') {
     base = densitySeawaterTeos10(salinity, state.temperature, pressure);
   } else {
-    throw new InputError('eos', eos, '', EQUATIONS_OF_STATE.join(', '), `choose one of ${EQUATIONS_OF_STATE.join(', ')}`);
+    throw new InputError(
+      'eos',
+      eos,
+      '',
+      EQUATIONS_OF_STATE.join(', '),
+      `choose one of ${EQUATIONS_OF_STATE.join(', ')}`,
+    );
   }
   if (sediment === 0) return base;
   const mix = densityWithSediment(base.value, sediment, state.particleDensity ?? 2650);
-  return { value: mix.value, unit: 'kg/m3', method: `${base.method}+${SEDIMENT_MIXTURE.id}`, warnings: [...base.warnings, ...mix.warnings] };
+  return {
+    value: mix.value,
+    unit: 'kg/m3',
+    method: `${base.method}+${SEDIMENT_MIXTURE.id}`,
+    warnings: [...base.warnings, ...mix.warnings],
+  };
 }

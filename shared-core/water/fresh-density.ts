@@ -22,7 +22,11 @@ export const TANAKA_2001: MethodInfo = {
  */
 export function densityPureWaterTanaka2001(temperature: number): Scalar {
   const t = requireInRange('temperature', temperature, 'degC', { min: -10, max: 100 });
-  const a1 = -3.983035, a2 = 301.797, a3 = 522528.9, a4 = 69.34881, a5 = 999.97495;
+  const a1 = -3.983035,
+    a2 = 301.797,
+    a3 = 522528.9,
+    a4 = 69.34881,
+    a5 = 999.97495;
   const rho = a5 * (1 - ((t + a1) ** 2 * (t + a2)) / (a3 * (t + a4)));
   return scalar(TANAKA_2001, rho, 'kg/m3', { temperature: t });
 }
@@ -33,7 +37,8 @@ export const KELL_1975: MethodInfo = {
   source:
     'Kell, G.S. (1975). Density, thermal expansivity, and compressibility of liquid water from 0 °C to 150 °C. ' +
     'J. Chem. Eng. Data 20(1), 97–105, Eq. (16).',
-  equation: 'ρ = (999.83952 + 16.945176 t − 7.9870401e-3 t² − 46.170461e-6 t³ + 105.56302e-9 t⁴ − 280.54253e-12 t⁵) / (1 + 16.879850e-3 t)',
+  equation:
+    'ρ = (999.83952 + 16.945176 t − 7.9870401e-3 t² − 46.170461e-6 t³ + 105.56302e-9 t⁴ − 280.54253e-12 t⁵) / (1 + 16.879850e-3 t)',
   validity: { temperature: { min: 0, max: 150, unit: 'degC', note: 'range of the fit' } },
 };
 
@@ -47,6 +52,7 @@ export const KELL_1975: MethodInfo = {
 export function densityPureWaterKell1975(temperature: number): Scalar {
   const t90 = requireInRange('temperature', temperature, 'degC', { min: -10, max: 150 });
   const t = 1.00024 * t90;
-  const num = 999.83952 + t * (16.945176 + t * (-7.9870401e-3 + t * (-46.170461e-6 + t * (105.56302e-9 + t * -280.54253e-12))));
+  const num =
+    999.83952 + t * (16.945176 + t * (-7.9870401e-3 + t * (-46.170461e-6 + t * (105.56302e-9 + t * -280.54253e-12))));
   return scalar(KELL_1975, num / (1 + 16.87985e-3 * t), 'kg/m3', { temperature: t90 });
 }

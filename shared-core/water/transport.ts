@@ -8,7 +8,8 @@ export const VISCOSITY_KESTIN_1978: MethodInfo = {
   source:
     'Kestin, J., Sokolov, M., Wakeham, W.A. (1978). Viscosity of liquid water in the range −8 °C to 150 °C. ' +
     'J. Phys. Chem. Ref. Data 7(3), 941–948, Eq. (9), μ20 = 1.002 mPa·s; kinematic viscosity ν = μ/ρ with ρ from Kell (1975).',
-  equation: 'log10(μ/μ20) = (20 − t)/(t + 96) · [1.2378 − 1.303e-3 (20 − t) + 3.06e-6 (20 − t)² + 2.55e-8 (20 − t)³];  ν = μ/ρ',
+  equation:
+    'log10(μ/μ20) = (20 − t)/(t + 96) · [1.2378 − 1.303e-3 (20 − t) + 3.06e-6 (20 − t)² + 2.55e-8 (20 − t)³];  ν = μ/ρ',
   validity: { temperature: { min: 0, max: 100, unit: 'degC', note: 'pure water at atmospheric pressure' } },
 };
 
@@ -46,7 +47,9 @@ export const CONDUCTIVITY_RAMIRES_1995: MethodInfo = {
 export function thermalConductivityRamires1995(temperature: number): Scalar {
   const t = requireInRange('temperature', temperature, 'degC', { min: -5, max: 150 });
   const r = (t + 273.15) / 298.15;
-  return scalar(CONDUCTIVITY_RAMIRES_1995, 0.6065 * (-1.48445 + 4.12292 * r - 1.63866 * r * r), 'W/(m K)', { temperature: t });
+  return scalar(CONDUCTIVITY_RAMIRES_1995, 0.6065 * (-1.48445 + 4.12292 * r - 1.63866 * r * r), 'W/(m K)', {
+    temperature: t,
+  });
 }
 
 export const CP_MILLERO_1973: MethodInfo = {

@@ -8,20 +8,54 @@ import { WITHDRAWAL_MEASURED_PROFILE } from './measured';
 import { WITHDRAWAL_VELOCITY, withdrawalVelocityProfile } from './outflow';
 import type { Profile } from '../profile/profile';
 import { optimiseRelease, RELEASE_BLEND, type Port } from './blend';
-import { groupFluxProfile, WITHDRAWAL_INTERFERENCE, type InterferenceGroup, type InterferenceMode } from './interference';
+import {
+  groupFluxProfile,
+  WITHDRAWAL_INTERFERENCE,
+  type InterferenceGroup,
+  type InterferenceMode,
+} from './interference';
 
 const SINKS = ['line', 'point'] as const;
-const SINK = { kind: 'choice', name: 'sink', description: 'line = slot across the width, point = orifice', choices: SINKS } as const;
-const SLOT_WIDTH = { kind: 'number', name: 'width', unit: 'm', description: 'slot width across the channel (line sink only)', optional: true, range: { ...positive, max: 1e5 } } as const;
+const SINK = {
+  kind: 'choice',
+  name: 'sink',
+  description: 'line = slot across the width, point = orifice',
+  choices: SINKS,
+} as const;
+const SLOT_WIDTH = {
+  kind: 'number',
+  name: 'width',
+  unit: 'm',
+  description: 'slot width across the channel (line sink only)',
+  optional: true,
+  range: { ...positive, max: 1e5 },
+} as const;
 const INTERFERENCE = ['combined', 'independent'] as const;
 
 /** Parses `ports=5:40,30:40` (depth below the surface in m : capacity in m3/s, one pair per port). */
 export function parsePorts(textValue: string): Port[] {
-  const pairs = textValue.split(/[,;]/).map((s) => s.trim()).filter((s) => s !== '');
-  if (pairs.length === 0) throw new InputError('ports', textValue, '', 'depth:capacity pairs, e.g. 5:40,30:40', 'give at least one port as depth:capacity');
+  const pairs = textValue
+    .split(/[,;]/)
+    .map((s) => s.trim())
+    .filter((s) => s !== '');
+  if (pairs.length === 0)
+    throw new InputError(
+      'ports',
+      textValue,
+      '',
+      'depth:capacity pairs, e.g. 5:40,30:40',
+      'give at least one port as depth:capacity',
+    );
   return pairs.map((pair) => {
     const m = /^([-+]?\d*\.?\d+(?:[eE][-+]?\d+)?)\s*:\s*([-+]?\d*\.?\d+(?:[eE][-+]?\d+)?)$/.exec(pair);
-    if (!m) throw new InputError('ports', pair, '', 'depth:capacity pairs, e.g. 5:40,30:40', `"${pair}" is not a depth:capacity pair (m : m3/s)`);
+    if (!m)
+      throw new InputError(
+        'ports',
+        pair,
+        '',
+        'depth:capacity pairs, e.g. 5:40,30:40',
+        `"${pair}" is not a depth:capacity pair (m : m3/s)`,
+      );
     return { depth: Number(m[1]), capacity: Number(m[2]) };
   });
 }
@@ -33,16 +67,47 @@ export const withdrawalCalcMethods: CalcMethod[] = [
     title: 'Critical discharge of an intake below or above a sharp interface (two layers)',
     topic: 'withdrawal',
     params: [
-      { kind: 'number', name: 'g_prime', unit: 'm/s2', description: 'reduced gravity across the interface', range: { ...positive, max: 20 } },
-      { kind: 'number', name: 'interface_distance', unit: 'm', description: 'vertical distance from the intake to the interface', range: { ...positive, max: 1e4 } },
+      {
+        kind: 'number',
+        name: 'g_prime',
+        unit: 'm/s2',
+        description: 'reduced gravity across the interface',
+        range: { ...positive, max: 20 },
+      },
+      {
+        kind: 'number',
+        name: 'interface_distance',
+        unit: 'm',
+        description: 'vertical distance from the intake to the interface',
+        range: { ...positive, max: 1e4 },
+      },
       SINK,
       SLOT_WIDTH,
-      { kind: 'choice', name: 'position', description: 'wall or bed (half-space approach flow), wall-foot (on the bed at the foot of a wall: quarter-space)', choices: SINK_POSITIONS, default: 'wall' },
+      {
+        kind: 'choice',
+        name: 'position',
+        description:
+          'wall or bed (half-space approach flow), wall-foot (on the bed at the foot of a wall: quarter-space)',
+        choices: SINK_POSITIONS,
+        default: 'wall',
+      },
     ],
-    results: [{ name: 'critical_discharge', unit: 'm3/s', description: 'discharge at which the far layer starts to be drawn' }],
+    results: [
+      { name: 'critical_discharge', unit: 'm3/s', description: 'discharge at which the far layer starts to be drawn' },
+    ],
     run(a) {
-      const r = criticalDischargeCraya1949(arg.num(a, 'g_prime'), arg.num(a, 'interface_distance'), arg.text<SinkKind>(a, 'sink'), arg.text<SinkPosition>(a, 'position'), arg.optNum(a, 'width'));
-      return { results: { critical_discharge: num(r.value, 'm3/s') }, warnings: r.warnings, sources: [CRAYA_1949.source] };
+      const r = criticalDischargeCraya1949(
+        arg.num(a, 'g_prime'),
+        arg.num(a, 'interface_distance'),
+        arg.text<SinkKind>(a, 'sink'),
+        arg.text<SinkPosition>(a, 'position'),
+        arg.optNum(a, 'width'),
+      );
+      return {
+        results: { critical_discharge: num(r.value, 'm3/s') },
+        warnings: r.warnings,
+        sources: [CRAYA_1949.source],
+      };
     },
   },
   {
@@ -50,21 +115,55 @@ export const withdrawalCalcMethods: CalcMethod[] = [
     title: 'Withdrawal-layer thickness in linear stratification',
     topic: 'withdrawal',
     params: [
-      { kind: 'number', name: 'buoyancy_frequency', unit: '1/s', description: 'buoyancy frequency N around the intake', range: { ...positive, max: 1 } },
-      { kind: 'number', name: 'discharge', unit: 'm3/s', description: 'intake discharge', range: { ...positive, max: 1e5 } },
+      {
+        kind: 'number',
+        name: 'buoyancy_frequency',
+        unit: '1/s',
+        description: 'buoyancy frequency N around the intake',
+        range: { ...positive, max: 1 },
+      },
+      {
+        kind: 'number',
+        name: 'discharge',
+        unit: 'm3/s',
+        description: 'intake discharge',
+        range: { ...positive, max: 1e5 },
+      },
       SLOT_WIDTH,
       SINK,
-      { kind: 'number', name: 'reservoir_length', unit: 'm', description: 'reservoir length at the intake level, for the regime (default: inertial assumed)', optional: true, range: { ...positive, max: 1e6 } },
+      {
+        kind: 'number',
+        name: 'reservoir_length',
+        unit: 'm',
+        description: 'reservoir length at the intake level, for the regime (default: inertial assumed)',
+        optional: true,
+        range: { ...positive, max: 1e6 },
+      },
     ],
     results: [
-      { name: 'thickness', unit: 'm', description: 'total thickness of the withdrawal layer (twice the half-thickness; before any cut by surface or bed)' },
+      {
+        name: 'thickness',
+        unit: 'm',
+        description:
+          'total thickness of the withdrawal layer (twice the half-thickness; before any cut by surface or bed)',
+      },
       { name: 'regime', unit: '', description: 'inertial or viscous' },
     ],
     run(a) {
       const sink = arg.text<SinkKind>(a, 'sink');
-      const r = withdrawalLayer({ n: arg.num(a, 'buoyancy_frequency'), discharge: arg.num(a, 'discharge'), sink, width: arg.optNum(a, 'width'), length: arg.optNum(a, 'reservoir_length') });
+      const r = withdrawalLayer({
+        n: arg.num(a, 'buoyancy_frequency'),
+        discharge: arg.num(a, 'discharge'),
+        sink,
+        width: arg.optNum(a, 'width'),
+        length: arg.optNum(a, 'reservoir_length'),
+      });
       const regime = r.regimeAssumed ? 'inertial (assumed: no reservoir length)' : r.regime;
-      return { results: { thickness: num(r.totalThickness, 'm'), regime: text(regime) }, warnings: r.warnings, sources: [(sink === 'line' ? WITHDRAWAL_LINE_SINK : WITHDRAWAL_POINT_SINK).source] };
+      return {
+        results: { thickness: num(r.totalThickness, 'm'), regime: text(regime) },
+        warnings: r.warnings,
+        sources: [(sink === 'line' ? WITHDRAWAL_LINE_SINK : WITHDRAWAL_POINT_SINK).source],
+      };
     },
   },
   {
@@ -73,13 +172,34 @@ export const withdrawalCalcMethods: CalcMethod[] = [
     topic: 'withdrawal',
     params: [
       { kind: 'profile', name: 'file', description: 'path to a CSV profile at the intake' },
-      { kind: 'text', name: 'ports', description: 'ports as depth:capacity pairs (m below the surface : m3/s), e.g. 5:40,30:40' },
+      {
+        kind: 'text',
+        name: 'ports',
+        description: 'ports as depth:capacity pairs (m below the surface : m3/s), e.g. 5:40,30:40',
+      },
       { kind: 'number', name: 'release', unit: 'm3/s', description: 'total release', range: { ...positive, max: 1e5 } },
-      { kind: 'number', name: 'target_temperature', unit: 'degC', description: 'wanted release temperature', range: { min: -3, max: 60 } },
-      { kind: 'choice', name: 'interference', description: 'combined = open ports whose withdrawal layers overlap draw one combined withdrawal; independent = each port alone', choices: INTERFERENCE, default: 'combined' },
+      {
+        kind: 'number',
+        name: 'target_temperature',
+        unit: 'degC',
+        description: 'wanted release temperature',
+        range: { min: -3, max: 60 },
+      },
+      {
+        kind: 'choice',
+        name: 'interference',
+        description:
+          'combined = open ports whose withdrawal layers overlap draw one combined withdrawal; independent = each port alone',
+        choices: INTERFERENCE,
+        default: 'combined',
+      },
     ],
     results: [
-      { name: 'temperature', unit: 'degC', description: 'temperature of the blended release (the closest achievable when infeasible)' },
+      {
+        name: 'temperature',
+        unit: 'degC',
+        description: 'temperature of the blended release (the closest achievable when infeasible)',
+      },
       { name: 'port_flows', unit: '', description: 'flow of each port' },
       { name: 'feasible', unit: '', description: 'yes when the target is met' },
     ],
@@ -88,14 +208,33 @@ export const withdrawalCalcMethods: CalcMethod[] = [
       if (!p) throw new InputError('file', '(missing)', '', 'a CSV profile', 'a profile file is required');
       const ports = parsePorts(arg.text(a, 'ports'));
       const interference = arg.text<InterferenceMode>(a, 'interference');
-      const r = optimiseRelease(p, ports, arg.num(a, 'release'), { temperature: arg.num(a, 'target_temperature') }, { sink: 'point', interference });
+      const r = optimiseRelease(
+        p,
+        ports,
+        arg.num(a, 'release'),
+        { temperature: arg.num(a, 'target_temperature') },
+        { sink: 'point', interference },
+      );
       const flows = ports.map((port, i) => `${formatShort(port.depth)} m: ${r.flows[i].toFixed(2)} m3/s`).join('; ');
-      const warnings = [`Ports are treated as orifices (point sinks); ${interference === 'combined' ? 'ports whose withdrawal layers overlap are combined (from memory, see the sources)' : 'interference between their withdrawal layers is ignored'}.`, ...r.warnings];
+      const warnings = [
+        `Ports are treated as orifices (point sinks); ${interference === 'combined' ? 'ports whose withdrawal layers overlap are combined (from memory, see the sources)' : 'interference between their withdrawal layers is ignored'}.`,
+        ...r.warnings,
+      ];
       return {
-        results: { temperature: num(r.temperature, 'degC'), port_flows: text(flows), feasible: text(r.feasible ? 'yes' : 'no') },
+        results: {
+          temperature: num(r.temperature, 'degC'),
+          port_flows: text(flows),
+          feasible: text(r.feasible ? 'yes' : 'no'),
+        },
         series: releaseSeries(p, ports, r.flows, interference === 'combined' ? r.groups : []),
         warnings,
-        sources: [RELEASE_BLEND.source, ...(interference === 'combined' ? [WITHDRAWAL_INTERFERENCE.source] : []), WITHDRAWAL_MEASURED_PROFILE.source, WITHDRAWAL_POINT_SINK.source, WITHDRAWAL_VELOCITY.source],
+        sources: [
+          RELEASE_BLEND.source,
+          ...(interference === 'combined' ? [WITHDRAWAL_INTERFERENCE.source] : []),
+          WITHDRAWAL_MEASURED_PROFILE.source,
+          WITHDRAWAL_POINT_SINK.source,
+          WITHDRAWAL_VELOCITY.source,
+        ],
       };
     },
   },
@@ -105,20 +244,34 @@ export const withdrawalCalcMethods: CalcMethod[] = [
  * Chart curves of a release split: the flow of each port, and each open port's (or interfering group's) outflow per metre
  * of depth. `groups` are the combined withdrawals (empty: every port alone).
  */
-export function releaseSeries(p: Profile, ports: readonly Port[], flows: readonly number[], groups: readonly InterferenceGroup[] = []): Series[] {
-  const out: Series[] = [{
-    title: 'Port flows', x: { label: 'Port depth', unit: 'm', values: ports.map((q) => q.depth) },
-    y: [{ label: 'Port flow', unit: 'm3/s', values: [...flows] }, { label: 'Port capacity', unit: 'm3/s', values: ports.map((q) => q.capacity) }],
-    depthAxis: true, caption: 'Flow of each port in the release split, with its capacity',
-  }];
+export function releaseSeries(
+  p: Profile,
+  ports: readonly Port[],
+  flows: readonly number[],
+  groups: readonly InterferenceGroup[] = [],
+): Series[] {
+  const out: Series[] = [
+    {
+      title: 'Port flows',
+      x: { label: 'Port depth', unit: 'm', values: ports.map((q) => q.depth) },
+      y: [
+        { label: 'Port flow', unit: 'm3/s', values: [...flows] },
+        { label: 'Port capacity', unit: 'm3/s', values: ports.map((q) => q.capacity) },
+      ],
+      depthAxis: true,
+      caption: 'Flow of each port in the release split, with its capacity',
+    },
+  ];
   const depths = ports.map((q) => q.depth);
   const combined = groups.filter((g) => g.ports.length > 1);
   ports.forEach((port, i) => {
     if (!(flows[i] > 0) || combined.some((g) => g.ports.includes(i))) return;
     const v = withdrawalVelocityProfile(p, port.depth, flows[i], { sink: 'point' });
     out.push({
-      title: `Withdrawal at the port at ${formatShort(port.depth)} m`, x: { label: 'Depth', unit: 'm', values: v.depth },
-      y: [{ label: 'Outflow per metre of depth', unit: 'm2/s', values: v.fluxPerDepth }], depthAxis: true,
+      title: `Withdrawal at the port at ${formatShort(port.depth)} m`,
+      x: { label: 'Depth', unit: 'm', values: v.depth },
+      y: [{ label: 'Outflow per metre of depth', unit: 'm2/s', values: v.fluxPerDepth }],
+      depthAxis: true,
       caption: `Velocity distribution in the withdrawal layer of the port at ${formatShort(port.depth)} m (${flows[i].toFixed(2)} m³/s)`,
     });
   });
@@ -126,8 +279,10 @@ export function releaseSeries(p: Profile, ports: readonly Port[], flows: readonl
     const v = groupFluxProfile(p, depths, flows, g, { sink: 'point' });
     const names = g.ports.map((i) => `${formatShort(depths[i])} m`).join(', ');
     out.push({
-      title: `Combined withdrawal of the ports at ${names}`, x: { label: 'Depth', unit: 'm', values: v.depth },
-      y: [{ label: 'Outflow per metre of depth', unit: 'm2/s', values: v.fluxPerDepth }], depthAxis: true,
+      title: `Combined withdrawal of the ports at ${names}`,
+      x: { label: 'Depth', unit: 'm', values: v.depth },
+      y: [{ label: 'Outflow per metre of depth', unit: 'm2/s', values: v.fluxPerDepth }],
+      depthAxis: true,
       caption: `Flow-weighted sum of the velocity distributions of the interfering ports at ${names} (${g.flow.toFixed(2)} m³/s in all)`,
     });
   }

@@ -38,7 +38,10 @@ export interface InterferenceGroup {
 /** A port's outflow at a depth and flow; callers may memoise it (the optimiser evaluates the same flows often). */
 export type OutflowFunction = (depth: number, flow: number) => PortOutflow;
 
-export const directOutflow = (p: Profile, o: ProfileWithdrawalOptions): OutflowFunction => (depth, flow) => portOutflow(p, depth, flow, o);
+export const directOutflow =
+  (p: Profile, o: ProfileWithdrawalOptions): OutflowFunction =>
+  (depth, flow) =>
+    portOutflow(p, depth, flow, o);
 
 /** A memoised outflow function for one profile and set of options. */
 export function memoisedOutflow(p: Profile, o: ProfileWithdrawalOptions): OutflowFunction {
@@ -46,14 +49,27 @@ export function memoisedOutflow(p: Profile, o: ProfileWithdrawalOptions): Outflo
   return (depth, flow) => {
     const key = `${depth}|${flow}`;
     let out = memo.get(key);
-    if (!out) { out = portOutflow(p, depth, flow, o); memo.set(key, out); }
+    if (!out) {
+      out = portOutflow(p, depth, flow, o);
+      memo.set(key, out);
+    }
     return out;
   };
 }
 
-function envelope(depths: readonly number[], members: number[], flow: number, outflow: OutflowFunction): InterferenceGroup {
+function envelope(
+  depths: readonly number[],
+  members: number[],
+  flow: number,
+  outflow: OutflowFunction,
+): InterferenceGroup {
   const limits = members.map((i) => outflow(depths[i], flow).limits);
-  return { ports: members, flow, topDepth: Math.min(...limits.map((l) => l.topDepth)), bottomDepth: Math.max(...limits.map((l) => l.bottomDepth)) };
+  return {
+    ports: members,
+    flow,
+    topDepth: Math.min(...limits.map((l) => l.topDepth)),
+    bottomDepth: Math.max(...limits.map((l) => l.bottomDepth)),
+  };
 }
 
 /**
@@ -62,8 +78,16 @@ function envelope(depths: readonly number[], members: number[], flow: number, ou
  * no zones overlap (`rounds` = 1 stops after the first pass, for reporting overlap without combining).
  * @param depths [m] port depths; @param flows [m3/s] port flows (0 = closed)
  */
-export function interferenceGroups(depths: readonly number[], flows: readonly number[], outflow: OutflowFunction, rounds = Infinity): InterferenceGroup[] {
-  const open = depths.map((_, i) => i).filter((i) => flows[i] > 0).sort((a, b) => depths[a] - depths[b] || a - b);
+export function interferenceGroups(
+  depths: readonly number[],
+  flows: readonly number[],
+  outflow: OutflowFunction,
+  rounds = Infinity,
+): InterferenceGroup[] {
+  const open = depths
+    .map((_, i) => i)
+    .filter((i) => flows[i] > 0)
+    .sort((a, b) => depths[a] - depths[b] || a - b);
   let groups = open.map((i) => envelope(depths, [i], flows[i], outflow));
   for (let round = 0; round < Math.min(rounds, open.length); round++) {
     const joined: InterferenceGroup[] = [];
@@ -72,7 +96,12 @@ export function interferenceGroups(depths: readonly number[], flows: readonly nu
       const prev = joined[joined.length - 1];
       if (prev && prev.bottomDepth > g.topDepth) {
         const members = [...prev.ports, ...g.ports].sort((a, b) => depths[a] - depths[b] || a - b);
-        joined[joined.length - 1] = { ports: members, flow: prev.flow + g.flow, topDepth: prev.topDepth, bottomDepth: Math.max(prev.bottomDepth, g.bottomDepth) };
+        joined[joined.length - 1] = {
+          ports: members,
+          flow: prev.flow + g.flow,
+          topDepth: prev.topDepth,
+          bottomDepth: Math.max(prev.bottomDepth, g.bottomDepth),
+        };
         changed = true;
       } else joined.push(g);
     }
@@ -87,11 +116,17 @@ export function interferenceGroups(depths: readonly number[], flows: readonly nu
  * flow (so two ports at one depth act as one port of their summed flow); `discharge` stays the port's own flow.
  * Closed ports report the values at their depth. Groups are those of interferenceGroups().
  */
-export function combinedOutflows(depths: readonly number[], flows: readonly number[], outflow: OutflowFunction): { outflows: PortOutflow[]; groups: InterferenceGroup[] } {
+export function combinedOutflows(
+  depths: readonly number[],
+  flows: readonly number[],
+  outflow: OutflowFunction,
+): { outflows: PortOutflow[]; groups: InterferenceGroup[] } {
   const groups = interferenceGroups(depths, flows, outflow);
   const groupFlow = depths.map(() => 0);
   for (const g of groups) for (const i of g.ports) groupFlow[i] = g.flow;
-  const outflows = depths.map((d, i) => (flows[i] > 0 ? { ...outflow(d, groupFlow[i]), discharge: flows[i] } : outflow(d, 0)));
+  const outflows = depths.map((d, i) =>
+    flows[i] > 0 ? { ...outflow(d, groupFlow[i]), discharge: flows[i] } : outflow(d, 0),
+  );
   return { outflows, groups };
 }
 
@@ -99,9 +134,21 @@ export function combinedOutflows(depths: readonly number[], flows: readonly numb
  * Outflow per metre of depth of a group, q(d) = Σ Q_i v_i(d; Q_g)/∫v_i dd, on the union of the members' grids [m2/s].
  * Its integral over depth is the group's flow.
  */
-export function groupFluxProfile(p: Profile, depths: readonly number[], flows: readonly number[], g: InterferenceGroup, o: ProfileWithdrawalOptions): { depth: number[]; fluxPerDepth: number[] } {
-  const members = g.ports.map((i) => ({ share: flows[i] / g.flow, v: withdrawalVelocityProfile(p, depths[i], g.flow, o) }));
+export function groupFluxProfile(
+  p: Profile,
+  depths: readonly number[],
+  flows: readonly number[],
+  g: InterferenceGroup,
+  o: ProfileWithdrawalOptions,
+): { depth: number[]; fluxPerDepth: number[] } {
+  const members = g.ports.map((i) => ({
+    share: flows[i] / g.flow,
+    v: withdrawalVelocityProfile(p, depths[i], g.flow, o),
+  }));
   const depth = [...new Set(members.flatMap((m) => m.v.depth))].sort((a, b) => a - b);
-  const at = (v: { depth: number[]; fluxPerDepth: number[] }, d: number) => (d < v.depth[0] || d > v.depth[v.depth.length - 1] || v.depth.length < 2 ? 0 : interpolateAt(v.depth, v.fluxPerDepth, d));
+  const at = (v: { depth: number[]; fluxPerDepth: number[] }, d: number) =>
+    d < v.depth[0] || d > v.depth[v.depth.length - 1] || v.depth.length < 2
+      ? 0
+      : interpolateAt(v.depth, v.fluxPerDepth, d);
   return { depth, fluxPerDepth: depth.map((d) => members.reduce((s, m) => s + m.share * at(m.v, d), 0)) };
 }

@@ -30,7 +30,8 @@ export const WITHDRAWAL_POINT_SINK: MethodInfo = {
     'δ = L F₃^⅓ = (Q/N)^⅓ when R₃ = F₃ Gr^½ > 1; δ = 2.9 (νκ)^⅙ (L/N)^⅓ when R₃ ≤ 1, after Lawrence, G.A., Imberger, J. (1979), ' +
     'Selective withdrawal through a point sink in a continuously stratified fluid with a pycnocline, Univ. W. Australia Rep. ED-79-002); ' +
     'scaling δ ∝ (Q/N)^⅓: Ivey, G.N., Blake, S. (1985). J. Fluid Mech. 161, 115–137.',
-  equation: 'δ = half-thickness; inertial: δ = (Q/N)^⅓; viscous: δ = 2.9 (νκ)^⅙ (L/N)^⅓; R₃ = Q/(N L³) · N L²/ν chooses (R₃ > 1 inertial)',
+  equation:
+    'δ = half-thickness; inertial: δ = (Q/N)^⅓; viscous: δ = 2.9 (νκ)^⅙ (L/N)^⅓; R₃ = Q/(N L³) · N L²/ν chooses (R₃ > 1 inertial)',
   validity: {
     R: { min: 0.01, max: 1e6, unit: '1', note: 'laboratory range of the regime parameter' },
   },
@@ -71,9 +72,15 @@ export interface LayerResult {
  * @param q [m2/s] discharge per unit width; @param n [1/s]; @param length [m] optional; @param nu [m2/s]
  * @returns half-thickness [m] and regime
  */
-export function halfThicknessLineSinkImberger1976(q: number, n: number, length?: number, nu = 1.0e-6): Omit<LayerResult, 'method' | 'warnings'> {
+export function halfThicknessLineSinkImberger1976(
+  q: number,
+  n: number,
+  length?: number,
+  nu = 1.0e-6,
+): Omit<LayerResult, 'method' | 'warnings'> {
   const inertial = 2 * Math.sqrt(q / n);
-  if (length === undefined) return { halfThickness: inertial, totalThickness: 2 * inertial, regime: 'inertial', regimeAssumed: true };
+  if (length === undefined)
+    return { halfThickness: inertial, totalThickness: 2 * inertial, regime: 'inertial', regimeAssumed: true };
   const r = q / (n ** (1 / 3) * nu ** (2 / 3) * length ** (2 / 3));
   const d = r > 1 ? inertial : 2 * Math.cbrt((nu * length) / n);
   return { halfThickness: d, totalThickness: 2 * d, regime: r > 1 ? 'inertial' : 'viscous', r, regimeAssumed: false };
@@ -84,10 +91,17 @@ export function halfThicknessLineSinkImberger1976(q: number, n: number, length?:
  * @param discharge [m3/s]; @param n [1/s]; @param length [m] optional; @param nu, kappa [m2/s]
  * @returns half-thickness [m] and regime
  */
-export function halfThicknessPointSinkImbergerPatterson1990(discharge: number, n: number, length?: number, nu = 1.0e-6, kappa = 1.43e-7): Omit<LayerResult, 'method' | 'warnings'> {
+export function halfThicknessPointSinkImbergerPatterson1990(
+  discharge: number,
+  n: number,
+  length?: number,
+  nu = 1.0e-6,
+  kappa = 1.43e-7,
+): Omit<LayerResult, 'method' | 'warnings'> {
   const inertial = Math.cbrt(discharge / n);
-  if (length === undefined) return { halfThickness: inertial, totalThickness: 2 * inertial, regime: 'inertial', regimeAssumed: true };
-  const r = discharge / (n * length ** 3) * ((n * length ** 2) / nu);
+  if (length === undefined)
+    return { halfThickness: inertial, totalThickness: 2 * inertial, regime: 'inertial', regimeAssumed: true };
+  const r = (discharge / (n * length ** 3)) * ((n * length ** 2) / nu);
   const d = r > 1 ? inertial : 2.9 * (nu * kappa) ** (1 / 6) * Math.cbrt(length / n);
   return { halfThickness: d, totalThickness: 2 * d, regime: r > 1 ? 'inertial' : 'viscous', r, regimeAssumed: false };
 }
@@ -96,13 +110,17 @@ export function halfThicknessPointSinkImbergerPatterson1990(discharge: number, n
 export function withdrawalLayer(input: LayerInput): LayerResult {
   const n = requireInRange('buoyancy_frequency', input.n, '1/s', { ...positive, max: 1 });
   const discharge = requireInRange('discharge', input.discharge, 'm3/s', { ...positive, max: 1e5 });
-  const length = input.length === undefined ? undefined : requireInRange('reservoir_length', input.length, 'm', { ...positive, max: 1e6 });
+  const length =
+    input.length === undefined
+      ? undefined
+      : requireInRange('reservoir_length', input.length, 'm', { ...positive, max: 1e6 });
   const nu = requireInRange('nu', input.nu ?? 1.0e-6, 'm2/s', { ...positive, max: 1 });
   const kappa = requireInRange('kappa', input.kappa ?? 1.43e-7, 'm2/s', { ...positive, max: 1 });
   let core: Omit<LayerResult, 'method' | 'warnings'>;
   let info: MethodInfo;
   if (input.sink === 'line') {
-    if (input.width === undefined) throw new InputError('width', '(missing)', 'm', '> 0 m', 'a line sink needs the slot width across the channel');
+    if (input.width === undefined)
+      throw new InputError('width', '(missing)', 'm', '> 0 m', 'a line sink needs the slot width across the channel');
     const width = requireInRange('width', input.width, 'm', { ...positive, max: 1e5 });
     core = halfThicknessLineSinkImberger1976(discharge / width, n, length, nu);
     info = WITHDRAWAL_LINE_SINK;
@@ -111,8 +129,15 @@ export function withdrawalLayer(input: LayerInput): LayerResult {
     info = WITHDRAWAL_POINT_SINK;
   }
   const warnings = core.r === undefined ? [] : validityWarnings(info, { R: core.r });
-  if (core.regimeAssumed) warnings.push('No reservoir length given: the inertial regime is assumed (it applies when R = F Gr^⅓ > 1, usual for reservoir outlets).');
-  else if (core.r !== undefined && core.r > 0.5 && core.r < 2) warnings.push(`R = ${core.r.toFixed(2)} is near 1: the layer is between the inertial and viscous regimes.`);
-  if (length !== undefined && core.halfThickness > length) warnings.push('The withdrawal layer is thicker than the reservoir is long: the steady-layer formulas do not apply.');
+  if (core.regimeAssumed)
+    warnings.push(
+      'No reservoir length given: the inertial regime is assumed (it applies when R = F Gr^⅓ > 1, usual for reservoir outlets).',
+    );
+  else if (core.r !== undefined && core.r > 0.5 && core.r < 2)
+    warnings.push(`R = ${core.r.toFixed(2)} is near 1: the layer is between the inertial and viscous regimes.`);
+  if (length !== undefined && core.halfThickness > length)
+    warnings.push(
+      'The withdrawal layer is thicker than the reservoir is long: the steady-layer formulas do not apply.',
+    );
   return { ...core, method: info.id, warnings };
 }

@@ -4,7 +4,11 @@ import type { MethodInfo } from '../core/method';
 import { GRAVITY } from '../quantities';
 import { brentRoot } from '../numerics/roots';
 import { interpolateAt, profileBottom, type Profile } from '../profile/profile';
-import { halfThicknessLineSinkImberger1976, halfThicknessPointSinkImbergerPatterson1990, type WithdrawalRegime } from './layer';
+import {
+  halfThicknessLineSinkImberger1976,
+  halfThicknessPointSinkImbergerPatterson1990,
+  type WithdrawalRegime,
+} from './layer';
 import type { SinkKind } from './two-layer';
 
 export const WITHDRAWAL_MEASURED_PROFILE: MethodInfo = {
@@ -62,12 +66,18 @@ export interface ProfileWithdrawal {
 }
 
 /** Validated options shared by the profile methods. */
-export function checkProfileOptions(p: Profile, portDepth: number, discharge: number, o: ProfileWithdrawalOptions): { bed: number } {
+export function checkProfileOptions(
+  p: Profile,
+  portDepth: number,
+  discharge: number,
+  o: ProfileWithdrawalOptions,
+): { bed: number } {
   const bed = requireInRange('bottom_depth', o.bottomDepth ?? profileBottom(p), 'm', { ...positive, max: 11000 });
   requireInRange('port_depth', portDepth, 'm', { min: 0, max: bed });
   requireInRange('discharge', discharge, 'm3/s', { ...nonNegative, max: 1e5 });
   if (o.sink === 'line') {
-    if (o.width === undefined) throw new InputError('width', '(missing)', 'm', '> 0 m', 'a line sink needs the slot width across the channel');
+    if (o.width === undefined)
+      throw new InputError('width', '(missing)', 'm', '> 0 m', 'a line sink needs the slot width across the channel');
     requireInRange('width', o.width, 'm', { ...positive, max: 1e5 });
   }
   if (o.length !== undefined) requireInRange('reservoir_length', o.length, 'm', { ...positive, max: 1e6 });
@@ -75,25 +85,59 @@ export function checkProfileOptions(p: Profile, portDepth: number, discharge: nu
 }
 
 /** Half-thickness of the linear-stratification formula for the sink [m]; Infinity for N ≤ 0. */
-export function linearHalfThickness(n: number, discharge: number, o: ProfileWithdrawalOptions): { d: number; regime: WithdrawalRegime } {
+export function linearHalfThickness(
+  n: number,
+  discharge: number,
+  o: ProfileWithdrawalOptions,
+): { d: number; regime: WithdrawalRegime } {
   if (!(n > 0)) return { d: Infinity, regime: 'inertial' };
-  const r = o.sink === 'line'
-    ? halfThicknessLineSinkImberger1976(discharge / (o.width as number), n, o.length, o.nu)
-    : halfThicknessPointSinkImbergerPatterson1990(discharge, n, o.length, o.nu, o.kappa);
+  const r =
+    o.sink === 'line'
+      ? halfThicknessLineSinkImberger1976(discharge / (o.width as number), n, o.length, o.nu)
+      : halfThicknessPointSinkImbergerPatterson1990(discharge, n, o.length, o.nu, o.kappa);
   return { d: r.halfThickness, regime: r.regime };
 }
 
-function sideLimit(p: Profile, portDepth: number, discharge: number, o: ProfileWithdrawalOptions, sign: -1 | 1, maxDistance: number): SideLimit {
+function sideLimit(
+  p: Profile,
+  portDepth: number,
+  discharge: number,
+  o: ProfileWithdrawalOptions,
+  sign: -1 | 1,
+  maxDistance: number,
+): SideLimit {
   const rhoPort = interpolateAt(p.depth, p.density, portDepth);
   const drho = (a: number) => sign * (interpolateAt(p.depth, p.density, portDepth + sign * a) - rhoPort);
-  const nAt = (a: number) => { const n2 = (GRAVITY * drho(a)) / (rhoPort * a); return n2 > 0 ? Math.sqrt(n2) : 0; };
-  const side = (a: number, cut: boolean): SideLimit => {
-    const n = nAt(a), lin = linearHalfThickness(n, discharge, o);
-    return { distance: a, densityDifference: Math.abs(drho(a)), n, unboundedHalfThickness: lin.d, cutByBoundary: cut, regime: lin.regime };
+  const nAt = (a: number) => {
+    const n2 = (GRAVITY * drho(a)) / (rhoPort * a);
+    return n2 > 0 ? Math.sqrt(n2) : 0;
   };
-  if (maxDistance <= 0) return { distance: 0, densityDifference: 0, n: 0, unboundedHalfThickness: 0, cutByBoundary: true, regime: 'inertial' };
+  const side = (a: number, cut: boolean): SideLimit => {
+    const n = nAt(a),
+      lin = linearHalfThickness(n, discharge, o);
+    return {
+      distance: a,
+      densityDifference: Math.abs(drho(a)),
+      n,
+      unboundedHalfThickness: lin.d,
+      cutByBoundary: cut,
+      regime: lin.regime,
+    };
+  };
+  if (maxDistance <= 0)
+    return {
+      distance: 0,
+      densityDifference: 0,
+      n: 0,
+      unboundedHalfThickness: 0,
+      cutByBoundary: true,
+      regime: 'inertial',
+    };
   if (discharge === 0) return side(Math.min(maxDistance, 1e-9), false);
-  const f = (a: number) => { const d = linearHalfThickness(nAt(a), discharge, o).d; return Number.isFinite(d) ? a - d : -maxDistance; };
+  const f = (a: number) => {
+    const d = linearHalfThickness(nAt(a), discharge, o).d;
+    return Number.isFinite(d) ? a - d : -maxDistance;
+  };
   const steps = 400;
   let prev = maxDistance * 1e-9;
   for (let k = 1; k <= steps; k++) {
@@ -114,13 +158,36 @@ function sideLimit(p: Profile, portDepth: number, discharge: number, o: ProfileW
  * @param p measured profile; @param portDepth [m] below the surface; @param discharge [m3/s]
  * @returns limits [m], the N and density difference of each side, and warnings
  */
-export function withdrawalLimitsBohanGrace1973(p: Profile, portDepth: number, discharge: number, o: ProfileWithdrawalOptions): ProfileWithdrawal {
+export function withdrawalLimitsBohanGrace1973(
+  p: Profile,
+  portDepth: number,
+  discharge: number,
+  o: ProfileWithdrawalOptions,
+): ProfileWithdrawal {
   const { bed } = checkProfileOptions(p, portDepth, discharge, o);
   const upper = sideLimit(p, portDepth, discharge, o, -1, portDepth);
   const lower = sideLimit(p, portDepth, discharge, o, 1, bed - portDepth);
   const warnings: string[] = [];
-  if (upper.cutByBoundary && portDepth > 0 && discharge > 0) warnings.push(`The withdrawal layer of the port at ${formatShort(portDepth)} m reaches the surface: water is drawn from the surface down.`);
-  if (lower.cutByBoundary && bed > portDepth && discharge > 0) warnings.push(`The withdrawal layer of the port at ${formatShort(portDepth)} m reaches the bed at ${formatShort(bed)} m.`);
-  if (p.depth[0] > 0 && portDepth - upper.distance < p.depth[0]) warnings.push(`The layer reaches above the shallowest sample (${p.depth[0]} m); the shallowest values are used up to the surface.`);
-  return { portDepth, discharge, topDepth: portDepth - upper.distance, bottomDepth: portDepth + lower.distance, upper, lower, method: WITHDRAWAL_MEASURED_PROFILE.id, warnings: [...p.warnings, ...warnings] };
+  if (upper.cutByBoundary && portDepth > 0 && discharge > 0)
+    warnings.push(
+      `The withdrawal layer of the port at ${formatShort(portDepth)} m reaches the surface: water is drawn from the surface down.`,
+    );
+  if (lower.cutByBoundary && bed > portDepth && discharge > 0)
+    warnings.push(
+      `The withdrawal layer of the port at ${formatShort(portDepth)} m reaches the bed at ${formatShort(bed)} m.`,
+    );
+  if (p.depth[0] > 0 && portDepth - upper.distance < p.depth[0])
+    warnings.push(
+      `The layer reaches above the shallowest sample (${p.depth[0]} m); the shallowest values are used up to the surface.`,
+    );
+  return {
+    portDepth,
+    discharge,
+    topDepth: portDepth - upper.distance,
+    bottomDepth: portDepth + lower.distance,
+    upper,
+    lower,
+    method: WITHDRAWAL_MEASURED_PROFILE.id,
+    warnings: [...p.warnings, ...warnings],
+  };
 }

@@ -1,6 +1,11 @@
 import type { MethodInfo } from '../core/method';
 import { interpolateAt, profileColumns, type Profile } from '../profile/profile';
-import { withdrawalLimitsBohanGrace1973, type ProfileWithdrawal, type ProfileWithdrawalOptions, type SideLimit } from './measured';
+import {
+  withdrawalLimitsBohanGrace1973,
+  type ProfileWithdrawal,
+  type ProfileWithdrawalOptions,
+  type SideLimit,
+} from './measured';
 
 export const WITHDRAWAL_VELOCITY: MethodInfo = {
   id: 'withdrawal-velocity-bohan-grace1973',
@@ -9,7 +14,8 @@ export const WITHDRAWAL_VELOCITY: MethodInfo = {
     'Bohan, J.P., Grace, J.L. Jr. (1973). Selective withdrawal from man-made lakes. Tech. Rep. H-73-4, U.S. Army Engineer ' +
     'Waterways Experiment Station (normalised velocity v/v_max = 1 − (Δρ/Δρ_limit)² on each side of the port; form from memory). ' +
     'Outflow quality: conservation of mass and of each constituent, c̄ = ∫ v c dd / ∫ v dd (Fischer et al. 1979, Ch. 6).',
-  equation: 'v/v_max = 1 − max((Δρ/Δρ_limit)², (a/a_limit)²), Δρ = |ρ(d) − ρ_port|, a = |d − d_port| (the two terms coincide in linear stratification); a side cut by the surface or the bed: v/v_max = 1 − (a/δ)²; c̄ = ∫ v c dd / ∫ v dd',
+  equation:
+    'v/v_max = 1 − max((Δρ/Δρ_limit)², (a/a_limit)²), Δρ = |ρ(d) − ρ_port|, a = |d − d_port| (the two terms coincide in linear stratification); a side cut by the surface or the bed: v/v_max = 1 − (a/δ)²; c̄ = ∫ v c dd / ∫ v dd',
   validity: {},
 };
 
@@ -26,7 +32,9 @@ export function relativeVelocity(p: Profile, w: ProfileWithdrawal, d: number): n
   const [side, other]: SideLimit[] = d < w.portDepth ? [w.upper, w.lower] : [w.lower, w.upper];
   const a = Math.abs(d - w.portDepth);
   if (side.distance === 0) return 1;
-  const reach = side.cutByBoundary ? Math.min(side.unboundedHalfThickness, Math.max(side.distance, other.distance)) : side.distance;
+  const reach = side.cutByBoundary
+    ? Math.min(side.unboundedHalfThickness, Math.max(side.distance, other.distance))
+    : side.distance;
   let s = 1 - (a / reach) ** 2;
   if (!side.cutByBoundary && side.densityDifference > 0) {
     const rhoPort = interpolateAt(p.depth, p.density, w.portDepth);
@@ -54,12 +62,21 @@ const GRID = 401;
  * @param p profile; @param portDepth [m]; @param discharge [m3/s]
  * @returns depth [m], v/v_max [1], flux per depth [m2/s] (trapezoid integral = discharge)
  */
-export function withdrawalVelocityProfile(p: Profile, portDepth: number, discharge: number, o: ProfileWithdrawalOptions): WithdrawalVelocityProfile {
+export function withdrawalVelocityProfile(
+  p: Profile,
+  portDepth: number,
+  discharge: number,
+  o: ProfileWithdrawalOptions,
+): WithdrawalVelocityProfile {
   const limits = withdrawalLimitsBohanGrace1973(p, portDepth, discharge, o);
   const span = limits.bottomDepth - limits.topDepth;
   if (!(span > 0)) return { depth: [portDepth], relativeVelocity: [1], fluxPerDepth: [0], limits };
   // uniform grid plus the profile samples and the port, so the trapezoid rule never straddles a kink of the profile
-  const nodes = [...Array.from({ length: GRID }, (_, i) => limits.topDepth + (span * i) / (GRID - 1)), portDepth, ...p.depth.filter((d) => d > limits.topDepth && d < limits.bottomDepth)];
+  const nodes = [
+    ...Array.from({ length: GRID }, (_, i) => limits.topDepth + (span * i) / (GRID - 1)),
+    portDepth,
+    ...p.depth.filter((d) => d > limits.topDepth && d < limits.bottomDepth),
+  ];
   const depth = [...new Set(nodes.sort((a, b) => a - b))];
   const rel = depth.map((d) => relativeVelocity(p, limits, d));
   const area = trapezoid(depth, rel);
@@ -96,14 +113,33 @@ export interface PortOutflow {
  * Flow-weighted quality of one port's outflow: c̄ = ∫ v c dd / ∫ v dd for every column of the profile.
  * A closed port (discharge 0) reports the values at the port depth.
  */
-export function portOutflow(p: Profile, portDepth: number, discharge: number, o: ProfileWithdrawalOptions): PortOutflow {
+export function portOutflow(
+  p: Profile,
+  portDepth: number,
+  discharge: number,
+  o: ProfileWithdrawalOptions,
+): PortOutflow {
   const v = withdrawalVelocityProfile(p, portDepth, discharge, o);
   const weight = trapezoid(v.depth, v.relativeVelocity);
   const columns = profileColumns(p).map((c) => {
     const at = (d: number) => interpolateAt(p.depth, c.values, d);
-    const value = weight > 0 ? trapezoid(v.depth, v.depth.map((d, i) => v.relativeVelocity[i] * at(d))) / weight : at(portDepth);
+    const value =
+      weight > 0
+        ? trapezoid(
+            v.depth,
+            v.depth.map((d, i) => v.relativeVelocity[i] * at(d)),
+          ) / weight
+        : at(portDepth);
     return { name: c.name, unit: c.unit, value };
   });
   const get = (name: string) => columns.find((c) => c.name === name)!.value;
-  return { portDepth, discharge, temperature: get('temperature'), density: get('density'), columns, limits: v.limits, warnings: v.limits.warnings };
+  return {
+    portDepth,
+    discharge,
+    temperature: get('temperature'),
+    density: get('density'),
+    columns,
+    limits: v.limits,
+    warnings: v.limits.warnings,
+  };
 }

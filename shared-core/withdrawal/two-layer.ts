@@ -57,14 +57,26 @@ export function crayaCoefficient(sink: SinkKind, position: SinkPosition): number
  * @source Craya (1949); Islam & Zhu (2015)
  * @validity sharp interface, far layer deep, no ambient current
  */
-export function criticalDischargeCraya1949(gPrime: number, interfaceDistance: number, sink: SinkKind, position: SinkPosition = 'wall', width?: number): Scalar {
+export function criticalDischargeCraya1949(
+  gPrime: number,
+  interfaceDistance: number,
+  sink: SinkKind,
+  position: SinkPosition = 'wall',
+  width?: number,
+): Scalar {
   const g = requireInRange('g_prime', gPrime, 'm/s2', { ...positive, max: 20 });
   const h = requireInRange('interface_distance', interfaceDistance, 'm', { ...positive, max: 1e4 });
   const c = crayaCoefficient(sink, position);
   const inputs = { g_prime: g, interface_distance: h };
   if (sink === 'point') return scalar(CRAYA_1949, c * Math.sqrt(g * h ** 5), 'm3/s', inputs);
-  if (width === undefined) throw new InputError('width', '(missing)', 'm', '> 0 m', 'a line sink needs the slot width across the channel');
+  if (width === undefined)
+    throw new InputError('width', '(missing)', 'm', '> 0 m', 'a line sink needs the slot width across the channel');
   const b = requireInRange('width', width, 'm', { ...positive, max: 1e5 });
-  const extra = b < 2 * h ? [`The slot width ${b} m is less than twice the interface distance: the flow is three-dimensional and a point-sink estimate may be closer.`] : [];
+  const extra =
+    b < 2 * h
+      ? [
+          `The slot width ${b} m is less than twice the interface distance: the flow is three-dimensional and a point-sink estimate may be closer.`,
+        ]
+      : [];
   return scalar(CRAYA_1949, c * Math.sqrt(g * h ** 3) * b, 'm3/s', inputs, extra);
 }

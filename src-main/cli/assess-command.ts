@@ -6,7 +6,11 @@ import { UsageError, type CommandResult } from './errors';
 
 /** A short plain-text summary: per estimate its key result and warnings count. */
 export function summariseAssessment(a: Assessment): string {
-  const lines = [`${a.project.name} — ${a.waterBody}`, `gprime ${a.gprimeVersion}, site file sha256 ${a.siteHash.slice(0, 16)}…`, ''];
+  const lines = [
+    `${a.project.name} — ${a.waterBody}`,
+    `gprime ${a.gprimeVersion}, site file sha256 ${a.siteHash.slice(0, 16)}…`,
+    '',
+  ];
   for (const e of a.estimates) {
     const where = [e.feature?.name, e.condition?.name].filter(Boolean).join(', ');
     if (e.status === 'error') {
@@ -17,15 +21,21 @@ export function summariseAssessment(a: Assessment): string {
     const r = e.results[key] ?? { value: '', unit: '' };
     const value = typeof r.value === 'number' ? formatNumber(r.value) : r.value;
     const band = e.uncertainty?.bands.find((b) => b.name === key);
-    const bandText = band ? ` (${Math.round(e.uncertainty!.coverage * 100)} % band ${formatNumber(band.low)} … ${formatNumber(band.high)})` : '';
-    lines.push(`• ${e.id} (${e.method}${where ? `; ${where}` : ''}): ${key} = ${value}${r.unit && r.unit !== '1' ? ' ' + r.unit : ''}${bandText}` +
-      (e.warnings.length ? `  [${e.warnings.length} warning${e.warnings.length > 1 ? 's' : ''}]` : ''));
+    const bandText = band
+      ? ` (${Math.round(e.uncertainty!.coverage * 100)} % band ${formatNumber(band.low)} … ${formatNumber(band.high)})`
+      : '';
+    lines.push(
+      `• ${e.id} (${e.method}${where ? `; ${where}` : ''}): ${key} = ${value}${r.unit && r.unit !== '1' ? ' ' + r.unit : ''}${bandText}` +
+        (e.warnings.length ? `  [${e.warnings.length} warning${e.warnings.length > 1 ? 's' : ''}]` : ''),
+    );
   }
   if (a.compliance.length) {
     lines.push('', 'Mixing-zone compliance (required vs achieved dilution at the boundary):');
     for (const r of a.compliance) {
       const f = (x: number | null) => (x === null ? '—' : formatNumber(x));
-      lines.push(`  ${r.verdict.padEnd(13)} ${r.feature}, ${r.condition}, ${r.constituent}: required ${f(r.requiredDilution)}, achieved ${f(r.achievedDilution)}`);
+      lines.push(
+        `  ${r.verdict.padEnd(13)} ${r.feature}, ${r.condition}, ${r.constituent}: required ${f(r.requiredDilution)}, achieved ${f(r.achievedDilution)}`,
+      );
     }
   }
   lines.push('', a.caution);
@@ -50,7 +60,11 @@ export function parseAssessArgs(args: string[]): AssessOptions {
       return v;
     };
     if (a === '--out') opts.out = value();
-    else if (a === '--format') opts.formats = value().split(',').map((s) => s.trim()).filter(Boolean);
+    else if (a === '--format')
+      opts.formats = value()
+        .split(',')
+        .map((s) => s.trim())
+        .filter(Boolean);
     else if (a === '--units') {
       const u = value();
       if (u !== 'si' && u !== 'us') throw new UsageError(`--units takes si or us, not "${u}"`);
@@ -59,7 +73,8 @@ export function parseAssessArgs(args: string[]): AssessOptions {
     else if (!opts.file) opts.file = a;
     else throw new UsageError(`unexpected argument "${a}"`);
   }
-  if (!opts.file) throw new UsageError('gprime assess needs a site file: gprime assess <site file> [--json] [--out <folder>]');
+  if (!opts.file)
+    throw new UsageError('gprime assess needs a site file: gprime assess <site file> [--json] [--out <folder>]');
   return opts;
 }
 
@@ -70,8 +85,15 @@ export async function assessCommand(args: string[], json: boolean): Promise<Comm
   const assessment = assessSite(loaded.site, { gprimeVersion: GPRIME_VERSION, siteHash: loaded.hash });
   if (opts.out) {
     const { writeReport } = await import('../report/write-report');
-    const written = await writeReport(loaded, assessment, { outDir: opts.out, formats: opts.formats, units: opts.units ?? loaded.site.units });
-    const summary = summariseAssessment(assessment) + `\n\nWrote ${written.length} files to ${opts.out}:\n` + written.map((w) => `  ${w}`).join('\n');
+    const written = await writeReport(loaded, assessment, {
+      outDir: opts.out,
+      formats: opts.formats,
+      units: opts.units ?? loaded.site.units,
+    });
+    const summary =
+      summariseAssessment(assessment) +
+      `\n\nWrote ${written.length} files to ${opts.out}:\n` +
+      written.map((w) => `  ${w}`).join('\n');
     return { stdout: json ? JSON.stringify({ ...assessment, written }) : summary };
   }
   return { stdout: json ? JSON.stringify(assessment) : summariseAssessment(assessment) };

@@ -21,14 +21,22 @@ export function formatCalcText(method: CalcMethod, out: CalcOutput, appendix?: s
 /** Plain-text rendering of the uncertainty bands of a calc result. */
 export function formatUncertaintyText(r: UncertaintyResult): string {
   const pc = Math.round(r.coverage * 100);
-  const lines = [`Uncertainty: ${pc} % band from ${r.evaluated} of ${r.samples} Monte Carlo draws`, `  inputs (one standard deviation): ${r.inputs.map((i) => `${i.name} ± ${formatNumber(i.standardUncertainty)}`).join(', ')}`];
+  const lines = [
+    `Uncertainty: ${pc} % band from ${r.evaluated} of ${r.samples} Monte Carlo draws`,
+    `  inputs (one standard deviation): ${r.inputs.map((i) => `${i.name} ± ${formatNumber(i.standardUncertainty)}`).join(', ')}`,
+  ];
   const width = Math.max(...r.bands.map((b) => b.name.length));
   for (const b of r.bands) {
     const u = b.unit && b.unit !== '1' ? ' ' + b.unit : '';
-    lines.push(`  ${b.name.padEnd(width)}  ${formatNumber(b.low)} … ${formatNumber(b.high)}${u}  (median ${formatNumber(b.median)}, s.d. ${formatNumber(b.standardDeviation)})`);
+    lines.push(
+      `  ${b.name.padEnd(width)}  ${formatNumber(b.low)} … ${formatNumber(b.high)}${u}  (median ${formatNumber(b.median)}, s.d. ${formatNumber(b.standardDeviation)})`,
+    );
   }
   if (r.warnings.length) lines.push(...r.warnings.map((w) => `  ! ${w}`));
-  lines.push(`  - ${MONTE_CARLO_JCGM101.source}`, '  The band covers the stated input uncertainties only, not the error of the method itself.');
+  lines.push(
+    `  - ${MONTE_CARLO_JCGM101.source}`,
+    '  The band covers the stated input uncertainties only, not the error of the method itself.',
+  );
   return lines.join('\n');
 }
 

@@ -47,7 +47,8 @@ export async function main(argv: string[]): Promise<number> {
     process.stdout.write(result.stdout + '\n');
     return result.exitCode ?? 0;
   } catch (e) {
-    const bad = e instanceof InputError || e instanceof ProfileError || e instanceof UsageError || e instanceof SiteFileError;
+    const bad =
+      e instanceof InputError || e instanceof ProfileError || e instanceof UsageError || e instanceof SiteFileError;
     const message = e instanceof Error ? e.message : String(e);
     if (json) {
       const field = e instanceof InputError ? e.field : undefined;

@@ -2,4 +2,9 @@
 import { bundleIfStale } from '../shell/bundle.js';
 
 await bundleIfStale({ entry: 'src-main/electron/main.ts', outfile: 'dist/electron/main.js' });
-await bundleIfStale({ entry: 'src-main/electron/preload.cts', outfile: 'dist/electron/preload.cjs', format: 'cjs', external: ['electron'] });
+await bundleIfStale({
+  entry: 'src-main/electron/preload.cts',
+  outfile: 'dist/electron/preload.cjs',
+  format: 'cjs',
+  external: ['electron'],
+});

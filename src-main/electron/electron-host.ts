@@ -11,7 +11,10 @@ const SITE_FILTERS = [{ name: 'gprime site', extensions: [SITE_FILE_EXTENSION] }
  * Files through native dialogs. The renderer may only touch files the user picked in a dialog, opened
  * from the recent list or the command line, and folders picked for reports: `grant` records them.
  */
-export function electronHost(window: () => BrowserWindow | null, recent: () => string[]): ShellHost & { grant(path: string): string } {
+export function electronHost(
+  window: () => BrowserWindow | null,
+  recent: () => string[],
+): ShellHost & { grant(path: string): string } {
   const granted = new Set<string>();
   const grant = (path: string) => {
     const abs = resolve(path);
@@ -21,7 +24,10 @@ export function electronHost(window: () => BrowserWindow | null, recent: () => s
   const allowed = (path: string, what: string) => {
     const abs = resolve(path);
     if (granted.has(abs) || recent().includes(abs)) return abs;
-    throw new ServiceError('forbidden', `${path}: the workspace may only use ${what} chosen in a dialog or from the recent list`);
+    throw new ServiceError(
+      'forbidden',
+      `${path}: the workspace may only use ${what} chosen in a dialog or from the recent list`,
+    );
   };
   const parent = () => window() ?? undefined;
   return {
@@ -36,21 +42,32 @@ export function electronHost(window: () => BrowserWindow | null, recent: () => s
       return r.canceled || !r.filePaths[0] ? null : grant(r.filePaths[0]);
     },
     pickSavePath: async (suggestedName) => {
-      const options = { title: 'Save the site as', defaultPath: safeSiteFileName(suggestedName), filters: SITE_FILTERS };
+      const options = {
+        title: 'Save the site as',
+        defaultPath: safeSiteFileName(suggestedName),
+        filters: SITE_FILTERS,
+      };
       const win = parent();
       const r = win ? await dialog.showSaveDialog(win, options) : await dialog.showSaveDialog(options);
       if (r.canceled || !r.filePath) return null;
-      const path = r.filePath.toLowerCase().endsWith(`.${SITE_FILE_EXTENSION}`) ? r.filePath : `${r.filePath}.${SITE_FILE_EXTENSION}`;
+      const path = r.filePath.toLowerCase().endsWith(`.${SITE_FILE_EXTENSION}`)
+        ? r.filePath
+        : `${r.filePath}.${SITE_FILE_EXTENSION}`;
       return grant(path);
     },
     pickExportDir: async () => {
-      const options = { title: 'Folder for the report', properties: ['openDirectory' as const, 'createDirectory' as const] };
+      const options = {
+        title: 'Folder for the report',
+        properties: ['openDirectory' as const, 'createDirectory' as const],
+      };
       const win = parent();
       const r = win ? await dialog.showOpenDialog(win, options) : await dialog.showOpenDialog(options);
       return r.canceled || !r.filePaths[0] ? null : grant(r.filePaths[0]);
     },
     writeClipboardImage: async (png) => {
-      await clipboard.write([new ClipboardItem({ 'image/png': new Blob([new Uint8Array(png)], { type: 'image/png' }) })]);
+      await clipboard.write([
+        new ClipboardItem({ 'image/png': new Blob([new Uint8Array(png)], { type: 'image/png' }) }),
+      ]);
     },
   };
 }

@@ -20,11 +20,19 @@ export function isTrustedSender(frame: SenderFrame | null | undefined): boolean 
   }
 }
 
-const FORBIDDEN: Reply<never> = { ok: false, error: { code: 'forbidden', message: 'this request did not come from the gprime workspace' } };
+const FORBIDDEN: Reply<never> = {
+  ok: false,
+  error: { code: 'forbidden', message: 'this request did not come from the gprime workspace' },
+};
 
 /** Registers one handler per contract channel: sender checked, payload validated, answer always a Reply. */
-export function registerIpc(handlers: ChannelHandlers, trusted: (frame: SenderFrame | null | undefined) => boolean = isTrustedSender): void {
+export function registerIpc(
+  handlers: ChannelHandlers,
+  trusted: (frame: SenderFrame | null | undefined) => boolean = isTrustedSender,
+): void {
   for (const channel of CHANNEL_NAMES) {
-    ipcMain.handle(IPC_PREFIX + channel, async (event, payload: unknown) => (trusted(event.senderFrame) ? dispatch(handlers, channel, payload) : FORBIDDEN));
+    ipcMain.handle(IPC_PREFIX + channel, async (event, payload: unknown) =>
+      trusted(event.senderFrame) ? dispatch(handlers, channel, payload) : FORBIDDEN,
+    );
   }
 }

@@ -18,7 +18,8 @@ registerAppScheme();
 app.enableSandbox();
 
 /** Site files named on the command line (or by the desktop's "open with"). */
-const siteArgs = (argv: string[]) => argv.slice(app.isPackaged ? 1 : 2).filter((a) => !a.startsWith('-') && a.endsWith('.gpsite'));
+const siteArgs = (argv: string[]) =>
+  argv.slice(app.isPackaged ? 1 : 2).filter((a) => !a.startsWith('-') && a.endsWith('.gpsite'));
 
 if (!app.requestSingleInstanceLock()) app.quit();
 else {
@@ -30,14 +31,22 @@ else {
 function start(): void {
   const dataDir = process.env.GPRIME_DATA_DIR ?? app.getPath('userData');
   const recent = new RecentFiles(dataDir);
-  const host = electronHost(() => win, () => recent.list());
+  const host = electronHost(
+    () => win,
+    () => recent.list(),
+  );
   const send = (command: MenuCommand, arg?: string) => win?.webContents.send(MENU_EVENT, command, arg);
   const refreshMenu = () =>
     installMenu({
       recent: recent.list(),
       isMac: process.platform === 'darwin',
       send,
-      about: () => void dialog.showMessageBox({ title: 'About gprime', message: `gprime ${app.getVersion()}`, detail: 'Screening estimates for stratified flows and density currents.' }),
+      about: () =>
+        void dialog.showMessageBox({
+          title: 'About gprime',
+          message: `gprime ${app.getVersion()}`,
+          detail: 'Screening estimates for stratified flows and density currents.',
+        }),
     });
   const openFromOutside = (path: string) => send('openRecent', host.grant(resolve(path)));
 

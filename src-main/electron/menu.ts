@@ -16,7 +16,12 @@ export interface MenuOptions {
  * keys to the renderer (registerAccelerator: false), so a key press never undoes twice.
  */
 export function menuTemplate({ recent, isMac, send, about }: MenuOptions): MenuItemConstructorOptions[] {
-  const item = (label: string, command: MenuCommand, accelerator?: string, register = true): MenuItemConstructorOptions => ({
+  const item = (
+    label: string,
+    command: MenuCommand,
+    accelerator?: string,
+    register = true,
+  ): MenuItemConstructorOptions => ({
     label,
     accelerator,
     registerAccelerator: register,
@@ -53,7 +58,16 @@ export function menuTemplate({ recent, isMac, send, about }: MenuOptions): MenuI
         { role: 'selectAll' },
       ],
     },
-    { label: '&View', submenu: [{ role: 'resetZoom' }, { role: 'zoomIn' }, { role: 'zoomOut' }, { type: 'separator' }, { role: 'togglefullscreen' }] },
+    {
+      label: '&View',
+      submenu: [
+        { role: 'resetZoom' },
+        { role: 'zoomIn' },
+        { role: 'zoomOut' },
+        { type: 'separator' },
+        { role: 'togglefullscreen' },
+      ],
+    },
     { label: '&Help', submenu: [{ label: 'About gprime', click: about }] },
   ];
 }

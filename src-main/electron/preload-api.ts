@@ -7,7 +7,9 @@ import { IPC_PREFIX, MENU_EVENT } from './ipc-names';
  * window.gprimeMenu. Nothing else of Electron or Node reaches the page: no generic send or invoke.
  */
 export function exposeGprime(): void {
-  const api = Object.fromEntries(CHANNEL_NAMES.map((channel) => [channel, (request: unknown) => ipcRenderer.invoke(IPC_PREFIX + channel, request)]));
+  const api = Object.fromEntries(
+    CHANNEL_NAMES.map((channel) => [channel, (request: unknown) => ipcRenderer.invoke(IPC_PREFIX + channel, request)]),
+  );
   contextBridge.exposeInMainWorld('gprime', api);
   contextBridge.exposeInMainWorld('gprimeMenu', {
     /** calls back with a menu command ('new', 'open', 'openRecent' + path, 'save', 'saveAs', 'export', 'undo', 'redo') */

@@ -1,4 +1,11 @@
-import { BrowserWindow, dialog, session, type BrowserWindowConstructorOptions, type WebContents, type WebPreferences } from 'electron';
+import {
+  BrowserWindow,
+  dialog,
+  session,
+  type BrowserWindowConstructorOptions,
+  type WebContents,
+  type WebPreferences,
+} from 'electron';
 import { windowSettings } from '../../electron.config';
 import { RENDERER_CSP } from '../services/static-files';
 import { APP_ORIGIN } from './ipc-names';
@@ -45,8 +52,12 @@ export function lockDown(contents: WebContents): void {
   contents.on('will-redirect', (event) => event.preventDefault());
   contents.on('will-attach-webview', (event) => event.preventDefault());
   contents.setWindowOpenHandler(() => ({ action: 'deny' }));
-  contents.session.setPermissionRequestHandler((_contents, permission, callback, details) => callback(permissionAllowed(permission, details?.requestingUrl)));
-  contents.session.setPermissionCheckHandler((_contents, permission, requestingOrigin) => permissionAllowed(permission, requestingOrigin));
+  contents.session.setPermissionRequestHandler((_contents, permission, callback, details) =>
+    callback(permissionAllowed(permission, details?.requestingUrl)),
+  );
+  contents.session.setPermissionCheckHandler((_contents, permission, requestingOrigin) =>
+    permissionAllowed(permission, requestingOrigin),
+  );
 }
 
 /** Adds the CSP to every response the session receives, on top of the header the gprime:// handler sends. */

@@ -1,5 +1,14 @@
 import { createCanvas, GlobalFonts, SvgExportFlag, type Canvas, type SKRSContext2D } from '@napi-rs/canvas';
-import { Chart, LinearScale, LineElement, PointElement, ScatterController, Title, type ChartConfiguration, type Plugin } from 'chart.js';
+import {
+  Chart,
+  LinearScale,
+  LineElement,
+  PointElement,
+  ScatterController,
+  Title,
+  type ChartConfiguration,
+  type Plugin,
+} from 'chart.js';
 import { LINE_STYLES, type ChartSpec } from '../../shared-core/report/charts';
 import { fontPath, FONT_FAMILY } from './assets';
 
@@ -39,8 +48,16 @@ const LEGEND_FONT = 12;
 const CAPTION_FONT = 12;
 const SAMPLE = 34;
 
-interface LegendItem { label: string; style: number; width: number }
-interface BottomLayout { items: LegendItem[][]; caption: string[]; height: number }
+interface LegendItem {
+  label: string;
+  style: number;
+  width: number;
+}
+interface BottomLayout {
+  items: LegendItem[][];
+  caption: string[];
+  height: number;
+}
 
 function wrapText(ctx: SKRSContext2D, text: string, width: number): string[] {
   const lines: string[] = [];
@@ -78,15 +95,36 @@ function bottomLayout(ctx: SKRSContext2D, spec: ChartSpec, width: number, captio
 function drawMarker(ctx: SKRSContext2D, marker: string, x: number, y: number, r: number): void {
   ctx.beginPath();
   switch (marker) {
-    case 'rect': ctx.rect(x - r, y - r, 2 * r, 2 * r); break;
-    case 'rectRot': ctx.moveTo(x, y - r * 1.3); ctx.lineTo(x + r * 1.3, y); ctx.lineTo(x, y + r * 1.3); ctx.lineTo(x - r * 1.3, y); ctx.closePath(); break;
-    case 'triangle': ctx.moveTo(x, y - r * 1.3); ctx.lineTo(x + r * 1.2, y + r); ctx.lineTo(x - r * 1.2, y + r); ctx.closePath(); break;
-    case 'crossRot': case 'star':
-      ctx.moveTo(x - r, y - r); ctx.lineTo(x + r, y + r); ctx.moveTo(x + r, y - r); ctx.lineTo(x - r, y + r);
-      if (marker === 'star') { ctx.moveTo(x, y - r * 1.3); ctx.lineTo(x, y + r * 1.3); }
+    case 'rect':
+      ctx.rect(x - r, y - r, 2 * r, 2 * r);
+      break;
+    case 'rectRot':
+      ctx.moveTo(x, y - r * 1.3);
+      ctx.lineTo(x + r * 1.3, y);
+      ctx.lineTo(x, y + r * 1.3);
+      ctx.lineTo(x - r * 1.3, y);
+      ctx.closePath();
+      break;
+    case 'triangle':
+      ctx.moveTo(x, y - r * 1.3);
+      ctx.lineTo(x + r * 1.2, y + r);
+      ctx.lineTo(x - r * 1.2, y + r);
+      ctx.closePath();
+      break;
+    case 'crossRot':
+    case 'star':
+      ctx.moveTo(x - r, y - r);
+      ctx.lineTo(x + r, y + r);
+      ctx.moveTo(x + r, y - r);
+      ctx.lineTo(x - r, y + r);
+      if (marker === 'star') {
+        ctx.moveTo(x, y - r * 1.3);
+        ctx.lineTo(x, y + r * 1.3);
+      }
       ctx.stroke();
       return;
-    default: ctx.arc(x, y, r, 0, 2 * Math.PI);
+    default:
+      ctx.arc(x, y, r, 0, 2 * Math.PI);
   }
   ctx.fill();
   ctx.stroke();
@@ -142,7 +180,13 @@ function bottomPlugin(layout: BottomLayout, width: number, height: number): Plug
   };
 }
 
-function config(spec: ChartSpec, layout: BottomLayout, width: number, height: number, dpr: number): ChartConfiguration<'scatter'> {
+function config(
+  spec: ChartSpec,
+  layout: BottomLayout,
+  width: number,
+  height: number,
+  dpr: number,
+): ChartConfiguration<'scatter'> {
   const axis = (a: ChartSpec['x']) => ({
     type: 'linear' as const,
     reverse: a.reverse,
@@ -196,7 +240,10 @@ function draw(spec: ChartSpec, size: ChartSize, kind: 'png' | 'svg') {
   const canvas = kind === 'svg' ? createCanvas(width, height, SvgExportFlag.NoPrettyXML) : createCanvas(width, height);
   const layout = bottomLayout(canvas.getContext('2d'), spec, width - 40, size.caption);
   const dpr = kind === 'svg' ? 1 : size.dpi / PX_PER_IN;
-  const chart = new Chart(canvas as unknown as ConstructorParameters<typeof Chart>[0], config(spec, layout, width, height, dpr));
+  const chart = new Chart(
+    canvas as unknown as ConstructorParameters<typeof Chart>[0],
+    config(spec, layout, width, height, dpr),
+  );
   return { canvas, chart };
 }
 
@@ -211,7 +258,10 @@ export function renderChartPng(spec: ChartSpec, size: ChartSize = DEFAULT_CHART_
 }
 
 /** Raw RGB pixels of the chart (white background, no alpha) for embedding in the PDF. */
-export function renderChartRgb(spec: ChartSpec, size: ChartSize = DEFAULT_CHART_SIZE): { width: number; height: number; rgb: Buffer } {
+export function renderChartRgb(
+  spec: ChartSpec,
+  size: ChartSize = DEFAULT_CHART_SIZE,
+): { width: number; height: number; rgb: Buffer } {
   const { canvas, chart } = draw(spec, size, 'png');
   try {
     const c = canvas as Canvas;
@@ -228,7 +278,8 @@ export function renderChartRgb(spec: ChartSpec, size: ChartSize = DEFAULT_CHART_
   }
 }
 
-const xmlEscape = (s: string) => s.replace(/&/g, '&amp;').replace(/</g, '&lt;').replace(/>/g, '&gt;').replace(/"/g, '&quot;');
+const xmlEscape = (s: string) =>
+  s.replace(/&/g, '&amp;').replace(/</g, '&lt;').replace(/>/g, '&gt;').replace(/"/g, '&quot;');
 
 /** SVG of the chart (vector, text kept as text) with a <title> and <desc> naming the chart and its caption. */
 export function renderChartSvg(spec: ChartSpec, size: ChartSize = DEFAULT_CHART_SIZE): string {

@@ -1,12 +1,26 @@
 import { deflateSync } from 'node:zlib';
-import { concatTransformationMatrix, drawObject, PDFDocument, popGraphicsState, pushGraphicsState, rgb, type PDFFont, type PDFPage, type PDFRef, type RGB } from 'pdf-lib';
+import {
+  concatTransformationMatrix,
+  drawObject,
+  PDFDocument,
+  popGraphicsState,
+  pushGraphicsState,
+  rgb,
+  type PDFFont,
+  type PDFPage,
+  type PDFRef,
+  type RGB,
+} from 'pdf-lib';
 
 /**
  * A small flowing-layout writer on pdf-lib: wrapped paragraphs, headings, tables whose cells wrap and
  * whose header repeats after a page break, images, and reserved lines filled in later (contents).
  */
 
-export interface Fonts { regular: PDFFont; bold: PDFFont }
+export interface Fonts {
+  regular: PDFFont;
+  bold: PDFFont;
+}
 
 export interface TableColumn {
   header: string;
@@ -26,10 +40,17 @@ export interface TextStyle {
   bullet?: string;
 }
 
-export interface Reserved { page: PDFPage; y: number }
+export interface Reserved {
+  page: PDFPage;
+  y: number;
+}
 
 /** An image XObject already registered in the document. */
-export interface EmbeddedImage { ref: PDFRef; width: number; height: number }
+export interface EmbeddedImage {
+  ref: PDFRef;
+  width: number;
+  height: number;
+}
 
 /**
  * Embeds raw 8-bit RGB pixels as a Flate-compressed image. (pdf-lib's own PNG path decodes and
@@ -37,8 +58,13 @@ export interface EmbeddedImage { ref: PDFRef; width: number; height: number }
  */
 export function embedRgb(doc: PDFDocument, pixels: { width: number; height: number; rgb: Buffer }): EmbeddedImage {
   const raw = doc.context.stream(deflateSync(pixels.rgb, { level: 6 }), {
-    Type: 'XObject', Subtype: 'Image', Width: pixels.width, Height: pixels.height,
-    ColorSpace: 'DeviceRGB', BitsPerComponent: 8, Filter: 'FlateDecode',
+    Type: 'XObject',
+    Subtype: 'Image',
+    Width: pixels.width,
+    Height: pixels.height,
+    ColorSpace: 'DeviceRGB',
+    BitsPerComponent: 8,
+    Filter: 'FlateDecode',
   });
   return { ref: doc.context.register(raw), width: pixels.width, height: pixels.height };
 }
@@ -91,7 +117,12 @@ export class PdfWriter {
   private readonly top: number;
   private readonly bottom: number;
 
-  constructor(readonly doc: PDFDocument, readonly fonts: Fonts, readonly pageSize: [number, number], margin = 54) {
+  constructor(
+    readonly doc: PDFDocument,
+    readonly fonts: Fonts,
+    readonly pageSize: [number, number],
+    margin = 54,
+  ) {
     this.left = margin;
     this.width = pageSize[0] - 2 * margin;
     this.top = pageSize[1] - margin;
@@ -127,7 +158,13 @@ export class PdfWriter {
         const bx = Math.max(this.left, this.left + indent - font.widthOfTextAtSize(style.bullet, size) - 4);
         this.page.drawText(style.bullet, { x: bx, y: this.y + size * 0.25, size, font, color: style.color ?? INK });
       }
-      this.page.drawText(line, { x: this.left + indent, y: this.y + size * 0.25, size, font, color: style.color ?? INK });
+      this.page.drawText(line, {
+        x: this.left + indent,
+        y: this.y + size * 0.25,
+        size,
+        font,
+        color: style.color ?? INK,
+      });
     });
     this.y -= style.after ?? 3;
   }
@@ -139,7 +176,12 @@ export class PdfWriter {
     this.space(level === 1 ? 10 : 6);
     this.text(text, { size, bold: true, color: level === 1 ? ACCENT : INK, after: level === 1 ? 4 : 2 });
     if (level === 1) {
-      this.page.drawLine({ start: { x: this.left, y: this.y + 1 }, end: { x: this.left + this.width, y: this.y + 1 }, thickness: 0.8, color: ACCENT });
+      this.page.drawLine({
+        start: { x: this.left, y: this.y + 1 },
+        end: { x: this.left + this.width, y: this.y + 1 },
+        thickness: 0.8,
+        color: ACCENT,
+      });
       this.space(4);
     }
   }
@@ -171,9 +213,17 @@ export class PdfWriter {
         x += widths[i];
       });
       this.y -= h;
-      this.page.drawLine({ start: { x: this.left, y: this.y }, end: { x: this.left + this.width, y: this.y }, thickness: 0.4, color: RULE });
+      this.page.drawLine({
+        start: { x: this.left, y: this.y },
+        end: { x: this.left + this.width, y: this.y },
+        thickness: 0.4,
+        color: RULE,
+      });
     };
-    const header = layoutRow(columns.map((c) => c.header), this.fonts.bold);
+    const header = layoutRow(
+      columns.map((c) => c.header),
+      this.fonts.bold,
+    );
     const drawHeader = () => drawRow(header, this.fonts.bold, HEADER_FILL);
     this.ensure(rowHeight(header) + (rows[0] ? rowHeight(layoutRow(rows[0], this.fonts.regular)) : 0));
     drawHeader();
@@ -196,7 +246,12 @@ export class PdfWriter {
     this.ensure(h + 30);
     this.y -= h;
     const name = this.page.node.newXObject('Image', img.ref);
-    this.page.pushOperators(pushGraphicsState(), concatTransformationMatrix(w, 0, 0, h, this.left + (this.width - w) / 2, this.y), drawObject(name), popGraphicsState());
+    this.page.pushOperators(
+      pushGraphicsState(),
+      concatTransformationMatrix(w, 0, 0, h, this.left + (this.width - w) / 2, this.y),
+      drawObject(name),
+      popGraphicsState(),
+    );
   }
 
   /** A shaded box holding wrapped text (cautions). */
@@ -205,8 +260,24 @@ export class PdfWriter {
     const lines = wrapText(text, this.fonts.bold, size, this.width - 2 * pad);
     const h = lines.length * size * 1.35 + 2 * pad;
     this.ensure(h + 4);
-    this.page.drawRectangle({ x: this.left, y: this.y - h, width: this.width, height: h, color: rgb(1, 0.96, 0.86), borderColor: rgb(0.75, 0.55, 0.1), borderWidth: 1 });
-    lines.forEach((line, i) => this.page.drawText(line, { x: this.left + pad, y: this.y - pad - (i + 1) * size * 1.35 + size * 0.35, size, font: this.fonts.bold, color: INK }));
+    this.page.drawRectangle({
+      x: this.left,
+      y: this.y - h,
+      width: this.width,
+      height: h,
+      color: rgb(1, 0.96, 0.86),
+      borderColor: rgb(0.75, 0.55, 0.1),
+      borderWidth: 1,
+    });
+    lines.forEach((line, i) =>
+      this.page.drawText(line, {
+        x: this.left + pad,
+        y: this.y - pad - (i + 1) * size * 1.35 + size * 0.35,
+        size,
+        font: this.fonts.bold,
+        color: INK,
+      }),
+    );
     this.y -= h + 8;
   }
 }

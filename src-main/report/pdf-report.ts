@@ -23,7 +23,10 @@ const QUANTITY_COLUMNS = (first: string): TableColumn[] => [
 ];
 
 /** The title block; its value column holds a 64-digit SHA-256 on one line on A4 and Letter. */
-export const TITLE_COLUMNS: TableColumn[] = [{ header: 'Title block', width: 0.21 }, { header: '', width: 0.79 }];
+export const TITLE_COLUMNS: TableColumn[] = [
+  { header: 'Title block', width: 0.21 },
+  { header: '', width: 0.79 },
+];
 
 const quantityRow = (q: QuantityRow) => [q.name, q.description, q.shown, q.shownUnit];
 
@@ -44,17 +47,38 @@ const BAND_COLUMNS = (pc: number): TableColumn[] => [
 function bandBody(w: PdfWriter, u: UncertaintySection): void {
   const pc = Math.round(u.coverage * 100);
   w.heading('Uncertainty band', 2, 40);
-  w.text(`${u.caption}: ${u.inputs.map((i) => `${i.name} = ${i.nominal} ± ${i.standardUncertainty}${i.unit ? ' ' + i.unit : ''}`).join('; ')}.`, { size: 9, after: 4 });
-  w.table(BAND_COLUMNS(pc), u.rows.map((r) => [r.name, ...r.shown, r.unit]));
+  w.text(
+    `${u.caption}: ${u.inputs.map((i) => `${i.name} = ${i.nominal} ± ${i.standardUncertainty}${i.unit ? ' ' + i.unit : ''}`).join('; ')}.`,
+    { size: 9, after: 4 },
+  );
+  w.table(
+    BAND_COLUMNS(pc),
+    u.rows.map((r) => [r.name, ...r.shown, r.unit]),
+  );
   for (const warning of u.warnings) w.text(warning, { size: 9, indent: 12, bullet: '!', after: 2 });
-  w.text('The band covers the stated input uncertainties only, not the error of the method itself.', { size: 8.5, color: MUTED, after: 4 });
+  w.text('The band covers the stated input uncertainties only, not the error of the method itself.', {
+    size: 8.5,
+    color: MUTED,
+    after: 4,
+  });
 }
 
 function sectionBody(w: PdfWriter, s: EstimateSection, images: ReadonlyMap<string, EmbeddedImage>): void {
-  const where = [s.feature && `Feature: ${s.feature}`, s.condition && `Condition: ${s.condition}`].filter(Boolean).join(' · ');
-  w.text(`Estimate ${s.id} · gprime calc ${s.method}: ${s.methodTitle}${where ? ' · ' + where : ''}`, { size: 9, color: MUTED, after: 6 });
+  const where = [s.feature && `Feature: ${s.feature}`, s.condition && `Condition: ${s.condition}`]
+    .filter(Boolean)
+    .join(' · ');
+  w.text(`Estimate ${s.id} · gprime calc ${s.method}: ${s.methodTitle}${where ? ' · ' + where : ''}`, {
+    size: 9,
+    color: MUTED,
+    after: 6,
+  });
   if (s.status === 'error') {
-    w.text(`Not computed: ${s.error ?? 'unknown error'}`, { size: 10, bold: true, color: rgb(0.6, 0.1, 0.1), after: 6 });
+    w.text(`Not computed: ${s.error ?? 'unknown error'}`, {
+      size: 10,
+      bold: true,
+      color: rgb(0.6, 0.1, 0.1),
+      after: 6,
+    });
   }
   if (s.inputs.length) {
     w.heading('Inputs', 2, 40);
@@ -84,15 +108,27 @@ function sectionBody(w: PdfWriter, s: EstimateSection, images: ReadonlyMap<strin
     if (!img) return;
     if (k === 0) w.heading('Charts', 2, 260);
     w.image(img, 6.5 * 72);
-    w.text(`Figure ${s.number}.${k + 1}: ${c.caption}. Data: charts/${c.id}.csv`, { size: 8.5, color: MUTED, after: 10 });
+    w.text(`Figure ${s.number}.${k + 1}: ${c.caption}. Data: charts/${c.id}.csv`, {
+      size: 8.5,
+      color: MUTED,
+      after: 10,
+    });
   });
 }
 
 /** Raw RGB pixels of a chart drawn without caption (the PDF sets the caption as text). */
-export interface ChartPixels { width: number; height: number; rgb: Buffer }
+export interface ChartPixels {
+  width: number;
+  height: number;
+  rgb: Buffer;
+}
 
 /** Builds the calc sheet; `charts` maps chart ids to their pixels. */
-export async function buildPdf(model: ReportModel, charts: ReadonlyMap<string, ChartPixels>, projectDate: string): Promise<Uint8Array> {
+export async function buildPdf(
+  model: ReportModel,
+  charts: ReadonlyMap<string, ChartPixels>,
+  projectDate: string,
+): Promise<Uint8Array> {
   const doc = await PDFDocument.create();
   doc.registerFontkit(fontkit);
   const fonts = {
@@ -115,10 +151,17 @@ export async function buildPdf(model: ReportModel, charts: ReadonlyMap<string, C
   const w = new PdfWriter(doc, fonts, model.units === 'us' ? LETTER : A4);
   w.text(model.title, { size: 18, bold: true, after: 2 });
   w.text(model.subtitle, { size: 12, color: MUTED, after: 10 });
-  w.table(TITLE_COLUMNS, model.titleBlock.map((r) => [r.label, r.value]), 9);
+  w.table(
+    TITLE_COLUMNS,
+    model.titleBlock.map((r) => [r.label, r.value]),
+    9,
+  );
   w.box(model.cautions[0]);
   w.heading('Contents', 2, 40);
-  const toc: { entry: ReportModel['contents'][number]; at: Reserved }[] = model.contents.map((entry) => ({ entry, at: w.reserveLine(10) }));
+  const toc: { entry: ReportModel['contents'][number]; at: Reserved }[] = model.contents.map((entry) => ({
+    entry,
+    at: w.reserveLine(10),
+  }));
   const pageOf = new Map<string, number>();
   const startSection = (anchor: string, title: string) => {
     w.heading(title, 1);
@@ -128,8 +171,18 @@ export async function buildPdf(model: ReportModel, charts: ReadonlyMap<string, C
 
   startSection('summary', `1  ${entry('summary').title}`);
   w.table(
-    [{ header: '§', width: 0.06 }, { header: 'Estimate', width: 0.36 }, { header: 'Key result', width: 0.46 }, { header: 'Warnings', width: 0.12, align: 'right' }],
-    model.summary.map((r, i) => [String(i + 2), `${r.title} (${r.id})${r.where ? `\n${r.where}` : ''}`, r.keyResult, String(r.warnings)]),
+    [
+      { header: '§', width: 0.06 },
+      { header: 'Estimate', width: 0.36 },
+      { header: 'Key result', width: 0.46 },
+      { header: 'Warnings', width: 0.12, align: 'right' },
+    ],
+    model.summary.map((r, i) => [
+      String(i + 2),
+      `${r.title} (${r.id})${r.where ? `\n${r.where}` : ''}`,
+      r.keyResult,
+      String(r.warnings),
+    ]),
   );
   for (const s of model.estimates) {
     startSection(s.id, `${s.number}  ${s.title}`);
@@ -138,7 +191,15 @@ export async function buildPdf(model: ReportModel, charts: ReadonlyMap<string, C
   if (model.compliance) {
     startSection('compliance', `${entry('compliance').number}  Mixing-zone compliance`);
     const widths = [0.12, 0.115, 0.135, 0.065, 0.1, 0.1, 0.08, 0.08, 0.185];
-    w.table(model.compliance.header.map((h, i) => ({ header: h, width: widths[i], align: i >= 4 && i <= 6 ? 'right' : 'left' })), model.compliance.rows, 8);
+    w.table(
+      model.compliance.header.map((h, i) => ({
+        header: h,
+        width: widths[i],
+        align: i >= 4 && i <= 6 ? 'right' : 'left',
+      })),
+      model.compliance.rows,
+      8,
+    );
   }
   startSection('references', `${entry('references').number}  References`);
   model.references.forEach((r, i) => w.text(r, { size: 8.5, indent: 26, bullet: `[${i + 1}]`, after: 3 }));
@@ -153,7 +214,8 @@ export async function buildPdf(model: ReportModel, charts: ReadonlyMap<string, C
     const size = 10;
     const numWidth = fonts.regular.widthOfTextAtSize(num, size);
     let shown = label;
-    while (fonts.regular.widthOfTextAtSize(shown, size) > w.width - numWidth - 30 && shown.length > 4) shown = shown.slice(0, -2);
+    while (fonts.regular.widthOfTextAtSize(shown, size) > w.width - numWidth - 30 && shown.length > 4)
+      shown = shown.slice(0, -2);
     if (shown !== label) shown = shown.trimEnd() + '…';
     at.page.drawText(shown, { x: w.left, y: at.y + 3, size, font: fonts.regular });
     const dotsFrom = w.left + fonts.regular.widthOfTextAtSize(shown, size) + 6;
@@ -170,10 +232,27 @@ export async function buildPdf(model: ReportModel, charts: ReadonlyMap<string, C
     const size = 7.5;
     const y = 30;
     const center = `Page ${i + 1} of ${n}`;
-    page.drawLine({ start: { x: w.left, y: y + 11 }, end: { x: w.left + w.width, y: y + 11 }, thickness: 0.4, color: MUTED });
+    page.drawLine({
+      start: { x: w.left, y: y + 11 },
+      end: { x: w.left + w.width, y: y + 11 },
+      thickness: 0.4,
+      color: MUTED,
+    });
     page.drawText(left, { x: w.left, y, size, font: fonts.regular, color: MUTED });
-    page.drawText(center, { x: w.left + (w.width - fonts.regular.widthOfTextAtSize(center, size)) / 2, y, size, font: fonts.regular, color: MUTED });
-    page.drawText(right, { x: w.left + w.width - fonts.regular.widthOfTextAtSize(right, size), y, size, font: fonts.regular, color: MUTED });
+    page.drawText(center, {
+      x: w.left + (w.width - fonts.regular.widthOfTextAtSize(center, size)) / 2,
+      y,
+      size,
+      font: fonts.regular,
+      color: MUTED,
+    });
+    page.drawText(right, {
+      x: w.left + w.width - fonts.regular.widthOfTextAtSize(right, size),
+      y,
+      size,
+      font: fonts.regular,
+      color: MUTED,
+    });
   });
   return doc.save();
 }
@@ -181,7 +260,10 @@ export async function buildPdf(model: ReportModel, charts: ReadonlyMap<string, C
 /** A clickable contents line that jumps to the page of its section. */
 function linkTo(doc: PDFDocument, from: PDFPage, to: PDFPage, rect: number[]): void {
   const annot = doc.context.obj({
-    Type: 'Annot', Subtype: 'Link', Rect: rect, Border: [0, 0, 0],
+    Type: 'Annot',
+    Subtype: 'Link',
+    Rect: rect,
+    Border: [0, 0, 0],
     Dest: [to.ref, 'Fit'],
   });
   const ref = doc.context.register(annot);

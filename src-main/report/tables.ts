@@ -17,7 +17,13 @@ export function toCsv(rows: readonly (readonly (string | number | null)[])[]): s
   return rows.map((r) => r.map(csvCell).join(',')).join('\r\n') + '\r\n';
 }
 
-const quantityLine = (section: string) => (q: QuantityRow) => [section, q.name, q.description, q.value, q.unit === '1' ? '' : q.unit];
+const quantityLine = (section: string) => (q: QuantityRow) => [
+  section,
+  q.name,
+  q.description,
+  q.value,
+  q.unit === '1' ? '' : q.unit,
+];
 
 /** Band rows of the CSV: standard uncertainty of each varied input; low, median and high of each result. */
 function uncertaintyLines(s: EstimateSection): (string | number)[][] {
@@ -26,7 +32,13 @@ function uncertaintyLines(s: EstimateSection): (string | number)[][] {
   const pc = Math.round(u.coverage * 100);
   const lo = (100 - pc) / 2;
   return [
-    ...u.inputs.map((i) => ['input standard uncertainty', i.name, `one standard deviation (nominal ${i.nominal})`, i.standardUncertainty, i.unit]),
+    ...u.inputs.map((i) => [
+      'input standard uncertainty',
+      i.name,
+      `one standard deviation (nominal ${i.nominal})`,
+      i.standardUncertainty,
+      i.unit,
+    ]),
     ...u.rows.flatMap((r) => [
       [`band low (${lo} %)`, r.name, u.caption, r.values[1], r.unit],
       ['band median', r.name, u.caption, r.values[2], r.unit],

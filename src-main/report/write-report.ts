@@ -36,7 +36,10 @@ export interface ReportFile {
 function checkFormats(formats: readonly string[] | undefined): ReportFormat[] {
   if (!formats || formats.length === 0) return [...REPORT_FORMATS];
   const bad = formats.filter((f) => !(REPORT_FORMATS as readonly string[]).includes(f));
-  if (bad.length) throw new UsageError(`--format: unknown format ${bad.map((b) => `"${b}"`).join(', ')}; choose from ${REPORT_FORMATS.join(', ')}`);
+  if (bad.length)
+    throw new UsageError(
+      `--format: unknown format ${bad.map((b) => `"${b}"`).join(', ')}; choose from ${REPORT_FORMATS.join(', ')}`,
+    );
   return [...new Set(formats)] as ReportFormat[];
 }
 
@@ -44,7 +47,13 @@ function checkFormats(formats: readonly string[] | undefined): ReportFormat[] {
  * Renders the report files in memory. `stem` names the PDF and workbook; charts go to charts/, tables to
  * tables/. The same model gives the same files (the PDF and workbook dates are the project date).
  */
-export async function renderReport(model: ReportModel, formats: readonly ReportFormat[], stem: string, projectDate: string, chart: Partial<ChartSize> = {}): Promise<ReportFile[]> {
+export async function renderReport(
+  model: ReportModel,
+  formats: readonly ReportFormat[],
+  stem: string,
+  projectDate: string,
+  chart: Partial<ChartSize> = {},
+): Promise<ReportFile[]> {
   const files: ReportFile[] = [];
   const want = new Set(formats);
   const size = { ...DEFAULT_CHART_SIZE, ...chart };
@@ -76,7 +85,11 @@ function writeAtomic(path: string, bytes: Uint8Array | string): void {
 }
 
 /** Writes the report files for an assessment into options.outDir; returns the written paths. */
-export async function writeReport(loaded: LoadedSite, assessment: Assessment, options: ReportOptions): Promise<string[]> {
+export async function writeReport(
+  loaded: LoadedSite,
+  assessment: Assessment,
+  options: ReportOptions,
+): Promise<string[]> {
   const formats = checkFormats(options.formats);
   const model = buildReportModel(assessment, options.units);
   const stem = slug(basename(loaded.path, extname(loaded.path)) || loaded.site.project.site);

@@ -50,7 +50,7 @@ export function atomicWriteFile(path: string, text: string, ops: WriteOps = node
   let fd: number | undefined;
   try {
     fd = ops.openSync(tmp, 'wx', mode);
-    for (let off = 0; off < data.length; ) off += ops.writeSync(fd, data, off, data.length - off);
+    for (let off = 0; off < data.length;) off += ops.writeSync(fd, data, off, data.length - off);
     ops.fsyncSync(fd);
     ops.closeSync(fd);
     fd = undefined;

@@ -1,7 +1,14 @@
 import { createHash } from 'node:crypto';
 import { existsSync, mkdirSync } from 'node:fs';
 import { relative } from 'node:path';
-import { CHANNELS, parseRequest, type Channel, type Reply, type RequestOf, type ResponseOf } from '../../shared-core/ipc/contract';
+import {
+  CHANNELS,
+  parseRequest,
+  type Channel,
+  type Reply,
+  type RequestOf,
+  type ResponseOf,
+} from '../../shared-core/ipc/contract';
 import { assessSite, loadSite } from '../../shared-core/site';
 import { readSiteText, RecentFiles, saveSiteText } from './file-store';
 import { RecoveryStore } from './recovery';
@@ -91,12 +98,17 @@ export function createChannelHandlers({ host, dataDir, version }: HandlerOptions
       const hash = createHash('sha256').update(req.text, 'utf8').digest('hex');
       const assessment = assessSite(site, { gprimeVersion: version, siteHash: hash });
       const { writeReport } = await import('../report/write-report');
-      const written = await writeReport({ site, hash, path: req.path ?? '(unsaved site)' }, assessment, { outDir, formats: req.formats, units: req.units });
+      const written = await writeReport({ site, hash, path: req.path ?? '(unsaved site)' }, assessment, {
+        outDir,
+        formats: req.formats,
+        units: req.units,
+      });
       return { outDir, files: written.map((w) => relative(outDir, w) || w) };
     },
     'clipboard.writeImage': async (req) => {
       const png = Buffer.from(req.pngBase64, 'base64');
-      if (!png.subarray(0, 8).equals(PNG_SIGNATURE)) throw new ServiceError('invalid-request', 'clipboard.writeImage: pngBase64: not a PNG image');
+      if (!png.subarray(0, 8).equals(PNG_SIGNATURE))
+        throw new ServiceError('invalid-request', 'clipboard.writeImage: pngBase64: not a PNG image');
       await host.writeClipboardImage(png);
       return {};
     },
@@ -109,14 +121,22 @@ export function createChannelHandlers({ host, dataDir, version }: HandlerOptions
  * against the contract too, and never throws — every failure is a Reply error with a code and message.
  */
 export async function dispatch(handlers: ChannelHandlers, channel: string, payload: unknown): Promise<Reply<unknown>> {
-  if (!Object.hasOwn(CHANNELS, channel)) return { ok: false, error: { code: 'invalid-request', message: `unknown channel "${channel}"` } };
+  if (!Object.hasOwn(CHANNELS, channel))
+    return { ok: false, error: { code: 'invalid-request', message: `unknown channel "${channel}"` } };
   const c = channel as Channel;
   const request = parseRequest(c, payload);
   if (!request.ok) return request;
   try {
     const value = await (handlers[c] as (r: unknown) => Promise<unknown>)(request.value);
     const checked = CHANNELS[c].response.safeParse(value);
-    if (!checked.success) return { ok: false, error: { code: 'internal', message: `${c}: the answer did not match the contract (${checked.error.issues[0].message})` } };
+    if (!checked.success)
+      return {
+        ok: false,
+        error: {
+          code: 'internal',
+          message: `${c}: the answer did not match the contract (${checked.error.issues[0].message})`,
+        },
+      };
     return { ok: true, value: checked.data };
   } catch (e) {
     return { ok: false, error: toContractError(e) };

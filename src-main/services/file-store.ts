@@ -14,7 +14,11 @@ export function readSiteText(path: string): SiteText {
   try {
     loadSite(text);
   } catch (e) {
-    if (e instanceof SiteFileError) throw new SiteFileError(e.place ? `${path}, ${e.place}` : path, e.message.slice(e.place ? e.place.length + 2 : 0));
+    if (e instanceof SiteFileError)
+      throw new SiteFileError(
+        e.place ? `${path}, ${e.place}` : path,
+        e.message.slice(e.place ? e.place.length + 2 : 0),
+      );
     throw e;
   }
   return { path, text };
@@ -33,7 +37,10 @@ export function saveSiteText(path: string, text: string, ops?: WriteOps): SiteTe
       readSiteText(path);
     } catch (e) {
       if (!(e instanceof SiteFileError)) throw e;
-      throw new SiteFileError(path, `the existing file does not open in this gprime (${e.message}); it was left unchanged — save under another name`);
+      throw new SiteFileError(
+        path,
+        `the existing file does not open in this gprime (${e.message}); it was left unchanged — save under another name`,
+      );
     }
   }
   atomicWriteFile(path, text, ops);
@@ -53,7 +60,9 @@ export class RecentFiles {
     try {
       const parsed: unknown = JSON.parse(readFileSync(this.file, 'utf8'));
       const paths = (parsed as { paths?: unknown })?.paths;
-      return Array.isArray(paths) ? paths.filter((p): p is string => typeof p === 'string' && p.length > 0).slice(0, MAX_RECENT) : [];
+      return Array.isArray(paths)
+        ? paths.filter((p): p is string => typeof p === 'string' && p.length > 0).slice(0, MAX_RECENT)
+        : [];
     } catch {
       return [];
     }

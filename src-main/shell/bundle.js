@@ -7,7 +7,18 @@ import { dirname, join, resolve } from 'node:path';
 export const ROOT = resolve(import.meta.dirname, '..', '..');
 const SOURCES = ['shared-core', 'src-main', 'package.json'];
 /** Libraries with native parts or big assets stay outside the bundle. */
-export const EXTERNAL = ['@napi-rs/canvas', 'pdf-lib', '@pdf-lib/fontkit', 'exceljs', 'electron', 'playwright-core', 'vite', '@sveltejs/vite-plugin-svelte', 'svelte', 'svelte/*'];
+export const EXTERNAL = [
+  '@napi-rs/canvas',
+  'pdf-lib',
+  '@pdf-lib/fontkit',
+  'exceljs',
+  'electron',
+  'playwright-core',
+  'vite',
+  '@sveltejs/vite-plugin-svelte',
+  'svelte',
+  'svelte/*',
+];
 
 function newestMtime(path) {
   const st = statSync(path);
@@ -34,7 +45,12 @@ export async function bundleIfStale({ entry, outfile, format = 'esm', external =
     target: 'node20',
     external,
     logLevel: 'error',
-    banner: format === 'esm' ? { js: "import { createRequire as __gprimeRequire } from 'node:module'; const require = __gprimeRequire(import.meta.url);" } : undefined,
+    banner:
+      format === 'esm'
+        ? {
+            js: "import { createRequire as __gprimeRequire } from 'node:module'; const require = __gprimeRequire(import.meta.url);",
+          }
+        : undefined,
   });
   mkdirSync(dirname(out), { recursive: true });
   // write then rename, so that concurrent starts never load a half-written bundle

@@ -9,7 +9,8 @@ function newestMtime(path: string): number {
   const st = statSync(path);
   if (!st.isDirectory()) return st.mtimeMs;
   let newest = st.mtimeMs;
-  for (const name of readdirSync(path)) if (name !== 'node_modules') newest = Math.max(newest, newestMtime(join(path, name)));
+  for (const name of readdirSync(path))
+    if (name !== 'node_modules') newest = Math.max(newest, newestMtime(join(path, name)));
   return newest;
 }
 
@@ -30,7 +31,12 @@ export async function ensureRendererBuilt(root: string, outDir = join(root, 'dis
   const { build } = await import('vite');
   const fresh = `${outDir}.${process.pid}.new`;
   rmSync(fresh, { recursive: true, force: true });
-  await build({ configFile: join(root, 'vite.config.ts'), root: join(root, 'src-renderer'), logLevel: 'warn', build: { outDir: fresh, emptyOutDir: true } });
+  await build({
+    configFile: join(root, 'vite.config.ts'),
+    root: join(root, 'src-renderer'),
+    logLevel: 'warn',
+    build: { outDir: fresh, emptyOutDir: true },
+  });
   const old = `${outDir}.${process.pid}.old`;
   try {
     if (existsSync(outDir)) renameSync(outDir, old);

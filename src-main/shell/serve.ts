@@ -22,7 +22,8 @@ function parseArgs(argv: string[]) {
     };
     if (a === '--port') {
       opts.port = Number(value());
-      if (!Number.isInteger(opts.port) || opts.port < 0 || opts.port > 65535) throw new Error('--port takes a whole number 0–65535');
+      if (!Number.isInteger(opts.port) || opts.port < 0 || opts.port > 65535)
+        throw new Error('--port takes a whole number 0–65535');
     } else if (a === '--workspace') opts.workspace = value();
     else if (a === '--data-dir') opts.dataDir = value();
     else if (a === '--no-build') opts.build = false;
@@ -39,8 +40,16 @@ try {
   const opts = parseArgs(process.argv.slice(2));
   const rendererDir = resolve(root, 'dist', 'renderer');
   if (opts.build) await ensureRendererBuilt(root, rendererDir);
-  const shell = await startShell({ port: opts.port, workspace: resolve(opts.workspace), dataDir: resolve(opts.dataDir), rendererDir, version: GPRIME_VERSION });
-  process.stderr.write(`gprime: site files in ${resolve(opts.workspace)}; recovery in ${resolve(opts.dataDir)}; Ctrl+C stops\n`);
+  const shell = await startShell({
+    port: opts.port,
+    workspace: resolve(opts.workspace),
+    dataDir: resolve(opts.dataDir),
+    rendererDir,
+    version: GPRIME_VERSION,
+  });
+  process.stderr.write(
+    `gprime: site files in ${resolve(opts.workspace)}; recovery in ${resolve(opts.dataDir)}; Ctrl+C stops\n`,
+  );
   process.stdout.write(`gprime workspace: ${shell.url}\n`);
   const stop = () => void shell.close().then(() => process.exit(0));
   process.on('SIGINT', stop);

@@ -37,7 +37,8 @@ function sendReply(res: ServerResponse, status: number, reply: Reply<unknown>): 
   send(res, status, 'application/json; charset=utf-8', JSON.stringify(reply));
 }
 
-const refuse = (res: ServerResponse, status: number, code: string, message: string) => sendReply(res, status, { ok: false, error: { code, message } });
+const refuse = (res: ServerResponse, status: number, code: string, message: string) =>
+  sendReply(res, status, { ok: false, error: { code, message } });
 
 function readBody(req: IncomingMessage): Promise<string | null> {
   return new Promise((done, fail) => {
@@ -68,16 +69,24 @@ function sameToken(given: string, token: string): boolean {
  */
 export async function startShell(opts: ShellOptions): Promise<RunningShell> {
   const token = randomBytes(24).toString('base64url');
-  const handlers = createChannelHandlers({ host: workspaceHost(opts.workspace), dataDir: opts.dataDir, version: opts.version });
+  const handlers = createChannelHandlers({
+    host: workspaceHost(opts.workspace),
+    dataDir: opts.dataDir,
+    version: opts.version,
+  });
   let origins: string[] = [];
 
   const api = async (req: IncomingMessage, res: ServerResponse, channel: string) => {
     if (req.method !== 'POST') return refuse(res, 405, 'invalid-request', 'use POST');
     const given = req.headers['x-gprime-token'];
-    if (typeof given !== 'string' || given === '') return refuse(res, 401, 'forbidden', 'the gprime token is missing; open the address the shell printed');
-    if (!sameToken(given, token)) return refuse(res, 403, 'forbidden', 'wrong gprime token; open the address the shell printed');
-    if (req.headers.origin !== undefined && !origins.includes(req.headers.origin)) return refuse(res, 403, 'forbidden', 'requests from other sites are refused');
-    if (!/^application\/json\b/i.test(req.headers['content-type'] ?? '')) return refuse(res, 415, 'invalid-request', 'send JSON (content-type: application/json)');
+    if (typeof given !== 'string' || given === '')
+      return refuse(res, 401, 'forbidden', 'the gprime token is missing; open the address the shell printed');
+    if (!sameToken(given, token))
+      return refuse(res, 403, 'forbidden', 'wrong gprime token; open the address the shell printed');
+    if (req.headers.origin !== undefined && !origins.includes(req.headers.origin))
+      return refuse(res, 403, 'forbidden', 'requests from other sites are refused');
+    if (!/^application\/json\b/i.test(req.headers['content-type'] ?? ''))
+      return refuse(res, 415, 'invalid-request', 'send JSON (content-type: application/json)');
     const body = await readBody(req);
     if (body === null) return refuse(res, 413, 'invalid-request', 'the request is too large');
     let payload: unknown;
@@ -90,13 +99,16 @@ export async function startShell(opts: ShellOptions): Promise<RunningShell> {
   };
 
   const files = (req: IncomingMessage, res: ServerResponse, path: string) => {
-    if (req.method !== 'GET' && req.method !== 'HEAD') return send(res, 405, 'text/plain; charset=utf-8', 'method not allowed');
+    if (req.method !== 'GET' && req.method !== 'HEAD')
+      return send(res, 405, 'text/plain; charset=utf-8', 'method not allowed');
     const file = resolveStatic(opts.rendererDir, path);
     if (!file && path === '/favicon.ico') return send(res, 204, 'image/x-icon', ''); // browsers ask for it unprompted
     if (!file) return send(res, 404, 'text/plain; charset=utf-8', 'not found');
     res.writeHead(200, { ...SECURITY_HEADERS, 'content-type': file.contentType, 'cache-control': 'no-cache' });
     if (req.method === 'HEAD') return res.end();
-    createReadStream(file.path).on('error', () => res.destroy()).pipe(res);
+    createReadStream(file.path)
+      .on('error', () => res.destroy())
+      .pipe(res);
   };
 
   const server = createServer((req, res) => {

@@ -32,7 +32,11 @@ export function workspaceHost(workspaceDir: string, now: () => Date = () => new 
   const inside = (path: string, what: string): string => {
     const real = realpathOfExisting(resolve(root, path));
     const rel = relative(root, real);
-    if (rel === '..' || rel.startsWith('..' + sep) || isAbsolute(rel)) throw new ServiceError('forbidden', `${path}: the browser shell only uses ${what} inside its workspace folder ${root}`);
+    if (rel === '..' || rel.startsWith('..' + sep) || isAbsolute(rel))
+      throw new ServiceError(
+        'forbidden',
+        `${path}: the browser shell only uses ${what} inside its workspace folder ${root}`,
+      );
     return real;
   };
   return {
@@ -45,9 +49,13 @@ export function workspaceHost(workspaceDir: string, now: () => Date = () => new 
     allowDir: (path) => inside(path, 'folders'),
     pickOpenPath: async (req) => (req.name ? inside(join(root, basename(req.name)), 'files') : null),
     pickSavePath: async (suggestedName) => join(root, safeSiteFileName(suggestedName)),
-    pickExportDir: async (siteName) => join(root, 'reports', `${safeSiteFileName(siteName).slice(0, -SITE_EXTENSION.length)}-${timestamp(now())}`),
+    pickExportDir: async (siteName) =>
+      join(root, 'reports', `${safeSiteFileName(siteName).slice(0, -SITE_EXTENSION.length)}-${timestamp(now())}`),
     writeClipboardImage: async () => {
-      throw new ServiceError('unsupported', 'the browser shell cannot reach the system clipboard; copy the chart from the browser instead');
+      throw new ServiceError(
+        'unsupported',
+        'the browser shell cannot reach the system clipboard; copy the chart from the browser instead',
+      );
     },
     listFiles: () =>
       readdirSync(root)

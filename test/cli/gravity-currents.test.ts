@@ -23,12 +23,30 @@ describe('gprime calc: gravity currents', () => {
     expect(r.json.results.phase).toEqual({ value: 'slumping', unit: '' });
   });
   it('lock-release refuses a lock deeper than the ambient (exit 2)', () => {
-    const r = runGprime(['calc', 'lock-release', 'g_prime=0.1', 'lock_length=3', 'lock_depth=2', 'total_depth=1', 'time=10', '--json']);
+    const r = runGprime([
+      'calc',
+      'lock-release',
+      'g_prime=0.1',
+      'lock_length=3',
+      'lock_depth=2',
+      'total_depth=1',
+      'time=10',
+      '--json',
+    ]);
     expect(r.code).toBe(2);
     expect(r.stdout + r.stderr).toMatch(/total_depth/);
   });
   it('flux-release on a slope runs at 1.5 (g′q)^⅓ and reaches a point at distance/speed (Britter & Linden 1980, U_f = 1.5 (g′q)^⅓)', () => {
-    const r = runGprime(['calc', 'flux-release', 'g_prime=0.05', 'flux=0.01', 'time=600', 'slope=6', 'arrival_distance=500', '--json']);
+    const r = runGprime([
+      'calc',
+      'flux-release',
+      'g_prime=0.05',
+      'flux=0.01',
+      'time=600',
+      'slope=6',
+      'arrival_distance=500',
+      '--json',
+    ]);
     expect(r.code).toBe(0);
     const u = 1.5 * Math.cbrt(0.05 * 0.01);
     expect(r.json.results.front_speed.value).toBeCloseTo(u, 12);
@@ -39,14 +57,40 @@ describe('gprime calc: gravity currents', () => {
     const r = runGprime(['calc', 'flux-release', 'g_prime=0.05', 'flux=0.01', 'time=60', '--json']);
     expect(r.json.results.front_position.value).toBeCloseTo(Math.cbrt(1.19 ** 2 * 0.05 * 0.01) * 60, 9);
     expect(r.json.results.phase.value).toBe('inertial');
-    const bad = runGprime(['calc', 'flux-release', 'g_prime=0.05', 'flux=0.01', 'time=60', 'slope=5', 'geometry=axisymmetric', '--json']);
+    const bad = runGprime([
+      'calc',
+      'flux-release',
+      'g_prime=0.05',
+      'flux=0.01',
+      'time=60',
+      'slope=5',
+      'geometry=axisymmetric',
+      '--json',
+    ]);
     expect(bad.code).toBe(2);
     expect(bad.json.error.field).toBe('geometry');
   });
   it('lock-release reports the arrival time at a point (inertial law x = 1.47 (g′A)^⅓ t^⅔, Huppert & Simpson 1980)', () => {
-    const r = runGprime(['calc', 'lock-release', 'g_prime=0.1', 'lock_length=3', 'lock_depth=2', 'time=30', 'arrival_distance=40', '--json']);
+    const r = runGprime([
+      'calc',
+      'lock-release',
+      'g_prime=0.1',
+      'lock_length=3',
+      'lock_depth=2',
+      'time=30',
+      'arrival_distance=40',
+      '--json',
+    ]);
     expect(r.code).toBe(0);
-    const later = runGprime(['calc', 'lock-release', 'g_prime=0.1', 'lock_length=3', 'lock_depth=2', `time=${r.json.results.arrival_time.value}`, '--json']);
+    const later = runGprime([
+      'calc',
+      'lock-release',
+      'g_prime=0.1',
+      'lock_length=3',
+      'lock_depth=2',
+      `time=${r.json.results.arrival_time.value}`,
+      '--json',
+    ]);
     expect(later.json.results.front_position.value).toBeCloseTo(40, 6);
   });
 });

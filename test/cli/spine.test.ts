@@ -22,7 +22,10 @@ describe('gprime calc (spine methods, real CLI)', () => {
   });
 
   it('densimetric-froude and viscosity (Kestin et al. 1978 / ITTC 2011 ν(20 °C) = 1.0034e-6 m²/s — from memory)', () => {
-    expect(runGprime(['calc', 'densimetric-froude', 'velocity=3', 'g_prime=0.245', 'length=0.2', '--json']).json.results.froude.value).toBeCloseTo(13.5526, 3);
+    expect(
+      runGprime(['calc', 'densimetric-froude', 'velocity=3', 'g_prime=0.245', 'length=0.2', '--json']).json.results
+        .froude.value,
+    ).toBeCloseTo(13.5526, 3);
     const v = runGprime(['calc', 'viscosity', 'temperature=20', '--json']).json.results.kinematic_viscosity;
     expect(v.unit).toBe('m2/s');
     expect(v.value).toBeCloseTo(1.0034e-6, 8);
@@ -32,7 +35,16 @@ describe('gprime calc (spine methods, real CLI)', () => {
     const r = runGprime(['calc', 'profile-summary', 'file=examples/demo-profile.csv', '--json']);
     expect(r.code).toBe(0);
     const res = r.json.results;
-    for (const k of ['mixed_layer_depth', 'thermocline_depth', 'n2_max', 'upper_thickness', 'rho_upper', 'rho_lower', 'g_prime']) expect(Number.isFinite(res[k].value)).toBe(true);
+    for (const k of [
+      'mixed_layer_depth',
+      'thermocline_depth',
+      'n2_max',
+      'upper_thickness',
+      'rho_upper',
+      'rho_lower',
+      'g_prime',
+    ])
+      expect(Number.isFinite(res[k].value)).toBe(true);
     expect(res.mixed_layer_depth.value).toBeLessThan(res.thermocline_depth.value);
     expect(res.rho_lower.value).toBeGreaterThan(res.rho_upper.value);
   });
@@ -43,12 +55,14 @@ describe('gprime calc (spine methods, real CLI)', () => {
     expect(r.stderr).toMatch(/temperature = 300 degC is not allowed: allowed range is ≥ -3 and ≤ 60 degC/);
     expect(runGprime(['calc', 'water-density']).code).toBe(2);
     expect(runGprime(['calc', 'water-density', 'temperature=abc']).stderr).toMatch(/temperature/);
-    expect(runGprime(['calc', 'water-density', 'temperature=10', 'colour=red']).stderr).toMatch(/no parameter "colour"/);
+    expect(runGprime(['calc', 'water-density', 'temperature=10', 'colour=red']).stderr).toMatch(
+      /no parameter "colour"/,
+    );
     expect(runGprime(['calc', 'profile-summary', 'file=does-not-exist.csv']).code).toBe(2);
     expect(runGprime(['calc', 'no-such-method']).code).toBe(2);
     const nan = runGprime(['calc', 'densimetric-froude', 'velocity=NaN', 'g_prime=1', 'length=1', '--json']);
     expect(nan.code).toBe(2);
-    expect(nan.json.error.field).toBe("velocity");
+    expect(nan.json.error.field).toBe('velocity');
     expect(nan.stdout).not.toMatch(/:\s*(NaN|-?Infinity)\b/);
   });
 
@@ -56,9 +70,13 @@ describe('gprime calc (spine methods, real CLI)', () => {
     const r = runGprime(['calc', '--list', '--json']);
     expect(r.code).toBe(0);
     const ids = r.json.methods.map((m: { id: string }) => m.id);
-    for (const id of ['water-density', 'reduced-gravity', 'densimetric-froude', 'viscosity', 'profile-summary']) expect(ids).toContain(id);
+    for (const id of ['water-density', 'reduced-gravity', 'densimetric-froude', 'viscosity', 'profile-summary'])
+      expect(ids).toContain(id);
     const wd = r.json.methods.find((m: { id: string }) => m.id === 'water-density');
-    expect(wd.parameters.find((p: { name: string }) => p.name === 'salinity')).toMatchObject({ unit: 'PSU', default: 0 });
+    expect(wd.parameters.find((p: { name: string }) => p.name === 'salinity')).toMatchObject({
+      unit: 'PSU',
+      default: 0,
+    });
     expect(wd.results).toEqual([{ name: 'density', unit: 'kg/m3', description: expect.any(String) }]);
   });
 });

@@ -11,7 +11,8 @@ function files(dir: string, ext: RegExp): string[] {
   });
 }
 
-const IMPORT = /(?:import|export)[^'"]*?from\s*['"]([^'"]+)['"]|import\(\s*['"]([^'"]+)['"]\s*\)|require\(\s*['"]([^'"]+)['"]\s*\)/g;
+const IMPORT =
+  /(?:import|export)[^'"]*?from\s*['"]([^'"]+)['"]|import\(\s*['"]([^'"]+)['"]\s*\)|require\(\s*['"]([^'"]+)['"]\s*\)/g;
 const imports = (file: string) => [...readFileSync(file, 'utf8').matchAll(IMPORT)].map((m) => m[1] ?? m[2] ?? m[3]);
 
 const NODE_BUILTINS = /^(node:|fs$|path$|os$|child_process$|url$|http$|https$|crypto$|stream$|util$|worker_threads$)/;
@@ -21,12 +22,19 @@ describe('layering (DEVELOPERS.md: shared-core is pure; the renderer never reach
     const bad: string[] = [];
     for (const f of files(join(ROOT, 'shared-core'), /\.ts$/)) {
       for (const spec of imports(f)) {
-        if (NODE_BUILTINS.test(spec) || /^(electron|svelte)/.test(spec) || /\.\.\/\.\.\/(src-main|src-renderer)/.test(spec) || spec.includes('src-main') || spec.includes('src-renderer')) {
+        if (
+          NODE_BUILTINS.test(spec) ||
+          /^(electron|svelte)/.test(spec) ||
+          /\.\.\/\.\.\/(src-main|src-renderer)/.test(spec) ||
+          spec.includes('src-main') ||
+          spec.includes('src-renderer')
+        ) {
           bad.push(`${f.slice(ROOT.length + 1)} imports ${spec}`);
         }
       }
       const text = readFileSync(f, 'utf8').replace(/\/\*[\s\S]*?\*\/|\/\/.*$/gm, '');
-      if (/\b(window|document|process|console)\./.test(text)) bad.push(`${f.slice(ROOT.length + 1)} uses a DOM/Node global`);
+      if (/\b(window|document|process|console)\./.test(text))
+        bad.push(`${f.slice(ROOT.length + 1)} uses a DOM/Node global`);
     }
     expect(bad).toEqual([]);
   });
@@ -34,7 +42,9 @@ describe('layering (DEVELOPERS.md: shared-core is pure; the renderer never reach
   it('src-renderer never imports electron or Node modules', () => {
     const bad: string[] = [];
     for (const f of files(join(ROOT, 'src-renderer'), /\.(ts|svelte)$/)) {
-      for (const spec of imports(f)) if (NODE_BUILTINS.test(spec) || /^electron/.test(spec) || spec.includes('src-main')) bad.push(`${f.slice(ROOT.length + 1)} imports ${spec}`);
+      for (const spec of imports(f))
+        if (NODE_BUILTINS.test(spec) || /^electron/.test(spec) || spec.includes('src-main'))
+          bad.push(`${f.slice(ROOT.length + 1)} imports ${spec}`);
     }
     expect(bad).toEqual([]);
   });

@@ -36,14 +36,18 @@ async function open(name: string): Promise<void> {
 /** The basin outline as [x, y] pairs: left bank from the surface down, then the right bank back up. */
 async function basinOutline(): Promise<number[][]> {
   const pts = await page.getByTestId('basin-outline').getAttribute('points');
-  return pts!.trim().split(/\s+/).map((p) => p.split(',').map(Number));
+  return pts!
+    .trim()
+    .split(/\s+/)
+    .map((p) => p.split(',').map(Number));
 }
 
 /** Width at each table depth (top down) and the y of each row, from the drawn outline. */
 async function widthsAndLevels(): Promise<{ width: number[]; y: number[] }> {
   const pts = await basinOutline();
   const n = pts.length / 2;
-  const left = pts.slice(0, n), right = pts.slice(n).reverse();
+  const left = pts.slice(0, n),
+    right = pts.slice(n).reverse();
   return { width: left.map((p, i) => right[i][0] - p[0]), y: left.map((p) => p[1]) };
 }
 
@@ -52,8 +56,12 @@ const detail = () => page.getByRole('dialog');
 beforeAll(async () => {
   session = await openWorkspaceSession({
     'quillmere-reservoir.gpsite': siteText(() => {}),
-    'cone-basin.gpsite': siteText((s) => { s.waterBody.hypsography = CONE; }),
-    'no-table.gpsite': siteText((s) => { delete s.waterBody.hypsography; }),
+    'cone-basin.gpsite': siteText((s) => {
+      s.waterBody.hypsography = CONE;
+    }),
+    'no-table.gpsite': siteText((s) => {
+      delete s.waterBody.hypsography;
+    }),
   });
   ({ page } = session);
 });
@@ -70,8 +78,14 @@ describe('the basin in the section', () => {
     expect(width.length).toBe(table.length);
     table.forEach((row, i) => {
       // outline points are written to 0.1 px: allow 0.3 px on a width of some 100 px
-      expect(Math.abs(width[i] - width[0] * Math.sqrt(row.area / table[0].area)), `width at ${row.depth} m`).toBeLessThan(0.3);
-      expect(Math.abs(y[i] - (y[0] + (row.depth / DEPTH) * (y[table.length - 1] - y[0]))), `level of ${row.depth} m`).toBeLessThan(0.2);
+      expect(
+        Math.abs(width[i] - width[0] * Math.sqrt(row.area / table[0].area)),
+        `width at ${row.depth} m`,
+      ).toBeLessThan(0.3);
+      expect(
+        Math.abs(y[i] - (y[0] + (row.depth / DEPTH) * (y[table.length - 1] - y[0]))),
+        `level of ${row.depth} m`,
+      ).toBeLessThan(0.2);
     });
   });
 
@@ -79,7 +93,9 @@ describe('the basin in the section', () => {
     await open('cone-basin.gpsite');
     const { width, y } = await widthsAndLevels();
     expect(width.length).toBe(CONE.length);
-    CONE.forEach((row, i) => expect(Math.abs(width[i] - width[0] * (1 - row.depth / DEPTH)), `width at ${row.depth} m`).toBeLessThan(0.3));
+    CONE.forEach((row, i) =>
+      expect(Math.abs(width[i] - width[0] * (1 - row.depth / DEPTH)), `width at ${row.depth} m`).toBeLessThan(0.3),
+    );
     expect(width[CONE.length - 1]).toBeLessThan(0.3);
     expect(y[CONE.length - 1]).toBeGreaterThan(y[0]);
   });
@@ -94,13 +110,20 @@ describe('the basin in the section', () => {
 describe('copying from the estimate detail', () => {
   it('"Copy table" puts the results, with units, on the clipboard as tab-separated rows', async () => {
     await open('quillmere-reservoir.gpsite');
-    await page.locator('[data-estimate="plume-summer"]').getByRole('button', { name: /detail/i }).click();
-    await detail().getByRole('button', { name: /^Copy table/ }).click();
+    await page
+      .locator('[data-estimate="plume-summer"]')
+      .getByRole('button', { name: /detail/i })
+      .click();
+    await detail()
+      .getByRole('button', { name: /^Copy table/ })
+      .click();
     await expect.poll(() => detail().getByTestId('copy-feedback').first().textContent()).toContain('Copied');
     const text = String(await page.evaluate('navigator.clipboard.readText()'));
     const rows = text.split('\n').map((l) => l.split('\t'));
     expect(rows[1]).toEqual(['result', 'value', 'unit']);
-    const shown = Number((await detail().locator('[data-name="max_rise"] [data-testid="reading-value"]').first().textContent())!.trim());
+    const shown = Number(
+      (await detail().locator('[data-name="max_rise"] [data-testid="reading-value"]').first().textContent())!.trim(),
+    );
     expect(rows.find((r) => r[0] === 'max rise')).toEqual(['max rise', String(shown), 'm']);
     expect(rows.find((r) => r[0] === 'port depth')?.slice(1)).toEqual(['20', 'm']);
     expect(rows.some((r) => r[0] === 'caution' && r[1].startsWith('Screening estimate only'))).toBe(true);
@@ -110,10 +133,17 @@ describe('copying from the estimate detail', () => {
 
   it('copies the table in the units on screen (US: feet)', async () => {
     await page.getByText('US', { exact: true }).click();
-    await page.locator('[data-estimate="plume-summer"]').getByRole('button', { name: /detail/i }).click();
-    await detail().getByRole('button', { name: /^Copy table/ }).click();
+    await page
+      .locator('[data-estimate="plume-summer"]')
+      .getByRole('button', { name: /detail/i })
+      .click();
+    await detail()
+      .getByRole('button', { name: /^Copy table/ })
+      .click();
     await expect.poll(() => detail().getByTestId('copy-feedback').first().textContent()).toContain('Copied');
-    const rows = String(await page.evaluate('navigator.clipboard.readText()')).split('\n').map((l) => l.split('\t'));
+    const rows = String(await page.evaluate('navigator.clipboard.readText()'))
+      .split('\n')
+      .map((l) => l.split('\t'));
     const port = rows.find((r) => r[0] === 'port depth')!;
     expect(port[2]).toBe('ft');
     // the demo's port is 20 m deep: 20 / 0.3048 = 65.62 ft, shown to four digits
@@ -123,12 +153,22 @@ describe('copying from the estimate detail', () => {
   });
 
   it('"Copy image" puts a PNG of the chart, at three times its screen size, on the clipboard', async () => {
-    await page.locator('[data-estimate="plume-summer"]').getByRole('button', { name: /detail/i }).click();
+    await page
+      .locator('[data-estimate="plume-summer"]')
+      .getByRole('button', { name: /detail/i })
+      .click();
     const canvas = detail().locator('canvas').first();
     await canvas.waitFor();
-    const size = async () => canvas.evaluate((c) => { const el = c as unknown as { width: number; height: number; clientWidth: number; clientHeight: number }; return [el.width, el.height, el.clientWidth, el.clientHeight]; });
+    const size = async () =>
+      canvas.evaluate((c) => {
+        const el = c as unknown as { width: number; height: number; clientWidth: number; clientHeight: number };
+        return [el.width, el.height, el.clientWidth, el.clientHeight];
+      });
     const before = await size();
-    await detail().getByRole('button', { name: /^Copy image/ }).first().click();
+    await detail()
+      .getByRole('button', { name: /^Copy image/ })
+      .first()
+      .click();
     await expect.poll(() => detail().getByTestId('copy-feedback').nth(1).textContent()).toContain('Copied');
     const got = (await page.evaluate(`(async () => {
       const items = await navigator.clipboard.read();
@@ -138,7 +178,8 @@ describe('copying from the estimate detail', () => {
     })()`)) as { types: string[]; head: number[]; size: number };
     expect(got.types).toContain('image/png');
     expect(got.head.slice(0, 8)).toEqual(PNG_SIGNATURE);
-    const be32 = (o: number) => ((got.head[o] << 24) | (got.head[o + 1] << 16) | (got.head[o + 2] << 8) | got.head[o + 3]) >>> 0;
+    const be32 = (o: number) =>
+      ((got.head[o] << 24) | (got.head[o + 1] << 16) | (got.head[o + 2] << 8) | got.head[o + 3]) >>> 0;
     // IHDR follows the signature: length (4), "IHDR" (4), width (4), height (4)
     expect(String.fromCharCode(...got.head.slice(12, 16))).toBe('IHDR');
     expect(Math.abs(be32(16) - 3 * before[2])).toBeLessThanOrEqual(3);
@@ -149,8 +190,12 @@ describe('copying from the estimate detail', () => {
   });
 
   it('says so when the clipboard refuses, and keeps the dialog usable', async () => {
-    await page.evaluate(`navigator.clipboard.writeText = () => Promise.reject(new DOMException('Write permission denied.', 'NotAllowedError'))`);
-    await detail().getByRole('button', { name: /^Copy table/ }).click();
+    await page.evaluate(
+      `navigator.clipboard.writeText = () => Promise.reject(new DOMException('Write permission denied.', 'NotAllowedError'))`,
+    );
+    await detail()
+      .getByRole('button', { name: /^Copy table/ })
+      .click();
     const feedback = detail().getByTestId('copy-feedback').first();
     await expect.poll(() => feedback.textContent()).toContain('Not copied');
     expect(await feedback.textContent()).toContain('The clipboard refused the copy');

@@ -7,7 +7,15 @@ import { chromium, type Browser, type BrowserContext, type Page } from 'playwrig
 export const ROOT = resolve(import.meta.dirname, '..', '..');
 
 /** The chromium flags our CI machines need (Debian chromium, no sandbox, no network chatter). */
-export const CHROMIUM_ARGS = ['--headless', '--no-sandbox', '--disable-gpu', '--disable-background-networking', '--disable-component-update', '--disable-sync', '--no-first-run'];
+export const CHROMIUM_ARGS = [
+  '--headless',
+  '--no-sandbox',
+  '--disable-gpu',
+  '--disable-background-networking',
+  '--disable-component-update',
+  '--disable-sync',
+  '--no-first-run',
+];
 
 export function launchChromium(): Promise<Browser> {
   return chromium.launch({ executablePath: '/usr/bin/chromium', args: CHROMIUM_ARGS });
@@ -23,29 +31,51 @@ export interface ShellProcess {
 /** A temporary workspace folder and data folder for one run. */
 export function tempFolders(): { workspace: string; dataDir: string; remove(): void } {
   const base = mkdtempSync(join(tmpdir(), 'gprime-e2e-'));
-  return { workspace: join(base, 'sites'), dataDir: join(base, 'data'), remove: () => rmSync(base, { recursive: true, force: true }) };
+  return {
+    workspace: join(base, 'sites'),
+    dataDir: join(base, 'data'),
+    remove: () => rmSync(base, { recursive: true, force: true }),
+  };
 }
 
 /** Starts `npm run serve`'s entry (src-main/shell/serve.ts) and waits for the address it prints. */
 export function startShell(workspace: string, dataDir: string, timeoutMs = 120_000): Promise<ShellProcess> {
-  const proc = spawn(process.execPath, ['--import', 'tsx', 'src-main/shell/serve.ts', '--workspace', workspace, '--data-dir', dataDir], {
-    cwd: ROOT, stdio: ['ignore', 'pipe', 'pipe'], env: { ...process.env, GPRIME_DATA_DIR: dataDir },
-  });
-  let out = '', err = '';
+  const proc = spawn(
+    process.execPath,
+    ['--import', 'tsx', 'src-main/shell/serve.ts', '--workspace', workspace, '--data-dir', dataDir],
+    {
+      cwd: ROOT,
+      stdio: ['ignore', 'pipe', 'pipe'],
+      env: { ...process.env, GPRIME_DATA_DIR: dataDir },
+    },
+  );
+  let out = '',
+    err = '';
   const exited = new Promise<void>((done) => proc.once('exit', () => done()));
   const stop = async (signal: NodeJS.Signals = 'SIGTERM') => {
     if (proc.exitCode === null && proc.signalCode === null) proc.kill(signal);
     await exited;
   };
   return new Promise((done, fail) => {
-    const timer = setTimeout(() => { void stop('SIGKILL'); fail(new Error(`the shell printed no address in ${timeoutMs} ms\n${out}\n${err}`)); }, timeoutMs);
-    proc.stderr!.on('data', (b: Buffer) => { err += b.toString(); });
+    const timer = setTimeout(() => {
+      void stop('SIGKILL');
+      fail(new Error(`the shell printed no address in ${timeoutMs} ms\n${out}\n${err}`));
+    }, timeoutMs);
+    proc.stderr!.on('data', (b: Buffer) => {
+      err += b.toString();
+    });
     proc.stdout!.on('data', (b: Buffer) => {
       out += b.toString();
       const m = /gprime workspace: (http:\/\/127\.0\.0\.1:\d+\/\?token=\S+)/.exec(out);
-      if (m) { clearTimeout(timer); done({ url: m[1], proc, stop }); }
+      if (m) {
+        clearTimeout(timer);
+        done({ url: m[1], proc, stop });
+      }
     });
-    proc.once('exit', (code) => { clearTimeout(timer); fail(new Error(`the shell exited (${code}) before printing its address\n${out}\n${err}`)); });
+    proc.once('exit', (code) => {
+      clearTimeout(timer);
+      fail(new Error(`the shell exited (${code}) before printing its address\n${out}\n${err}`));
+    });
   });
 }
 
@@ -71,7 +101,11 @@ export async function openWorkspaceSession(files: Record<string, string>): Promi
   await page.goto(shell.url);
   await page.getByRole('button', { name: 'New', exact: true }).waitFor();
   return {
-    folders, shell, browser, context, page,
+    folders,
+    shell,
+    browser,
+    context,
+    page,
     async close() {
       await browser.close();
       await shell.stop();

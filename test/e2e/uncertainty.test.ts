@@ -62,7 +62,9 @@ describe('uncertainty bands in the workspace', () => {
     await expect.poll(() => page.getByTestId('file-name').textContent()).toBe('quillmere-reservoir.gpsite');
     await expect.poll(() => bandLine('plunge-summer').textContent(), { timeout: 20_000 }).toMatch(/% band/);
     const shown = parseBandLine((await bandLine('plunge-summer').textContent())!);
-    const nominal = Number(await card('plunge-summer').locator('[data-name="plunge_depth"] [data-testid="reading-value"]').textContent());
+    const nominal = Number(
+      await card('plunge-summer').locator('[data-name="plunge_depth"] [data-testid="reading-value"]').textContent(),
+    );
     const band = expectedBand('plunge-summer', 'plunge_depth');
     expect(shown.coverage).toBe(90);
     expect(shown.unit).toBe('m');
@@ -85,26 +87,41 @@ describe('uncertainty bands in the workspace', () => {
   });
 
   it('lists the band in the detail, with its inputs, the note, and in "Copy table"', async () => {
-    await card('plunge-summer').getByRole('button', { name: /detail/i }).click();
+    await card('plunge-summer')
+      .getByRole('button', { name: /detail/i })
+      .click();
     const block = detail().getByTestId('band-block');
     await expect.poll(() => block.locator('tr[data-name="plunge_depth"] td').count()).toBe(4);
     const [low, median, high] = (await block.locator('tr[data-name="plunge_depth"] td').allTextContents()).map(Number);
     const band = expectedBand('plunge-summer', 'plunge_depth');
     expect(roundsTo(low, band.low) && roundsTo(median, band.median) && roundsTo(high, band.high)).toBe(true);
     expect(await block.textContent()).toContain('discharge');
-    expect(await block.textContent()).toContain('The band covers the stated input uncertainties only, not the error of the method itself.');
-    await detail().getByRole('button', { name: /^Copy table/ }).click();
+    expect(await block.textContent()).toContain(
+      'The band covers the stated input uncertainties only, not the error of the method itself.',
+    );
+    await detail()
+      .getByRole('button', { name: /^Copy table/ })
+      .click();
     await expect.poll(() => detail().getByTestId('copy-feedback').first().textContent()).toContain('Copied');
-    const rows = String(await page.evaluate('navigator.clipboard.readText()')).split('\n').map((l) => l.split('\t'));
+    const rows = String(await page.evaluate('navigator.clipboard.readText()'))
+      .split('\n')
+      .map((l) => l.split('\t'));
     expect(rows).toContainEqual(['90 % band', 'low', 'median', 'high', 'unit']);
-    expect(rows.find((r) => r[0] === 'plunge depth' && r.length === 5)?.slice(1).map(Number)).toEqual([low, median, high, NaN]);
+    expect(
+      rows
+        .find((r) => r[0] === 'plunge depth' && r.length === 5)
+        ?.slice(1)
+        .map(Number),
+    ).toEqual([low, median, high, NaN]);
     await page.screenshot({ path: join(tmpdir(), 'gprime-uncertainty-detail.png') });
     await detail().getByRole('button', { name: 'Close' }).click();
   });
 
   it('computes a band for an uncertainty typed in the editor, and names the field of one that cannot be read', async () => {
     await page.getByRole('button', { name: /^ammonia-dilution/ }).click();
-    await expect.poll(() => page.getByRole('heading', { name: 'Input uncertainty (one standard deviation)' }).count()).toBe(1);
+    await expect
+      .poll(() => page.getByRole('heading', { name: 'Input uncertainty (one standard deviation)' }).count())
+      .toBe(1);
     const effluent = page.getByLabel('± effluent', { exact: true });
     expect(await effluent.getAttribute('placeholder')).toContain('10%');
     await effluent.fill('10%');
@@ -115,7 +132,9 @@ describe('uncertainty bands in the workspace', () => {
 
     const ambient = page.getByLabel('± ambient', { exact: true });
     await ambient.fill('abc');
-    await expect.poll(() => bandLine('ammonia-dilution').textContent(), { timeout: 20_000 }).toContain('uncertainty of ambient');
+    await expect
+      .poll(() => bandLine('ammonia-dilution').textContent(), { timeout: 20_000 })
+      .toContain('uncertainty of ambient');
     // the error shows at the field it names, and the typed text stays there
     const field = page.locator('.field', { has: ambient });
     await expect.poll(() => field.getByRole('alert').textContent()).toContain('uncertainty of ambient');

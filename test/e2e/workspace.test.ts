@@ -26,7 +26,11 @@ async function openPage(url: string): Promise<Page> {
 /** Number of canvas pixels that are not blank (chart.js drew something). */
 async function inkedPixels(canvas: Locator): Promise<number> {
   // the root tsconfig has no DOM types: describe the little of a canvas this needs
-  type Canvas = { width: number; height: number; getContext(kind: '2d'): { getImageData(x: number, y: number, w: number, h: number): { data: Uint8ClampedArray } } };
+  type Canvas = {
+    width: number;
+    height: number;
+    getContext(kind: '2d'): { getImageData(x: number, y: number, w: number, h: number): { data: Uint8ClampedArray } };
+  };
   return canvas.evaluate((c) => {
     const el = c as unknown as Canvas;
     const d = el.getContext('2d').getImageData(0, 0, el.width, el.height).data;
@@ -36,7 +40,8 @@ async function inkedPixels(canvas: Locator): Promise<number> {
   });
 }
 
-const reading = (estimate: string, name: string) => page.locator(`[data-estimate="${estimate}"] [data-name="${name}"] [data-testid="reading-value"]`);
+const reading = (estimate: string, name: string) =>
+  page.locator(`[data-estimate="${estimate}"] [data-name="${name}"] [data-testid="reading-value"]`);
 const readNumber = async (l: Locator) => Number((await l.textContent())!.replace(/\s/g, ''));
 
 beforeAll(async () => {
@@ -56,7 +61,9 @@ describe('workspace in the browser shell', () => {
   it('creates a site and takes a depth typed in feet', async () => {
     await page.getByRole('button', { name: 'New', exact: true }).click();
     await page.getByLabel('Name', { exact: true }).first().fill('Lake Orrin (e2e)');
-    await expect.poll(() => page.getByRole('navigation', { name: 'site outline' }).textContent()).toContain('Lake Orrin (e2e)');
+    await expect
+      .poll(() => page.getByRole('navigation', { name: 'site outline' }).textContent())
+      .toContain('Lake Orrin (e2e)');
     const depth = page.getByLabel('Greatest depth');
     await depth.fill('98 ft');
     // the typed text is kept as typed; the hint shows it in SI (98 × 0.3048 = 29.87 m)
@@ -66,7 +73,9 @@ describe('workspace in the browser shell', () => {
 
   it('imports a CSV profile, draws the profile charts and marks a bad cell at its row and column', async () => {
     await page.getByRole('button', { name: /Condition 1/ }).click();
-    await page.getByTestId('csv-input').setInputFiles({ name: 'profile.csv', mimeType: 'text/csv', buffer: Buffer.from(CSV) });
+    await page
+      .getByTestId('csv-input')
+      .setInputFiles({ name: 'profile.csv', mimeType: 'text/csv', buffer: Buffer.from(CSV) });
     await expect.poll(() => page.locator('table[aria-label="profile samples"] tbody tr').count()).toBe(CSV_ROWS);
     const charts = page.locator('[aria-label="profile charts"] canvas');
     await expect.poll(() => charts.count()).toBeGreaterThanOrEqual(4);
@@ -77,7 +86,9 @@ describe('workspace in the browser shell', () => {
     await expect.poll(() => cell.getAttribute('aria-invalid')).toBe('true');
     await expect(page.locator('td', { has: cell }).textContent()).resolves.toContain('"warm" is not a number');
     await page.keyboard.press('Control+z');
-    const third = CSV.split('\n').filter((l) => /^\d/.test(l))[2].split(',')[1];
+    const third = CSV.split('\n')
+      .filter((l) => /^\d/.test(l))[2]
+      .split(',')[1];
     await expect.poll(() => cell.inputValue()).toBe(String(Number(third)));
     await expect.poll(() => cell.getAttribute('aria-invalid')).toBeNull();
   });
@@ -97,11 +108,16 @@ describe('workspace in the browser shell', () => {
     await expect.poll(() => page.locator('[data-testid="section-svg"] .band').count()).toBeGreaterThan(0);
 
     for (const id of ['outfall-buoyant-jet', 'intake-release-blend']) {
-      await page.locator(`[data-estimate="${id}"]`).getByRole('button', { name: /detail/i }).click();
+      await page
+        .locator(`[data-estimate="${id}"]`)
+        .getByRole('button', { name: /detail/i })
+        .click();
       const dialog = page.getByRole('dialog');
       await expect.poll(() => dialog.locator('canvas').count()).toBeGreaterThan(0);
       for (const c of await dialog.locator('canvas').all()) expect(await inkedPixels(c)).toBeGreaterThan(500);
-      await expect(dialog.getByRole('note', { name: 'caution' }).textContent()).resolves.toContain('Screening estimate only');
+      await expect(dialog.getByRole('note', { name: 'caution' }).textContent()).resolves.toContain(
+        'Screening estimate only',
+      );
       await dialog.getByRole('button', { name: 'Close' }).click();
     }
   });
@@ -114,7 +130,9 @@ describe('workspace in the browser shell', () => {
     await page.getByText('US', { exact: true }).click();
     await expect.poll(async () => Math.abs(Number(await port.inputValue()) - siDepth / FOOT)).toBeLessThan(1e-3);
     await expect.poll(() => page.locator('.field', { has: port }).textContent()).toContain('ft');
-    await expect.poll(async () => Math.abs((await readNumber(reading('outfall-buoyant-jet', 'max_rise'))) / (siRise / FOOT) - 1)).toBeLessThan(2e-3);
+    await expect
+      .poll(async () => Math.abs((await readNumber(reading('outfall-buoyant-jet', 'max_rise'))) / (siRise / FOOT) - 1))
+      .toBeLessThan(2e-3);
     await page.getByRole('button', { name: /^Intake 1/ }).click();
     await expect.poll(() => page.getByLabel('Target release temperature').inputValue()).toBe('54 degF');
     await page.getByText('SI', { exact: true }).click();
@@ -126,8 +144,12 @@ describe('workspace in the browser shell', () => {
     const port = page.getByLabel('Port depth below the surface');
     await port.fill('60 fx');
     await expect.poll(() => port.getAttribute('aria-invalid')).toBe('true');
-    await expect.poll(() => page.locator('.field', { has: port }).textContent()).toContain('the unit "fx" is not known');
-    await expect.poll(() => page.locator('[data-estimate="outfall-buoyant-jet"]').textContent()).toContain('Cannot compute');
+    await expect
+      .poll(() => page.locator('.field', { has: port }).textContent())
+      .toContain('the unit "fx" is not known');
+    await expect
+      .poll(() => page.locator('[data-estimate="outfall-buoyant-jet"]').textContent())
+      .toContain('Cannot compute');
     await port.fill('60 ft');
     await expect.poll(() => port.getAttribute('aria-invalid')).toBeNull();
     await expect.poll(() => page.locator('.field', { has: port }).textContent()).toContain('18.29');
@@ -137,7 +159,9 @@ describe('workspace in the browser shell', () => {
     const diameter = page.getByLabel('Port diameter');
     const before = await diameter.inputValue();
     await diameter.fill('0.45');
-    await expect.poll(() => page.locator('[data-estimate="outfall-buoyant-jet"] [data-name="max_rise"]').count()).toBe(1);
+    await expect
+      .poll(() => page.locator('[data-estimate="outfall-buoyant-jet"] [data-name="max_rise"]').count())
+      .toBe(1);
     await page.keyboard.press('Control+z');
     await expect.poll(() => diameter.inputValue()).toBe(before);
     await page.keyboard.press('Control+Shift+z');
@@ -178,7 +202,17 @@ describe('workspace in the browser shell', () => {
     await page.getByLabel('Name', { exact: true }).first().fill('Lake Orrin, edited before the crash');
     await expect.poll(() => page.getByTestId('file-name').textContent()).toContain('unsaved');
     // the autosave is debounced; wait until the recovery file holds the edit
-    await expect.poll(() => readdirSync(folders.dataDir).some((n) => statSync(join(folders.dataDir, n)).isFile() && readFileSync(join(folders.dataDir, n), 'utf8').includes('edited before the crash')), { timeout: 10_000 }).toBe(true);
+    await expect
+      .poll(
+        () =>
+          readdirSync(folders.dataDir).some(
+            (n) =>
+              statSync(join(folders.dataDir, n)).isFile() &&
+              readFileSync(join(folders.dataDir, n), 'utf8').includes('edited before the crash'),
+          ),
+        { timeout: 10_000 },
+      )
+      .toBe(true);
     await shell.stop('SIGKILL');
     await page.close();
 
@@ -187,7 +221,9 @@ describe('workspace in the browser shell', () => {
     const offer = page.getByRole('alertdialog');
     await expect.poll(() => offer.count()).toBe(1);
     await offer.getByRole('button', { name: 'Recover' }).click();
-    await expect.poll(() => page.getByRole('navigation', { name: 'site outline' }).textContent()).toContain('edited before the crash');
+    await expect
+      .poll(() => page.getByRole('navigation', { name: 'site outline' }).textContent())
+      .toContain('edited before the crash');
     await expect.poll(() => page.getByTestId('file-name').textContent()).toContain('unsaved');
   });
 });

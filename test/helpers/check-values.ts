@@ -23,7 +23,11 @@ export function loadCheckValues(topic: string, methodId: string): CheckValuesFil
 }
 
 /** Registers one test per case; a failure prints case, computed, reference, difference and limit. */
-export function runCheckValues(topic: string, methodId: string, compute: (inputs: Record<string, number | string>) => number): void {
+export function runCheckValues(
+  topic: string,
+  methodId: string,
+  compute: (inputs: Record<string, number | string>) => number,
+): void {
   const file = loadCheckValues(topic, methodId);
   describe(`${methodId} against published values`, () => {
     for (const check of file.checks) {

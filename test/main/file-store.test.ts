@@ -12,7 +12,8 @@ import { RecoveryStore } from '../../src-main/services/recovery';
 const DEMO = readFileSync(join(import.meta.dirname, '../../examples/quillmere-reservoir.gpsite'), 'utf8');
 const OLD = readFileSync(join(import.meta.dirname, '../fixtures/sites/version1.gpsite'), 'utf8');
 const tmp = () => mkdtempSync(join(tmpdir(), 'gprime-store-'));
-const diskFull = (): NodeJS.ErrnoException => Object.assign(new Error('ENOSPC: no space left on device'), { code: 'ENOSPC' });
+const diskFull = (): NodeJS.ErrnoException =>
+  Object.assign(new Error('ENOSPC: no space left on device'), { code: 'ENOSPC' });
 
 describe('atomic save', () => {
   it('replaces the whole file and keeps its permissions', () => {
@@ -34,9 +35,25 @@ describe('atomic save', () => {
       const ops: WriteOps = {
         ...nodeWriteOps,
         // the write fails half-way, as on a full disk
-        writeSync: step === 'writeSync' ? (fd, data, off) => { if (written++) throw diskFull(); return nodeWriteOps.writeSync(fd, data, off, 100); } : nodeWriteOps.writeSync,
-        fsyncSync: step === 'fsyncSync' ? () => { throw diskFull(); } : nodeWriteOps.fsyncSync,
-        renameSync: step === 'renameSync' ? () => { throw diskFull(); } : nodeWriteOps.renameSync,
+        writeSync:
+          step === 'writeSync'
+            ? (fd, data, off) => {
+                if (written++) throw diskFull();
+                return nodeWriteOps.writeSync(fd, data, off, 100);
+              }
+            : nodeWriteOps.writeSync,
+        fsyncSync:
+          step === 'fsyncSync'
+            ? () => {
+                throw diskFull();
+              }
+            : nodeWriteOps.fsyncSync,
+        renameSync:
+          step === 'renameSync'
+            ? () => {
+                throw diskFull();
+              }
+            : nodeWriteOps.renameSync,
       };
       expect(() => saveSiteText(file, DEMO, ops)).toThrow(/ENOSPC/);
       expect(readFileSync(file, 'utf8')).toBe(OLD);
@@ -56,11 +73,20 @@ describe('files that do not load are refused and never modified', () => {
   const malformed = DEMO.slice(0, 400);
   const badField = DEMO.replace(/"kind": "reservoir"/, '"kind": "swimming pool"');
   const host: ShellHost = {
-    shell: 'browser', allowFile: (p) => p, allowDir: (p) => p, pickOpenPath: async () => null,
-    pickSavePath: async () => null, pickExportDir: async () => null, writeClipboardImage: async () => {},
+    shell: 'browser',
+    allowFile: (p) => p,
+    allowDir: (p) => p,
+    pickOpenPath: async () => null,
+    pickSavePath: async () => null,
+    pickExportDir: async () => null,
+    writeClipboardImage: async () => {},
   };
 
-  for (const [what, text, place] of [['a newer version', newer, /version 99.*newer gprime/], ['malformed JSON', malformed, /not valid JSON/], ['an invalid field', badField, /waterBody\.kind/]] as const) {
+  for (const [what, text, place] of [
+    ['a newer version', newer, /version 99.*newer gprime/],
+    ['malformed JSON', malformed, /not valid JSON/],
+    ['an invalid field', badField, /waterBody\.kind/],
+  ] as const) {
     it(`${what}: reading answers a site-file error naming the place; saving over it is refused`, async () => {
       const dir = tmp();
       const file = join(dir, 'x.gpsite');

@@ -7,7 +7,11 @@ import { describe, expect, it, vi } from 'vitest';
 import { CHANNEL_NAMES } from '../../shared-core/ipc/contract';
 import type { ShellHost } from '../../src-main/services/channel-handlers';
 
-const h = vi.hoisted(() => ({ handlers: new Map<string, (event: unknown, payload: unknown) => Promise<unknown>>(), exposed: {} as Record<string, any>, invoke: vi.fn() }));
+const h = vi.hoisted(() => ({
+  handlers: new Map<string, (event: unknown, payload: unknown) => Promise<unknown>>(),
+  exposed: {} as Record<string, any>,
+  invoke: vi.fn(),
+}));
 
 vi.mock('electron', () => ({
   ipcMain: { handle: (name: string, f: any) => h.handlers.set(name, f) },
@@ -30,7 +34,8 @@ const host: ShellHost = {
 registerIpc(createChannelHandlers({ host, dataDir: mkdtempSync(join(tmpdir(), 'gprime-ipc-')), version: '9.9.9' }));
 
 const ours = { url: 'gprime://app/index.html', parent: null };
-const call = (channel: string, payload: unknown, senderFrame: unknown = ours) => h.handlers.get(`gprime:${channel}`)!({ senderFrame }, payload);
+const call = (channel: string, payload: unknown, senderFrame: unknown = ours) =>
+  h.handlers.get(`gprime:${channel}`)!({ senderFrame }, payload);
 
 describe('IPC handlers', () => {
   it('registers exactly one handler per contract channel', () => {

@@ -7,7 +7,8 @@ const { menuTemplate } = await import('../../src-main/electron/menu');
 describe('application menu', () => {
   const send = vi.fn();
   const items = (recent: string[]) => menuTemplate({ recent, isMac: false, send, about: () => {} });
-  const find = (menu: any[], label: string): any => menu.flatMap((m) => [m, ...(Array.isArray(m.submenu) ? m.submenu : [])]).find((m) => m.label === label);
+  const find = (menu: any[], label: string): any =>
+    menu.flatMap((m) => [m, ...(Array.isArray(m.submenu) ? m.submenu : [])]).find((m) => m.label === label);
 
   it('forwards file commands and recent files to the renderer', () => {
     const menu = items(['/sites/a.gpsite']);

@@ -18,16 +18,28 @@ vi.mock('electron', () => {
       setPermissionRequestHandler: (f: any) => (this.permissionRequest = f),
       setPermissionCheckHandler: (f: any) => (this.permissionCheck = f),
     };
-    on(name: string, f: any) { this.listeners[name] = f; return this; }
-    setWindowOpenHandler(f: any) { this.openHandler = f; }
+    on(name: string, f: any) {
+      this.listeners[name] = f;
+      return this;
+    }
+    setWindowOpenHandler(f: any) {
+      this.openHandler = f;
+    }
   }
   class BrowserWindow {
     webContents = new FakeContents();
     url = '';
-    constructor(public options: any) { h.windows.push(this); }
-    once() { return this; }
+    constructor(public options: any) {
+      h.windows.push(this);
+    }
+    once() {
+      return this;
+    }
     show() {}
-    loadURL(url: string) { this.url = url; return Promise.resolve(); }
+    loadURL(url: string) {
+      this.url = url;
+      return Promise.resolve();
+    }
   }
   return {
     BrowserWindow,
@@ -43,7 +55,12 @@ const { RENDERER_CSP } = await import('../../src-main/services/static-files');
 
 /** Parses a CSP header into directive → sources. */
 function csp(header: string): Record<string, string[]> {
-  return Object.fromEntries(header.split(';').map((d) => d.trim().split(/\s+/)).map(([k, ...v]) => [k, v]));
+  return Object.fromEntries(
+    header
+      .split(';')
+      .map((d) => d.trim().split(/\s+/))
+      .map(([k, ...v]) => [k, v]),
+  );
 }
 
 describe('the workspace window', () => {
@@ -84,12 +101,17 @@ describe('the workspace window', () => {
     expect(wc.permissionCheck(wc, 'clipboard-read', 'gprime://app/')).toBe(false);
   });
 
-  it('grants clipboard writing (Copy image, Copy table) to the app\'s own pages and nothing else', () => {
+  it("grants clipboard writing (Copy image, Copy table) to the app's own pages and nothing else", () => {
     createMainWindow('/p.cjs');
     const wc = h.windows[0].webContents;
     const asked = (permission: string, requestingUrl?: string) => {
       const callback = vi.fn();
-      wc.permissionRequest(wc, permission, callback, requestingUrl === undefined ? undefined : { requestingUrl, isMainFrame: true });
+      wc.permissionRequest(
+        wc,
+        permission,
+        callback,
+        requestingUrl === undefined ? undefined : { requestingUrl, isMainFrame: true },
+      );
       return callback.mock.calls[0][0];
     };
     expect(asked('clipboard-sanitized-write', APP_URL)).toBe(true);
@@ -108,7 +130,10 @@ describe('the workspace window', () => {
   it('asks before discarding unsaved changes and closes only when the user agrees', () => {
     createMainWindow('/p.cjs');
     const wc = h.windows[0].webContents;
-    for (const [choice, closes] of [[0, true], [1, false]] as const) {
+    for (const [choice, closes] of [
+      [0, true],
+      [1, false],
+    ] as const) {
       h.dialogChoice = choice;
       const event = { preventDefault: vi.fn() };
       wc.listeners['will-prevent-unload'](event);
@@ -118,7 +143,7 @@ describe('the workspace window', () => {
 });
 
 describe('the content security policy', () => {
-  it('allows only the app\'s own scripts: no inline script, no eval, no plugins, no framing', () => {
+  it("allows only the app's own scripts: no inline script, no eval, no plugins, no framing", () => {
     const p = csp(RENDERER_CSP);
     expect(p['default-src']).toEqual(["'self'"]);
     expect(p['script-src']).toEqual(["'self'"]);

@@ -17,22 +17,36 @@ describe('gprime assess --out (real CLI)', () => {
     expect(run.code).toBe(0);
     expect(run.stdout).toMatch(/Wrote \d+ files to /);
     expect(run.stdout).toContain('Screening estimate only');
-    for (const f of ['quillmere-reservoir.pdf', 'quillmere-reservoir.xlsx', 'tables/summary.csv']) expect(existsSync(join(out, f)), f).toBe(true);
+    for (const f of ['quillmere-reservoir.pdf', 'quillmere-reservoir.xlsx', 'tables/summary.csv'])
+      expect(existsSync(join(out, f)), f).toBe(true);
     const json = runGprime(['assess', site, '--json']).json;
     for (const e of json.estimates) {
-      const rows = Papa.parse<Record<string, string>>(readFileSync(join(out, 'tables', `${e.id}.csv`), 'utf8'), { header: true, skipEmptyLines: true }).data;
+      const rows = Papa.parse<Record<string, string>>(readFileSync(join(out, 'tables', `${e.id}.csv`), 'utf8'), {
+        header: true,
+        skipEmptyLines: true,
+      }).data;
       for (const [name, r] of Object.entries(e.results as Record<string, { value: number | string }>)) {
         const row = rows.find((x) => x.section === 'result' && x.name === name)!;
         expect(typeof r.value === 'number' ? Number(row.value) : row.value, `${e.id}.${name}`).toBe(r.value);
       }
     }
-    const text = execFileSync('pdftotext', [join(out, 'quillmere-reservoir.pdf'), '-'], { encoding: 'utf8' }).replace(/\s+/g, ' ');
+    const text = execFileSync('pdftotext', [join(out, 'quillmere-reservoir.pdf'), '-'], { encoding: 'utf8' }).replace(
+      /\s+/g,
+      ' ',
+    );
     expect(text).toContain(json.siteHash);
     expect(text).toContain(`gprime version ${json.gprimeVersion}`);
   });
 
   it('exits 2 on an unknown format', () => {
-    const run = runGprime(['assess', 'examples/amsel-estuary.gpsite', '--out', join(out, 'bad'), '--format', 'pdf,docx']);
+    const run = runGprime([
+      'assess',
+      'examples/amsel-estuary.gpsite',
+      '--out',
+      join(out, 'bad'),
+      '--format',
+      'pdf,docx',
+    ]);
     expect(run.code).toBe(2);
     expect(run.stderr).toMatch(/unknown format "docx"/);
   });

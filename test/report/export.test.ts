@@ -19,7 +19,19 @@ let written: string[];
 
 /** "4.365×10⁻³", "−0.5", "997.5" → number (the PDF's typeset numbers). */
 function parseShown(text: string): number {
-  const sup: Record<string, string> = { '⁻': '-', '⁰': '0', '¹': '1', '²': '2', '³': '3', '⁴': '4', '⁵': '5', '⁶': '6', '⁷': '7', '⁸': '8', '⁹': '9' };
+  const sup: Record<string, string> = {
+    '⁻': '-',
+    '⁰': '0',
+    '¹': '1',
+    '²': '2',
+    '³': '3',
+    '⁴': '4',
+    '⁵': '5',
+    '⁶': '6',
+    '⁷': '7',
+    '⁸': '8',
+    '⁹': '9',
+  };
   const t = text.replace(/−/g, '-');
   const m = /^(-?[\d.]+)(?:×10([⁻⁰¹²³⁴⁵⁶⁷⁸⁹]+))?$/.exec(t);
   if (!m) return Number.NaN;
@@ -58,10 +70,23 @@ describe('PDF calc sheet (read back with poppler pdftotext / pdfinfo / pdfimages
 
   it('holds the title block, the contents, page numbers and the cautions', () => {
     const p = assessment.project;
-    for (const s of [p.name, p.site, p.preparedBy, p.checkedBy, p.date, `gprime version ${GPRIME_VERSION}`, assessment.siteHash, 'Contents', 'References', assessment.caution]) {
+    for (const s of [
+      p.name,
+      p.site,
+      p.preparedBy,
+      p.checkedBy,
+      p.date,
+      `gprime version ${GPRIME_VERSION}`,
+      assessment.siteHash,
+      'Contents',
+      'References',
+      assessment.caution,
+    ]) {
       expect(text, s).toContain(s);
     }
-    const pages = Number(/Pages:\s+(\d+)/.exec(execFileSync('pdfinfo', [join(out, 'quillmere-reservoir.pdf')], { encoding: 'utf8' }))![1]);
+    const pages = Number(
+      /Pages:\s+(\d+)/.exec(execFileSync('pdfinfo', [join(out, 'quillmere-reservoir.pdf')], { encoding: 'utf8' }))![1],
+    );
     expect(pages).toBeGreaterThan(3);
     for (let i = 1; i <= pages; i++) expect(text).toContain(`Page ${i} of ${pages}`);
   });
@@ -73,7 +98,10 @@ describe('PDF calc sheet (read back with poppler pdftotext / pdfinfo / pdfimages
       for (const q of s.inputs) expect(text).toContain(q.name);
       for (const m of s.methods) if (m.equation) expect(text).toContain(m.equation.replace(/\s+/g, ' ').slice(0, 40));
       for (const w of s.warnings) expect(text).toContain(w.replace(/\s+/g, ' '));
-      for (const r of s.uncertainty?.rows ?? []) expect(layout).toMatch(new RegExp(`${r.name}\\s+${r.shown.map((v) => v.replace(/[.*+?^${}()|[\]\\]/g, '\\$&')).join('\\s+')}`));
+      for (const r of s.uncertainty?.rows ?? [])
+        expect(layout).toMatch(
+          new RegExp(`${r.name}\\s+${r.shown.map((v) => v.replace(/[.*+?^${}()|[\]\\]/g, '\\$&')).join('\\s+')}`),
+        );
     }
     expect(model.estimates.filter((s) => s.uncertainty).length).toBeGreaterThan(0);
     expect(text).toContain('Source: Craya, A. (1949)');
@@ -90,9 +118,16 @@ describe('PDF calc sheet (read back with poppler pdftotext / pdfinfo / pdfimages
       for (const [name, r] of Object.entries(e.results)) {
         if (typeof r.value !== 'number') continue;
         const line = lines.find((l, i) => i > results && l.trim().startsWith(name + ' '))!;
-        const token = line.trim().split(/\s+/).slice(1).filter((t) => !Number.isNaN(parseShown(t))).pop(); // value column: last number on the row
+        const token = line
+          .trim()
+          .split(/\s+/)
+          .slice(1)
+          .filter((t) => !Number.isNaN(parseShown(t)))
+          .pop(); // value column: last number on the row
         expect(token, `${e.id}.${name}: ${line}`).toBeDefined();
-        expect(Math.abs(parseShown(token!) - r.value), `${e.id}.${name}`).toBeLessThanOrEqual(5e-4 * Math.abs(r.value) + 1e-300);
+        expect(Math.abs(parseShown(token!) - r.value), `${e.id}.${name}`).toBeLessThanOrEqual(
+          5e-4 * Math.abs(r.value) + 1e-300,
+        );
         checked++;
       }
     }
@@ -100,7 +135,10 @@ describe('PDF calc sheet (read back with poppler pdftotext / pdfinfo / pdfimages
   });
 
   it('embeds the charts at 300 ppi', () => {
-    const list = execFileSync('pdfimages', ['-list', join(out, 'quillmere-reservoir.pdf')], { encoding: 'utf8' }).trim().split('\n').slice(2);
+    const list = execFileSync('pdfimages', ['-list', join(out, 'quillmere-reservoir.pdf')], { encoding: 'utf8' })
+      .trim()
+      .split('\n')
+      .slice(2);
     expect(list.length).toBe(buildReportModel(assessment, 'si').estimates.flatMap((s) => s.charts).length);
     for (const row of list) {
       const cols = row.trim().split(/\s+/);
@@ -113,8 +151,14 @@ describe('PDF calc sheet (read back with poppler pdftotext / pdfinfo / pdfimages
 describe('tables round-trip to the numbers of `assess`', () => {
   it('each estimate CSV holds every input and result at full precision (SI)', () => {
     for (const e of assessment.estimates) {
-      const rows = Papa.parse<Record<string, string>>(readFileSync(join(out, 'tables', `${e.id}.csv`), 'utf8'), { header: true, skipEmptyLines: true }).data;
-      for (const [section, values] of [['input', e.inputs], ['result', e.results]] as const) {
+      const rows = Papa.parse<Record<string, string>>(readFileSync(join(out, 'tables', `${e.id}.csv`), 'utf8'), {
+        header: true,
+        skipEmptyLines: true,
+      }).data;
+      for (const [section, values] of [
+        ['input', e.inputs],
+        ['result', e.results],
+      ] as const) {
         for (const [name, v] of Object.entries(values)) {
           const row = rows.find((r) => r.section === section && r.name === name)!;
           expect(row, `${e.id} ${name}`).toBeDefined();
@@ -130,7 +174,11 @@ describe('tables round-trip to the numbers of `assess`', () => {
   it('the workbook has a sheet per estimate whose results equal `assess` exactly', async () => {
     const wb = new ExcelJS.Workbook();
     await wb.xlsx.readFile(join(out, 'quillmere-reservoir.xlsx'));
-    expect(wb.worksheets.map((w) => w.name)).toEqual(['Report', ...assessment.estimates.map((e) => e.id), ...(assessment.compliance.length ? ['Compliance'] : [])]);
+    expect(wb.worksheets.map((w) => w.name)).toEqual([
+      'Report',
+      ...assessment.estimates.map((e) => e.id),
+      ...(assessment.compliance.length ? ['Compliance'] : []),
+    ]);
     const report = wb.getWorksheet('Report')!;
     const cells = report.getSheetValues().flat().map(String);
     expect(cells).toContain(assessment.siteHash);
@@ -149,12 +197,19 @@ describe('tables round-trip to the numbers of `assess`', () => {
     const dir = join(out, 'us');
     await writeReport(loaded, assessment, { outDir: dir, units: 'us', formats: ['csv'] });
     const factor: Record<string, [string, (x: number) => number]> = {
-      m: ['ft', (x) => x / 0.3048], 'm3/s': ['cfs', (x) => x / 0.028316846592], 'm/s': ['ft/s', (x) => x / 0.3048],
-      'm/s2': ['ft/s2', (x) => x / 0.3048], degC: ['degF', (x) => 1.8 * x + 32], 'kg/m3': ['lb/ft3', (x) => (x * 0.028316846592) / 0.45359237],
+      m: ['ft', (x) => x / 0.3048],
+      'm3/s': ['cfs', (x) => x / 0.028316846592],
+      'm/s': ['ft/s', (x) => x / 0.3048],
+      'm/s2': ['ft/s2', (x) => x / 0.3048],
+      degC: ['degF', (x) => 1.8 * x + 32],
+      'kg/m3': ['lb/ft3', (x) => (x * 0.028316846592) / 0.45359237],
     };
     let checked = 0;
     for (const e of assessment.estimates) {
-      const rows = Papa.parse<Record<string, string>>(readFileSync(join(dir, 'tables', `${e.id}.csv`), 'utf8'), { header: true, skipEmptyLines: true }).data;
+      const rows = Papa.parse<Record<string, string>>(readFileSync(join(dir, 'tables', `${e.id}.csv`), 'utf8'), {
+        header: true,
+        skipEmptyLines: true,
+      }).data;
       for (const [name, v] of Object.entries({ ...e.inputs, ...e.results })) {
         if (typeof v.value !== 'number' || !factor[v.unit]) continue;
         const row = rows.find((r) => r.name === name)!;
@@ -172,20 +227,31 @@ describe('reproducibility', () => {
     const model = buildReportModel(assessment, 'si');
     const a = await renderReport(model, ['pdf', 'svg', 'png', 'csv'], 'x', loaded.site.project.date);
     const again = assessSite(readSiteFile(SITE).site, { gprimeVersion: GPRIME_VERSION, siteHash: loaded.hash });
-    const b = await renderReport(buildReportModel(again, 'si'), ['pdf', 'svg', 'png', 'csv'], 'x', loaded.site.project.date);
+    const b = await renderReport(
+      buildReportModel(again, 'si'),
+      ['pdf', 'svg', 'png', 'csv'],
+      'x',
+      loaded.site.project.date,
+    );
     expect(b.map((f) => f.path)).toEqual(a.map((f) => f.path));
     a.forEach((f, i) => expect(Buffer.from(b[i].bytes).equals(Buffer.from(f.bytes)), f.path).toBe(true));
   });
 
   it('a report exported from the document text records the SHA-256 of that text (as sha256sum computes it)', async () => {
     const dir = join(out, 'from-text');
-    const files = await exportSiteReport(readFileSync(SITE, 'utf8'), 'Quillmere.gpsite', { outDir: dir, units: 'si', formats: ['csv'] });
+    const files = await exportSiteReport(readFileSync(SITE, 'utf8'), 'Quillmere.gpsite', {
+      outDir: dir,
+      units: 'si',
+      formats: ['csv'],
+    });
     const expected = execFileSync('sha256sum', [SITE], { encoding: 'utf8' }).split(' ')[0];
     expect(files.some((f) => f.endsWith('summary.csv'))).toBe(true);
     expect(readFileSync(join(dir, 'tables', 'summary.csv'), 'utf8')).toContain(`Site file SHA-256,${expected}`);
   });
 
   it('refuses an unknown format naming the known ones', async () => {
-    await expect(writeReport(loaded, assessment, { outDir: join(out, 'bad'), units: 'si', formats: ['docx'] })).rejects.toThrow(/unknown format "docx".*pdf, png, svg, csv, xlsx/);
+    await expect(
+      writeReport(loaded, assessment, { outDir: join(out, 'bad'), units: 'si', formats: ['docx'] }),
+    ).rejects.toThrow(/unknown format "docx".*pdf, png, svg, csv, xlsx/);
   });
 });

@@ -1,7 +1,14 @@
 import { readdirSync, readFileSync, statSync } from 'node:fs';
 import { join, resolve } from 'node:path';
 import { describe, expect, it } from 'vitest';
-import { buildReportModel, chartSpecs, formatValue, LINE_STYLES, METHOD_CATALOGUE, methodsForSource } from '../../shared-core/report';
+import {
+  buildReportModel,
+  chartSpecs,
+  formatValue,
+  LINE_STYLES,
+  METHOD_CATALOGUE,
+  methodsForSource,
+} from '../../shared-core/report';
 import { assessSite, type Assessment } from '../../shared-core/site';
 import { readSiteFile, GPRIME_VERSION } from '../../src-main/services/site-file';
 
@@ -19,8 +26,16 @@ const CFS = 0.028316846592;
 
 describe('report numbers (four significant figures, NIST SP 811 §7.9 style powers of ten)', () => {
   it.each([
-    [997.4920726935004, '997.5'], [0.0043648999631674314, '0.004365'], [0.00043648999631674314, '4.365×10⁻⁴'], [21341.232477831985, '21341'], [-0.5, '−0.5'],
-    [4.130675268290227, '4.131'], [2.5e7, '2.5×10⁷'], [0, '0'], [Infinity, '∞'], [Number.NaN, 'not a number'],
+    [997.4920726935004, '997.5'],
+    [0.0043648999631674314, '0.004365'],
+    [0.00043648999631674314, '4.365×10⁻⁴'],
+    [21341.232477831985, '21341'],
+    [-0.5, '−0.5'],
+    [4.130675268290227, '4.131'],
+    [2.5e7, '2.5×10⁷'],
+    [0, '0'],
+    [Infinity, '∞'],
+    [Number.NaN, 'not a number'],
   ])('%s → %s', (x, text) => expect(formatValue(x)).toBe(text));
 });
 
@@ -33,16 +48,27 @@ describe('report model', () => {
     const m = buildReportModel(quillmere, 'si');
     const block = Object.fromEntries(m.titleBlock.map((r) => [r.label, r.value]));
     expect(block).toMatchObject({
-      Project: quillmere.project.name, Site: quillmere.project.site, 'Prepared by': quillmere.project.preparedBy,
-      'Checked by': quillmere.project.checkedBy, Date: quillmere.project.date, Revision: quillmere.project.revision,
-      'gprime version': GPRIME_VERSION, 'Site file SHA-256': quillmere.siteHash,
+      Project: quillmere.project.name,
+      Site: quillmere.project.site,
+      'Prepared by': quillmere.project.preparedBy,
+      'Checked by': quillmere.project.checkedBy,
+      Date: quillmere.project.date,
+      Revision: quillmere.project.revision,
+      'gprime version': GPRIME_VERSION,
+      'Site file SHA-256': quillmere.siteHash,
     });
     expect(m.cautions[0]).toBe(quillmere.caution);
   });
 
   it('lists summary, every estimate, references and cautions in the contents, numbered in order', () => {
     const m = buildReportModel(quillmere, 'si');
-    expect(m.contents.map((c) => c.anchor)).toEqual(['summary', ...quillmere.estimates.map((e) => e.id), ...(quillmere.compliance.length ? ['compliance'] : []), 'references', 'cautions']);
+    expect(m.contents.map((c) => c.anchor)).toEqual([
+      'summary',
+      ...quillmere.estimates.map((e) => e.id),
+      ...(quillmere.compliance.length ? ['compliance'] : []),
+      'references',
+      'cautions',
+    ]);
     expect(m.contents.map((c) => c.number)).toEqual(m.contents.map((_, i) => String(i + 1)));
   });
 
@@ -78,15 +104,33 @@ describe('report model', () => {
   });
 
   it('renders any series generically: one chart per unit, gaps for non-finite values, depth as y drawn downwards', () => {
-    const charts = chartSpecs([
-      {
-        title: 'Front position', x: { label: 'Time', unit: 's', values: [0, 10, 20] },
-        y: [{ label: 'Benjamin', unit: 'm', values: [0, 5, 9] }, { label: 'Shin', unit: 'm', values: [0, 4, Number.NaN] }, { label: 'Speed', unit: 'm/s', values: [0.5, 0.45, 0.4] }],
-        caption: 'Front position against time',
-      },
-      { title: 'Plume path', x: { label: 'Distance', unit: 'm', values: [0, 1, 2] }, y: [{ label: 'Centreline depth', unit: 'm', values: [20, 18, 17] }], depthAxis: true },
-    ], 'si', 'e1');
-    expect(charts.map((c) => c.title)).toEqual(['Front position: Benjamin, Shin', 'Front position: Speed', 'Plume path']);
+    const charts = chartSpecs(
+      [
+        {
+          title: 'Front position',
+          x: { label: 'Time', unit: 's', values: [0, 10, 20] },
+          y: [
+            { label: 'Benjamin', unit: 'm', values: [0, 5, 9] },
+            { label: 'Shin', unit: 'm', values: [0, 4, Number.NaN] },
+            { label: 'Speed', unit: 'm/s', values: [0.5, 0.45, 0.4] },
+          ],
+          caption: 'Front position against time',
+        },
+        {
+          title: 'Plume path',
+          x: { label: 'Distance', unit: 'm', values: [0, 1, 2] },
+          y: [{ label: 'Centreline depth', unit: 'm', values: [20, 18, 17] }],
+          depthAxis: true,
+        },
+      ],
+      'si',
+      'e1',
+    );
+    expect(charts.map((c) => c.title)).toEqual([
+      'Front position: Benjamin, Shin',
+      'Front position: Speed',
+      'Plume path',
+    ]);
     expect(charts[0].datasets.map((d) => d.style)).toEqual([0, 1]);
     expect(charts[0].datasets[1].points[2]).toEqual({ x: 20, y: null });
     expect(charts[0].table.rows[2]).toEqual([20, 9, null]);
@@ -106,22 +150,49 @@ describe('report model', () => {
     const a: Assessment = {
       ...quillmere,
       estimates: [{ ...quillmere.estimates[0], status: 'error', error: 'file: no profile', results: {}, series: [] }],
-      compliance: [{ feature: 'Outfall', condition: 'Late summer', constituent: 'ammonia', unit: 'mg/L', requiredDilution: 10.4, achievedDilution: 12.48, margin: 0.2, verdict: 'meets', note: '' }],
+      compliance: [
+        {
+          feature: 'Outfall',
+          condition: 'Late summer',
+          constituent: 'ammonia',
+          unit: 'mg/L',
+          requiredDilution: 10.4,
+          achievedDilution: 12.48,
+          margin: 0.2,
+          verdict: 'meets',
+          note: '',
+        },
+      ],
     };
     const m = buildReportModel(a, 'si');
     expect(m.summary[0]).toMatchObject({ status: 'error', keyResult: 'not computed: file: no profile' });
-    expect(m.compliance?.rows[0]).toEqual(['Outfall', 'Late summer', 'ammonia', 'mg/L', '10.4', '12.48', '20 %', 'meets', '']);
+    expect(m.compliance?.rows[0]).toEqual([
+      'Outfall',
+      'Late summer',
+      'ammonia',
+      'mg/L',
+      '10.4',
+      '12.48',
+      '20 %',
+      'meets',
+      '',
+    ]);
     expect(m.contents.map((c) => c.anchor)).toContain('compliance');
   });
 });
 
 describe('method equations come from the MethodInfo descriptors', () => {
   function files(dir: string): string[] {
-    return readdirSync(dir).flatMap((n) => (statSync(join(dir, n)).isDirectory() ? files(join(dir, n)) : n.endsWith('.ts') ? [join(dir, n)] : []));
+    return readdirSync(dir).flatMap((n) =>
+      statSync(join(dir, n)).isDirectory() ? files(join(dir, n)) : n.endsWith('.ts') ? [join(dir, n)] : [],
+    );
   }
   it('the catalogue holds every exported MethodInfo of shared-core', () => {
     const declared = files(join(ROOT, 'shared-core')).flatMap((f) =>
-      [...readFileSync(f, 'utf8').matchAll(/export const \w+\s*:\s*MethodInfo\s*=\s*\{\s*id:\s*'([^']+)'/g)].map((m) => m[1]));
+      [...readFileSync(f, 'utf8').matchAll(/export const \w+\s*:\s*MethodInfo\s*=\s*\{\s*id:\s*'([^']+)'/g)].map(
+        (m) => m[1],
+      ),
+    );
     const known = new Set(METHOD_CATALOGUE.map((m) => m.id));
     expect(declared.filter((id) => !known.has(id))).toEqual([]);
   });
@@ -150,6 +221,8 @@ describe('uncertainty bands in the report model', () => {
     expect(si.methods.some((m) => /JCGM 101:2008/.test(m.source))).toBe(true);
   });
   it('gives no band where the estimate states no uncertainty', () => {
-    expect(buildReportModel(quillmere, 'si').estimates.find((s) => s.id === 'strat-summer')!.uncertainty).toBeUndefined();
+    expect(
+      buildReportModel(quillmere, 'si').estimates.find((s) => s.id === 'strat-summer')!.uncertainty,
+    ).toBeUndefined();
   });
 });

@@ -10,7 +10,9 @@ describe('title block', () => {
     const doc = await PDFDocument.create();
     doc.registerFontkit(fontkit);
     const font = await doc.embedFont(fontBytes('DejaVuSans.ttf'), { subset: true });
-    const widest = [...'0123456789abcdef'].reduce((a, c) => (font.widthOfTextAtSize(c, 9) > font.widthOfTextAtSize(a, 9) ? c : a));
+    const widest = [...'0123456789abcdef'].reduce((a, c) =>
+      font.widthOfTextAtSize(c, 9) > font.widthOfTextAtSize(a, 9) ? c : a,
+    );
     for (const pageWidth of [595.28, 612]) {
       const content = pageWidth - 2 * 54;
       const cell = (i: number) => TITLE_COLUMNS[i].width * content - 6;

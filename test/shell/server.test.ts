@@ -11,19 +11,40 @@ import { RENDERER_CSP } from '../../src-main/services/static-files';
 
 const DEMO = readFileSync(join(import.meta.dirname, '../../examples/quillmere-reservoir.gpsite'), 'utf8');
 
-interface Answer { status: number; headers: Record<string, string | string[] | undefined>; body: string; json?: any }
+interface Answer {
+  status: number;
+  headers: Record<string, string | string[] | undefined>;
+  body: string;
+  json?: any;
+}
 
 /** A raw HTTP request, so that the Host header can be set freely (fetch would not allow it). */
-function http(port: number, method: string, path: string, headers: Record<string, string> = {}, body?: string): Promise<Answer> {
+function http(
+  port: number,
+  method: string,
+  path: string,
+  headers: Record<string, string> = {},
+  body?: string,
+): Promise<Answer> {
   return new Promise((done, fail) => {
-    const req = request({ host: '127.0.0.1', port, method, path, headers: { host: `127.0.0.1:${port}`, ...headers } }, (res) => {
-      let text = '';
-      res.setEncoding('utf8').on('data', (c) => (text += c)).on('end', () => {
-        let json: unknown;
-        try { json = JSON.parse(text); } catch { json = undefined; }
-        done({ status: res.statusCode ?? 0, headers: res.headers, body: text, json });
-      });
-    });
+    const req = request(
+      { host: '127.0.0.1', port, method, path, headers: { host: `127.0.0.1:${port}`, ...headers } },
+      (res) => {
+        let text = '';
+        res
+          .setEncoding('utf8')
+          .on('data', (c) => (text += c))
+          .on('end', () => {
+            let json: unknown;
+            try {
+              json = JSON.parse(text);
+            } catch {
+              json = undefined;
+            }
+            done({ status: res.statusCode ?? 0, headers: res.headers, body: text, json });
+          });
+      },
+    );
     req.on('error', fail);
     req.end(body);
   });
@@ -32,7 +53,13 @@ function http(port: number, method: string, path: string, headers: Record<string
 let shell: RunningShell;
 let workspace: string;
 const api = (channel: string, payload: unknown, token = shell.token, extra: Record<string, string> = {}) =>
-  http(shell.port, 'POST', `/api/${channel}`, { 'content-type': 'application/json', 'x-gprime-token': token, ...extra }, JSON.stringify(payload));
+  http(
+    shell.port,
+    'POST',
+    `/api/${channel}`,
+    { 'content-type': 'application/json', 'x-gprime-token': token, ...extra },
+    JSON.stringify(payload),
+  );
 
 beforeAll(async () => {
   const root = mkdtempSync(join(tmpdir(), 'gprime-shell-'));
@@ -50,7 +77,12 @@ describe('browser shell', () => {
   it('listens on 127.0.0.1 at a random port and prints a URL with the token', async () => {
     expect(shell.url).toBe(`http://127.0.0.1:${shell.port}/?token=${shell.token}`);
     expect(shell.token.length).toBeGreaterThanOrEqual(32);
-    const other = await startShell({ workspace, dataDir: join(workspace, '..', 'data2'), rendererDir: workspace, version: '0' });
+    const other = await startShell({
+      workspace,
+      dataDir: join(workspace, '..', 'data2'),
+      rendererDir: workspace,
+      version: '0',
+    });
     try {
       expect(other.port).not.toBe(shell.port);
       expect(other.port).toBeGreaterThan(0);
@@ -64,13 +96,22 @@ describe('browser shell', () => {
     const none = await http(shell.port, 'POST', '/api/app.info', { 'content-type': 'application/json' }, '{}');
     expect(none.status).toBe(401);
     expect(none.json).toMatchObject({ ok: false, error: { code: 'forbidden' } });
-    const wrong = await api('app.info', {}, shell.token.replace(/^./, (c) => (c === 'a' ? 'b' : 'a')));
+    const wrong = await api(
+      'app.info',
+      {},
+      shell.token.replace(/^./, (c) => (c === 'a' ? 'b' : 'a')),
+    );
     expect(wrong.status).toBe(403);
     expect((await api('app.info', {}, 'short')).status).toBe(403);
   });
 
   it('refuses a foreign Host header (even with the token) and a foreign Origin', async () => {
-    for (const host of ['evil.example', `evil.example:${shell.port}`, `127.0.0.1:${shell.port + 1}`, `127.0.0.1.evil.example:${shell.port}`]) {
+    for (const host of [
+      'evil.example',
+      `evil.example:${shell.port}`,
+      `127.0.0.1:${shell.port + 1}`,
+      `127.0.0.1.evil.example:${shell.port}`,
+    ]) {
       expect((await http(shell.port, 'GET', '/', { host })).status, host).toBe(403);
       expect((await api('app.info', {}, shell.token, { host })).status, host).toBe(403);
     }
@@ -126,11 +167,14 @@ describe('browser shell', () => {
       expect(r.error.code).toBe('forbidden');
     }
     expect((await api('site.save', { path: outside, text: DEMO })).json.error.code).toBe('forbidden');
-    expect((await api('report.export', { text: DEMO, formats: ['csv'], units: 'si', outDir: '/tmp' })).json.error.code).toBe('forbidden');
+    expect(
+      (await api('report.export', { text: DEMO, formats: ['csv'], units: 'si', outDir: '/tmp' })).json.error.code,
+    ).toBe('forbidden');
   });
 
   it('writes a report into the workspace when no folder is given', async () => {
-    const r = (await api('report.export', { text: DEMO, formats: ['csv'], units: 'si', outDir: null, path: null })).json;
+    const r = (await api('report.export', { text: DEMO, formats: ['csv'], units: 'si', outDir: null, path: null }))
+      .json;
     expect(r.ok, JSON.stringify(r.error)).toBe(true);
     expect(r.value.outDir.startsWith(join(workspace, 'reports'))).toBe(true);
     expect(r.value.files.length).toBeGreaterThan(0);
@@ -140,9 +184,21 @@ describe('browser shell', () => {
   it('answers bad requests with a Reply error', async () => {
     expect((await api('no.such', {})).json.error.code).toBe('invalid-request');
     expect((await api('site.save', { path: 3 })).json.error.code).toBe('invalid-request');
-    const notJson = await http(shell.port, 'POST', '/api/app.info', { 'content-type': 'application/json', 'x-gprime-token': shell.token }, '{');
+    const notJson = await http(
+      shell.port,
+      'POST',
+      '/api/app.info',
+      { 'content-type': 'application/json', 'x-gprime-token': shell.token },
+      '{',
+    );
     expect(notJson.status).toBe(400);
-    const form = await http(shell.port, 'POST', '/api/app.info', { 'content-type': 'text/plain', 'x-gprime-token': shell.token }, '{}');
+    const form = await http(
+      shell.port,
+      'POST',
+      '/api/app.info',
+      { 'content-type': 'text/plain', 'x-gprime-token': shell.token },
+      '{}',
+    );
     expect(form.status).toBe(415);
   });
 

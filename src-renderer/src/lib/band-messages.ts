@@ -8,4 +8,5 @@ export interface BandRequest {
 }
 
 /** Band worker → main thread: the band, or the reason it cannot be computed (an InputError names the field). */
-export type BandReply = { seq: number; ok: true; uncertainty: UncertaintyResult } | { seq: number; ok: false; error: string };
+export type BandReply =
+  { seq: number; ok: true; uncertainty: UncertaintyResult } | { seq: number; ok: false; error: string };

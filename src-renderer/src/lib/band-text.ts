@@ -11,7 +11,10 @@ export function showSpread(u: number, siUnit: string, system: UnitSystem): { tex
 export const coverageText = (r: UncertaintyResult): string => `${formatNumber(Math.round(r.coverage * 1000) / 10)} %`;
 
 /** low, median and high of a band in display units, with the unit. */
-export function bandValues(b: ResultBand, system: UnitSystem): { low: string; median: string; high: string; unit: string } {
+export function bandValues(
+  b: ResultBand,
+  system: UnitSystem,
+): { low: string; median: string; high: string; unit: string } {
   const [low, median, high] = [b.low, b.median, b.high].map((v) => showQuantity(v, b.unit, system));
   return { low: low.text, median: median.text, high: high.text, unit: low.unit };
 }
@@ -25,9 +28,20 @@ export function bandLine(r: UncertaintyResult, b: ResultBand, system: UnitSystem
 /** Tab-separated rows of a band for the "Copy table" text. */
 export function bandTableRows(r: UncertaintyResult, system: UnitSystem, inputUnit: (name: string) => string): string[] {
   const head = [`${coverageText(r)} band`, 'low', 'median', 'high', 'unit'].join('\t');
-  const rows = r.bands.map((b) => { const v = bandValues(b, system); return [words(b.name), v.low, v.median, v.high, v.unit].join('\t'); });
-  const inputs = r.inputs.map((i) => { const s = showSpread(i.standardUncertainty, inputUnit(i.name), system); return [`± ${words(i.name)} (one standard deviation)`, s.text, s.unit].join('\t'); });
-  return [head, ...rows, ...inputs, ...r.warnings.map((w) => ['band warning', w.replace(/[\t\r\n]+/g, ' ')].join('\t'))];
+  const rows = r.bands.map((b) => {
+    const v = bandValues(b, system);
+    return [words(b.name), v.low, v.median, v.high, v.unit].join('\t');
+  });
+  const inputs = r.inputs.map((i) => {
+    const s = showSpread(i.standardUncertainty, inputUnit(i.name), system);
+    return [`± ${words(i.name)} (one standard deviation)`, s.text, s.unit].join('\t');
+  });
+  return [
+    head,
+    ...rows,
+    ...inputs,
+    ...r.warnings.map((w) => ['band warning', w.replace(/[\t\r\n]+/g, ' ')].join('\t')),
+  ];
 }
 
 export const BAND_NOTE = 'The band covers the stated input uncertainties only, not the error of the method itself.';

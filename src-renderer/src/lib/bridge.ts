@@ -1,4 +1,11 @@
-import { CHANNEL_NAMES, type Channel, type GprimeApi, type Reply, type RequestOf, type ResponseOf } from '../../../shared-core/ipc/contract';
+import {
+  CHANNEL_NAMES,
+  type Channel,
+  type GprimeApi,
+  type Reply,
+  type RequestOf,
+  type ResponseOf,
+} from '../../../shared-core/ipc/contract';
 
 /**
  * The renderer's way to the Node side. Under Electron the preload exposes `window.gprime` (one function

@@ -1,4 +1,14 @@
-import { Chart, LineController, LineElement, PointElement, LinearScale, LogarithmicScale, Legend, Tooltip, Title } from 'chart.js';
+import {
+  Chart,
+  LineController,
+  LineElement,
+  PointElement,
+  LinearScale,
+  LogarithmicScale,
+  Legend,
+  Tooltip,
+  Title,
+} from 'chart.js';
 
 // only what the workspace draws: line charts on linear or log axes with a legend and tooltips
 Chart.register(LineController, LineElement, PointElement, LinearScale, LogarithmicScale, Legend, Tooltip, Title);

@@ -18,7 +18,8 @@ function clipboardOrThrow(): Clipboard {
 export function copyFailure(e: unknown): string {
   const name = e instanceof DOMException ? e.name : '';
   if (name === 'NotAllowedError') return 'The clipboard refused the copy. Click in the window and try again.';
-  if (name === 'NotSupportedError' || name === 'DataError') return 'The clipboard does not take this kind of content here.';
+  if (name === 'NotSupportedError' || name === 'DataError')
+    return 'The clipboard does not take this kind of content here.';
   return e instanceof Error ? e.message : String(e);
 }
 
@@ -38,7 +39,10 @@ export async function copyPng(png: Promise<Blob>): Promise<void> {
  * would paste as dark-on-dark in some programs). The chart is drawn at the high ratio, copied and put
  * back in the same task, so the screen never shows the change.
  */
-export function chartPng(chart: Chart, ratio = Math.max(COPY_PIXEL_RATIO, window.devicePixelRatio || 1)): Promise<Blob> {
+export function chartPng(
+  chart: Chart,
+  ratio = Math.max(COPY_PIXEL_RATIO, window.devicePixelRatio || 1),
+): Promise<Blob> {
   const shown = chart.options.devicePixelRatio;
   const copy = document.createElement('canvas');
   try {
@@ -55,5 +59,7 @@ export function chartPng(chart: Chart, ratio = Math.max(COPY_PIXEL_RATIO, window
     chart.options.devicePixelRatio = shown;
     chart.resize();
   }
-  return new Promise((done, fail) => copy.toBlob((b) => (b ? done(b) : fail(new Error('The chart could not be turned into an image.'))), 'image/png'));
+  return new Promise((done, fail) =>
+    copy.toBlob((b) => (b ? done(b) : fail(new Error('The chart could not be turned into an image.'))), 'image/png'),
+  );
 }

@@ -10,7 +10,15 @@ import { readQuantity } from './quantity';
  */
 export type SectionMark =
   | { kind: 'band'; featureId: string; port: number; top: number; bottom: number; label: string }
-  | { kind: 'path'; featureId: string; x: number[]; depth: number[]; radius: number[]; label: string; end?: { x: number; depth: number; label: string } }
+  | {
+      kind: 'path';
+      featureId: string;
+      x: number[];
+      depth: number[];
+      radius: number[];
+      label: string;
+      end?: { x: number; depth: number; label: string };
+    }
   | { kind: 'level'; depth: number; label: string }
   | { kind: 'point'; featureId: string; depth: number; label: string };
 
@@ -39,17 +47,42 @@ function plume(site: Site, o: EstimateOutcome): Partial<EstimateDrawing> {
   const profile = profileOf(site, o);
   const rhoA = num(o, 'ambient_density', 'inputs');
   const get = (n: string) => num(o, n, 'inputs');
-  const [diameter, velocity, angle, portDepth, effluentDensity] = ['diameter', 'velocity', 'angle', 'port_depth', 'effluent_density'].map(get);
-  if ([diameter, velocity, angle, portDepth, effluentDensity].some((v) => v === undefined) || (!profile && rhoA === undefined)) return {};
+  const [diameter, velocity, angle, portDepth, effluentDensity] = [
+    'diameter',
+    'velocity',
+    'angle',
+    'port_depth',
+    'effluent_density',
+  ].map(get);
+  if (
+    [diameter, velocity, angle, portDepth, effluentDensity].some((v) => v === undefined) ||
+    (!profile && rhoA === undefined)
+  )
+    return {};
   const t = buoyantJetTrajectory({
-    diameter: diameter!, velocity: velocity!, angle: angle!, portDepth: portDepth!, effluentDensity: effluentDensity!,
-    ambient: profile && o.inputs.file ? { kind: 'profile', profile } : { kind: 'uniform', density: rhoA! }, current: get('current') ?? 0,
+    diameter: diameter!,
+    velocity: velocity!,
+    angle: angle!,
+    portDepth: portDepth!,
+    effluentDensity: effluentDensity!,
+    ambient: profile && o.inputs.file ? { kind: 'profile', profile } : { kind: 'uniform', density: rhoA! },
+    current: get('current') ?? 0,
   });
   const p = t.path;
   const last = p.depth.length - 1;
   const featureId = o.feature?.id ?? '';
   return {
-    marks: [{ kind: 'path', featureId, x: p.horizontalDistance, depth: p.depth, radius: p.radius, label: o.title, end: { x: p.horizontalDistance[last], depth: p.depth[last], label: t.outcome } }],
+    marks: [
+      {
+        kind: 'path',
+        featureId,
+        x: p.horizontalDistance,
+        depth: p.depth,
+        radius: p.radius,
+        label: o.title,
+        end: { x: p.horizontalDistance[last], depth: p.depth[last], label: t.outcome },
+      },
+    ],
   };
 }
 
@@ -60,12 +93,14 @@ function plume(site: Site, o: EstimateOutcome): Partial<EstimateDrawing> {
 function withdrawalBands(_site: Site, o: EstimateOutcome): Partial<EstimateDrawing> {
   const featureId = o.feature?.id ?? '';
   const marks: SectionMark[] = [];
-  o.series.filter((c) => c.y[0]?.label === 'Outflow per metre of depth').forEach((c, port) => {
-    const drawn = c.x.values.filter((_d, i) => c.y[0].values[i] > 0);
-    if (drawn.length === 0) return;
-    const label = c.title.replace(/^Withdrawal at the /, '').replace(/^Combined withdrawal of the /, 'combined: ');
-    marks.push({ kind: 'band', featureId, port, top: Math.min(...drawn), bottom: Math.max(...drawn), label });
-  });
+  o.series
+    .filter((c) => c.y[0]?.label === 'Outflow per metre of depth')
+    .forEach((c, port) => {
+      const drawn = c.x.values.filter((_d, i) => c.y[0].values[i] > 0);
+      if (drawn.length === 0) return;
+      const label = c.title.replace(/^Withdrawal at the /, '').replace(/^Combined withdrawal of the /, 'combined: ');
+      marks.push({ kind: 'band', featureId, port, top: Math.min(...drawn), bottom: Math.max(...drawn), label });
+    });
   return { marks };
 }
 
@@ -75,7 +110,18 @@ function layerBand(site: Site, o: EstimateOutcome): Partial<EstimateDrawing> {
   if (!f || f.kind !== 'intake' || thickness === undefined) return {};
   const depth = readQuantity(f.ports[0].depth, 'm', 'depth').si;
   if (depth === undefined) return {};
-  return { marks: [{ kind: 'band', featureId: f.id, port: 0, top: depth - thickness / 2, bottom: depth + thickness / 2, label: 'withdrawal layer' }] };
+  return {
+    marks: [
+      {
+        kind: 'band',
+        featureId: f.id,
+        port: 0,
+        top: depth - thickness / 2,
+        bottom: depth + thickness / 2,
+        label: 'withdrawal layer',
+      },
+    ],
+  };
 }
 
 /** A diffuser's governing centreline from its own 'Plume centreline' curve (width not drawn: it is a row of plumes). */
@@ -83,7 +129,18 @@ function diffuserPath(_site: Site, o: EstimateOutcome): Partial<EstimateDrawing>
   const c = o.series.find((x) => x.title === 'Plume centreline');
   if (!c || c.x.values.length < 2) return {};
   // no end label: the single-port path of the same outfall usually ends close by and carries one
-  return { marks: [{ kind: 'path', featureId: o.feature?.id ?? '', x: c.x.values, depth: c.y[0].values, radius: c.x.values.map(() => 0), label: o.title }] };
+  return {
+    marks: [
+      {
+        kind: 'path',
+        featureId: o.feature?.id ?? '',
+        x: c.x.values,
+        depth: c.y[0].values,
+        radius: c.x.values.map(() => 0),
+        label: o.title,
+      },
+    ],
+  };
 }
 
 const BUILDERS: Record<string, (site: Site, o: EstimateOutcome) => Partial<EstimateDrawing>> = {
@@ -93,11 +150,18 @@ const BUILDERS: Record<string, (site: Site, o: EstimateOutcome) => Partial<Estim
   'withdrawal-layer': layerBand,
   'profile-summary': (_s, o) => ({
     marks: [
-      ...(num(o, 'mixed_layer_depth') !== undefined ? [{ kind: 'level' as const, depth: num(o, 'mixed_layer_depth')!, label: 'mixed layer' }] : []),
-      ...(num(o, 'thermocline_depth') !== undefined ? [{ kind: 'level' as const, depth: num(o, 'thermocline_depth')!, label: 'thermocline' }] : []),
+      ...(num(o, 'mixed_layer_depth') !== undefined
+        ? [{ kind: 'level' as const, depth: num(o, 'mixed_layer_depth')!, label: 'mixed layer' }]
+        : []),
+      ...(num(o, 'thermocline_depth') !== undefined
+        ? [{ kind: 'level' as const, depth: num(o, 'thermocline_depth')!, label: 'thermocline' }]
+        : []),
     ],
   }),
-  'plunge-depth': (_s, o) => (num(o, 'plunge_depth') !== undefined && o.feature ? { marks: [{ kind: 'point', featureId: o.feature.id, depth: num(o, 'plunge_depth')!, label: 'plunge point' }] } : {}),
+  'plunge-depth': (_s, o) =>
+    num(o, 'plunge_depth') !== undefined && o.feature
+      ? { marks: [{ kind: 'point', featureId: o.feature.id, depth: num(o, 'plunge_depth')!, label: 'plunge point' }] }
+      : {},
 };
 
 const OUTSIDE = /outside the range|extrapolat|not valid|beyond/i;

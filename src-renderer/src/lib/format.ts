@@ -2,8 +2,22 @@ import { displayUnit, toDisplay, type UnitSystem } from '../../../shared-core/un
 
 /** Unit names as people read them (m3/s → m³/s, degC → °C). Display only. */
 const PRETTY: Record<string, string> = {
-  degC: '°C', degF: '°F', 'm3/s': 'm³/s', 'kg/m3': 'kg/m³', 'm/s2': 'm/s²', 'm2/s': 'm²/s', m2: 'm²', m3: 'm³', '1/s2': '1/s²',
-  'lb/ft3': 'lb/ft³', 'ft/s2': 'ft/s²', 'ft2/s': 'ft²/s', ft2: 'ft²', ft3: 'ft³', deg: '°', '1': '',
+  degC: '°C',
+  degF: '°F',
+  'm3/s': 'm³/s',
+  'kg/m3': 'kg/m³',
+  'm/s2': 'm/s²',
+  'm2/s': 'm²/s',
+  m2: 'm²',
+  m3: 'm³',
+  '1/s2': '1/s²',
+  'lb/ft3': 'lb/ft³',
+  'ft/s2': 'ft/s²',
+  'ft2/s': 'ft²/s',
+  ft2: 'ft²',
+  ft3: 'ft³',
+  deg: '°',
+  '1': '',
 };
 
 export function prettyUnit(unit: string): string {

@@ -7,5 +7,9 @@ export const SERIES_DASHES: number[][] = [[], [6, 3], [2, 2], [8, 3, 2, 3], [4, 
 export const SERIES_POINTS = ['circle', 'rect', 'triangle', 'rectRot', 'crossRot', 'star', 'line'] as const;
 
 export function seriesStyle(i: number) {
-  return { colour: SERIES_COLOURS[i % SERIES_COLOURS.length], dash: SERIES_DASHES[i % SERIES_DASHES.length], point: SERIES_POINTS[i % SERIES_POINTS.length] };
+  return {
+    colour: SERIES_COLOURS[i % SERIES_COLOURS.length],
+    dash: SERIES_DASHES[i % SERIES_DASHES.length],
+    point: SERIES_POINTS[i % SERIES_POINTS.length],
+  };
 }

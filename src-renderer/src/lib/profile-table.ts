@@ -67,7 +67,10 @@ const isNumeric = (s: string) => typeof cellValue(s) === 'number';
  * adding rows (and columns) as needed.
  */
 export function pasteBlock(table: ProfileTable, text: string, row: number, col: number): ProfileTable {
-  const lines = text.replace(/\r/g, '').split('\n').filter((l) => l.trim() !== '');
+  const lines = text
+    .replace(/\r/g, '')
+    .split('\n')
+    .filter((l) => l.trim() !== '');
   const grid = lines.map((l) => l.split('\t'));
   if (grid.length === 0) return table;
   if (grid[0].every((c) => !isNumeric(c)) && grid.length > 1) {
@@ -80,7 +83,9 @@ export function pasteBlock(table: ProfileTable, text: string, row: number, col: 
   const rows = table.rows.map((r) => [...r, ...new Array<Cell>(width - r.length).fill(null)]);
   grid.forEach((cells, i) => {
     while (rows.length <= row + i) rows.push(new Array<Cell>(width).fill(null));
-    cells.forEach((c, j) => { rows[row + i][col + j] = cellValue(c); });
+    cells.forEach((c, j) => {
+      rows[row + i][col + j] = cellValue(c);
+    });
   });
   return { columns, rows };
 }

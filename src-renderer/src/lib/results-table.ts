@@ -23,12 +23,26 @@ function rows(values: Record<string, ResultValue>, system: UnitSystem): string[]
  * warnings, method, sources and the screening caution, so a pasted table never loses them. A computed
  * uncertainty band adds its low / median / high rows, the input uncertainties and its warnings.
  */
-export function resultsTableText(o: EstimateOutcome, system: UnitSystem, methodTitle = '', band?: UncertaintyResult): string {
+export function resultsTableText(
+  o: EstimateOutcome,
+  system: UnitSystem,
+  methodTitle = '',
+  band?: UncertaintyResult,
+): string {
   const where = [o.feature?.name, o.condition?.name].filter(Boolean).join(' · ');
-  const lines = [[cell(o.title), cell(where)].join('\t'), ['result', 'value', 'unit'].join('\t'), ...rows(o.results, system)];
+  const lines = [
+    [cell(o.title), cell(where)].join('\t'),
+    ['result', 'value', 'unit'].join('\t'),
+    ...rows(o.results, system),
+  ];
   if (o.status === 'error') lines.push(['cannot compute', cell(o.error ?? '')].join('\t'));
   lines.push('', ['input', 'value', 'unit'].join('\t'), ...rows(o.inputs, system), '');
-  if (band) lines.push(...bandTableRows(band, system, (name) => o.inputs[name]?.unit ?? '1'), ['band note', BAND_NOTE].join('\t'), '');
+  if (band)
+    lines.push(
+      ...bandTableRows(band, system, (name) => o.inputs[name]?.unit ?? '1'),
+      ['band note', BAND_NOTE].join('\t'),
+      '',
+    );
   lines.push(...o.warnings.map((w) => ['warning', cell(w)].join('\t')));
   lines.push(['method', cell(methodTitle ? `${o.method}: ${methodTitle}` : o.method)].join('\t'));
   lines.push(...o.sources.map((s) => ['source', cell(s)].join('\t')));

@@ -33,15 +33,25 @@ export function points(xs: number[], ys: number[]): string {
  * Outline of a plume of radius r around a centreline, in screen coordinates. Offsets are perpendicular to
  * the path in metres before scaling, so the width reads right whatever the two scales.
  */
-export function envelope(x: number[], depth: number[], radius: number[], sx: (m: number) => number, sy: (m: number) => number): string {
+export function envelope(
+  x: number[],
+  depth: number[],
+  radius: number[],
+  sx: (m: number) => number,
+  sy: (m: number) => number,
+): string {
   const n = x.length;
   if (n < 2) return '';
-  const left: string[] = [], right: string[] = [];
+  const left: string[] = [],
+    right: string[] = [];
   for (let i = 0; i < n; i++) {
-    const a = Math.max(0, i - 1), b = Math.min(n - 1, i + 1);
-    const tx = x[b] - x[a], tz = -(depth[b] - depth[a]);
+    const a = Math.max(0, i - 1),
+      b = Math.min(n - 1, i + 1);
+    const tx = x[b] - x[a],
+      tz = -(depth[b] - depth[a]);
     const len = Math.hypot(tx, tz) || 1;
-    const nx = -tz / len, nz = tx / len;
+    const nx = -tz / len,
+      nz = tx / len;
     left.push(`${sx(x[i] + nx * radius[i]).toFixed(1)},${sy(depth[i] - nz * radius[i]).toFixed(1)}`);
     right.push(`${sx(x[i] - nx * radius[i]).toFixed(1)},${sy(depth[i] + nz * radius[i]).toFixed(1)}`);
   }
@@ -75,9 +85,21 @@ export interface BasinWidth {
  * fewer than two rows, the first not at the surface, depths not increasing, an area negative or not finite,
  * or no area at the surface.
  */
-export function basinWidths(table: readonly { depth: number; area: number }[], bedDepth: number): BasinWidth[] | undefined {
+export function basinWidths(
+  table: readonly { depth: number; area: number }[],
+  bedDepth: number,
+): BasinWidth[] | undefined {
   if (table.length < 2 || !(bedDepth > 0) || table[0].depth !== 0 || !(table[0].area > 0)) return undefined;
-  if (table.some((r, i) => !Number.isFinite(r.area) || r.area < 0 || !Number.isFinite(r.depth) || (i > 0 && !(r.depth > table[i - 1].depth)))) return undefined;
+  if (
+    table.some(
+      (r, i) =>
+        !Number.isFinite(r.area) ||
+        r.area < 0 ||
+        !Number.isFinite(r.depth) ||
+        (i > 0 && !(r.depth > table[i - 1].depth)),
+    )
+  )
+    return undefined;
   const rows = table.map((r) => ({ depth: r.depth, fraction: Math.sqrt(r.area / table[0].area) }));
   const above = rows.filter((r) => r.depth < bedDepth);
   const next = rows[above.length];
@@ -88,7 +110,12 @@ export function basinWidths(table: readonly { depth: number; area: number }[], b
 }
 
 /** Polygon "x,y …" of the water in a basin outline, centred on `cx`, `halfWidth` px at the surface. */
-export function basinPolygon(widths: readonly BasinWidth[], cx: number, halfWidth: number, sy: (d: number) => number): string {
+export function basinPolygon(
+  widths: readonly BasinWidth[],
+  cx: number,
+  halfWidth: number,
+  sy: (d: number) => number,
+): string {
   const left = widths.map((w) => `${(cx - w.fraction * halfWidth).toFixed(1)},${sy(w.depth).toFixed(1)}`);
   const right = widths.map((w) => `${(cx + w.fraction * halfWidth).toFixed(1)},${sy(w.depth).toFixed(1)}`).reverse();
   return [...left, ...right].join(' ');

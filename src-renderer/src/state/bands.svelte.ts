@@ -4,9 +4,7 @@ import type { UncertaintyResult } from '../../../shared-core/uncertainty';
 import type { BandReply, BandRequest } from '../lib/band-messages';
 
 export type BandState =
-  | { status: 'computing' }
-  | { status: 'done'; result: UncertaintyResult }
-  | { status: 'error'; message: string };
+  { status: 'computing' } | { status: 'done'; result: UncertaintyResult } | { status: 'error'; message: string };
 
 /** Wait after the last edit before a band is recomputed (typing a value is one request). */
 const DEBOUNCE_MS = 400;
@@ -46,7 +44,9 @@ export class BandStore {
   private update(site: Site): void {
     this.site = site;
     const next = new Map<string, string>();
-    site.estimates.forEach((e, i) => { if (hasUncertainty(e)) next.set(e.id, fingerprint(site, i)); });
+    site.estimates.forEach((e, i) => {
+      if (hasUncertainty(e)) next.set(e.id, fingerprint(site, i));
+    });
     const states: Record<string, BandState> = {};
     for (const [id, print] of next) {
       const old = this.states[id];
@@ -57,7 +57,8 @@ export class BandStore {
     this.wanted = next;
     this.states = states;
     // a newer request never waits behind a running band: the running one, if still wanted, is queued again
-    if (this.running && (changed.length > 0 || this.wanted.get(this.running.id) !== this.running.print)) this.stopWorker();
+    if (this.running && (changed.length > 0 || this.wanted.get(this.running.id) !== this.running.print))
+      this.stopWorker();
     this.recent = [...changed, ...this.recent.filter((id) => !changed.includes(id))];
     clearTimeout(this.timer);
     this.timer = setTimeout(() => this.schedule(), DEBOUNCE_MS);
@@ -74,7 +75,10 @@ export class BandStore {
 
   private schedule(): void {
     const stale = [...this.wanted].filter(([id, print]) => this.done.get(id) !== print).map(([id]) => id);
-    this.queue = [...this.recent.filter((id) => stale.includes(id)), ...stale.filter((id) => !this.recent.includes(id))];
+    this.queue = [
+      ...this.recent.filter((id) => stale.includes(id)),
+      ...stale.filter((id) => !this.recent.includes(id)),
+    ];
     this.recent = [];
     this.next();
   }
@@ -99,7 +103,12 @@ export class BandStore {
     w.onmessage = (event: MessageEvent<BandReply>) => this.receive(event.data);
     w.onerror = (event) => {
       event.preventDefault();
-      if (this.running) this.receive({ seq: this.running.seq, ok: false, error: `the band worker failed (${event.message || 'no message'})` });
+      if (this.running)
+        this.receive({
+          seq: this.running.seq,
+          ok: false,
+          error: `the band worker failed (${event.message || 'no message'})`,
+        });
     };
     this.worker = w;
     return w;
@@ -111,7 +120,9 @@ export class BandStore {
     this.running = null;
     if (this.wanted.get(job.id) === job.print) {
       this.done.set(job.id, job.print);
-      const state: BandState = reply.ok ? { status: 'done', result: reply.uncertainty } : { status: 'error', message: reply.error };
+      const state: BandState = reply.ok
+        ? { status: 'done', result: reply.uncertainty }
+        : { status: 'error', message: reply.error };
       this.states = { ...this.states, [job.id]: state };
     }
     this.next();

@@ -124,7 +124,8 @@ export class FileActions {
     const offer = this.recovery;
     if (!offer) return;
     this.recovery = null;
-    if (this.ws.openText(offer.text, offer.path, false)) this.ws.say(`Recovered the work autosaved at ${offer.savedAt}. Save it to keep it.`);
+    if (this.ws.openText(offer.text, offer.path, false))
+      this.ws.say(`Recovered the work autosaved at ${offer.savedAt}. Save it to keep it.`);
   }
 
   async discardRecovery(): Promise<void> {

@@ -1,9 +1,17 @@
 import type { Workspace } from './workspace.svelte';
-import { blankCondition, blankFeature, suggestedEstimates, uniqueId, type FeatureKind, KIND_WORDS } from '../lib/templates';
+import {
+  blankCondition,
+  blankFeature,
+  suggestedEstimates,
+  uniqueId,
+  type FeatureKind,
+  KIND_WORDS,
+} from '../lib/templates';
 import { readQuantity } from '../lib/quantity';
 
 /** Adding and removing the items of the outline; each is one undo step. */
-const ids = (ws: Workspace) => new Set([...ws.doc.site.conditions, ...ws.doc.site.features, ...ws.doc.site.estimates].map((x) => x.id));
+const ids = (ws: Workspace) =>
+  new Set([...ws.doc.site.conditions, ...ws.doc.site.features, ...ws.doc.site.estimates].map((x) => x.id));
 
 export function addFeature(ws: Workspace, kind: FeatureKind): void {
   const taken = ids(ws);
@@ -53,11 +61,15 @@ export function removeCondition(ws: Workspace, id: string): void {
 export function addEstimate(ws: Workspace): void {
   const id = uniqueId('estimate', ids(ws));
   const conditionId = ws.conditionId;
-  ws.doc.change((d) => { d.estimates.push({ id, method: 'profile-summary', condition: conditionId, params: {} }); });
+  ws.doc.change((d) => {
+    d.estimates.push({ id, method: 'profile-summary', condition: conditionId, params: {} });
+  });
   ws.selection = { kind: 'estimate', id };
 }
 
 export function removeEstimate(ws: Workspace, id: string): void {
-  ws.doc.change((d) => { d.estimates = d.estimates.filter((e) => e.id !== id); });
+  ws.doc.change((d) => {
+    d.estimates = d.estimates.filter((e) => e.id !== id);
+  });
   ws.selection = { kind: 'waterBody' };
 }

@@ -1,4 +1,12 @@
-import { assessSite, runEstimate, loadSite, SiteFileError, type Assessment, type EstimateOutcome, type Site } from '../../../shared-core/site';
+import {
+  assessSite,
+  runEstimate,
+  loadSite,
+  SiteFileError,
+  type Assessment,
+  type EstimateOutcome,
+  type Site,
+} from '../../../shared-core/site';
 import { SCREENING_CAUTION } from '../../../shared-core/core/caution';
 import type { UnitSystem } from '../../../shared-core/units/units';
 import { drawEstimate, type EstimateDrawing } from '../lib/estimate-curves';
@@ -26,10 +34,31 @@ function assess(site: Site): Assessment {
       try {
         return runEstimate(site, e, i, { bands: false });
       } catch (err) {
-        return { id: e.id, method: e.method, title: e.title ?? e.method, status: 'error', inputs: {}, results: {}, warnings: [], sources: [], series: [], error: `could not be computed (${String(err)})` };
+        return {
+          id: e.id,
+          method: e.method,
+          title: e.title ?? e.method,
+          status: 'error',
+          inputs: {},
+          results: {},
+          warnings: [],
+          sources: [],
+          series: [],
+          error: `could not be computed (${String(err)})`,
+        };
       }
     });
-    return { format: 'gprime-assessment', project: site.project, waterBody: site.waterBody.name, gprimeVersion: 'workspace', siteHash: '', units: site.units, caution: SCREENING_CAUTION, estimates, compliance: [] };
+    return {
+      format: 'gprime-assessment',
+      project: site.project,
+      waterBody: site.waterBody.name,
+      gprimeVersion: 'workspace',
+      siteHash: '',
+      units: site.units,
+      caution: SCREENING_CAUTION,
+      estimates,
+      compliance: [],
+    };
   }
 }
 
@@ -52,7 +81,9 @@ export class Workspace {
   });
   condition = $derived(this.doc.site.conditions.find((c) => c.id === this.conditionId));
   assessment = $derived(assess(this.doc.site));
-  drawings = $derived(new Map<string, EstimateDrawing>(this.assessment.estimates.map((o) => [o.id, drawEstimate(this.doc.site, o)])));
+  drawings = $derived(
+    new Map<string, EstimateDrawing>(this.assessment.estimates.map((o) => [o.id, drawEstimate(this.doc.site, o)])),
+  );
   /** estimates shown for the current condition (those without a condition show under every condition) */
   visible = $derived(this.assessment.estimates.filter((o) => !o.condition || o.condition.id === this.conditionId));
 
@@ -61,7 +92,10 @@ export class Workspace {
   }
 
   setUnits(system: UnitSystem): void {
-    if (system !== this.units) this.doc.change((d) => { d.units = system; });
+    if (system !== this.units)
+      this.doc.change((d) => {
+        d.units = system;
+      });
   }
 
   /** Opens a site from its text; a malformed or newer file is refused with the place named. */

@@ -8,7 +8,8 @@ self.onmessage = (event: MessageEvent<BandRequest>) => {
   try {
     const s = site as Site;
     const outcome = runEstimate(s, s.estimates[index], index);
-    if (outcome.status === 'error') reply = { seq, ok: false, error: outcome.error ?? 'the estimate cannot be computed' };
+    if (outcome.status === 'error')
+      reply = { seq, ok: false, error: outcome.error ?? 'the estimate cannot be computed' };
     else if (!outcome.uncertainty) reply = { seq, ok: false, error: 'no input uncertainty is stated' };
     else reply = { seq, ok: true, uncertainty: outcome.uncertainty };
   } catch (err) {

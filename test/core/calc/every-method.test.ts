@@ -15,17 +15,41 @@ import { ProfileError } from '../../../shared-core/profile/profile';
  * A second pass draws from the ranges met in practice and requires most draws to compute, so the first
  * pass is not passing on refusals alone.
  */
-const PROFILE = parseProfileCsv(readFileSync(join(resolve(import.meta.dirname, '..', '..', '..'), 'examples', 'demo-profile.csv'), 'utf8'));
+const PROFILE = parseProfileCsv(
+  readFileSync(join(resolve(import.meta.dirname, '..', '..', '..'), 'examples', 'demo-profile.csv'), 'utf8'),
+);
 const RUNS = 40;
 
 /** Everyday ranges by parameter name (the demo profile is 38 m deep). Common practice, no source. */
 const PRACTICAL: Record<string, [number, number]> = {
-  port_depth: [2, 35], depth: [1, 50], total_depth: [1, 50], upper_thickness: [0.5, 20], lower_thickness: [0.5, 20],
-  interface_distance: [0.5, 20], opening: [0.5, 20], obstacle_height: [0.5, 20], current_depth: [0.2, 5], lock_depth: [0.2, 5],
-  rho_upper: [995, 1010], rho_lower: [1010, 1030], effluent_density: [990, 1060], ambient_density: [995, 1030],
-  g_prime: [1e-3, 0.3], velocity: [0.05, 5], diameter: [0.05, 1.5], buoyancy_frequency: [1e-3, 0.05],
-  basin_length: [200, 2e4], wind_speed: [1, 20], discharge: [0.1, 500], width: [2, 500], flux: [1e-3, 1],
-  net_discharge: [-300, 300], end_width: [500, 5000], ports: [2, 20], spacing: [0.5, 10], diffuser_length: [5, 200],
+  port_depth: [2, 35],
+  depth: [1, 50],
+  total_depth: [1, 50],
+  upper_thickness: [0.5, 20],
+  lower_thickness: [0.5, 20],
+  interface_distance: [0.5, 20],
+  opening: [0.5, 20],
+  obstacle_height: [0.5, 20],
+  current_depth: [0.2, 5],
+  lock_depth: [0.2, 5],
+  rho_upper: [995, 1010],
+  rho_lower: [1010, 1030],
+  effluent_density: [990, 1060],
+  ambient_density: [995, 1030],
+  g_prime: [1e-3, 0.3],
+  velocity: [0.05, 5],
+  diameter: [0.05, 1.5],
+  buoyancy_frequency: [1e-3, 0.05],
+  basin_length: [200, 2e4],
+  wind_speed: [1, 20],
+  discharge: [0.1, 500],
+  width: [2, 500],
+  flux: [1e-3, 1],
+  net_discharge: [-300, 300],
+  end_width: [500, 5000],
+  ports: [2, 20],
+  spacing: [0.5, 10],
+  diffuser_length: [5, 200],
 };
 const WHOLE = new Set(['ports', 'modes']);
 /** Inputs given one way or another, never both (the methods refuse both and neither with a named error). */
@@ -38,8 +62,12 @@ const ONE_OF: Record<string, string[][]> = {
 const nextUp = (x: number) => (x === 0 ? 1e-9 : x + Math.abs(x) * 1e-12);
 
 function spanArb(lo: number, hi: number): fc.Arbitrary<number> {
-  if (lo > 0 && hi / lo > 100) return fc.double({ min: Math.log(lo), max: Math.log(hi), noNaN: true }).map((x) => Math.min(hi, Math.max(lo, Math.exp(x))));
-  if (lo >= 0 && hi > 1e3) return fc.double({ min: -6, max: Math.log10(hi), noNaN: true }).map((e) => Math.min(hi, Math.max(lo, 10 ** e)));
+  if (lo > 0 && hi / lo > 100)
+    return fc
+      .double({ min: Math.log(lo), max: Math.log(hi), noNaN: true })
+      .map((x) => Math.min(hi, Math.max(lo, Math.exp(x))));
+  if (lo >= 0 && hi > 1e3)
+    return fc.double({ min: -6, max: Math.log10(hi), noNaN: true }).map((e) => Math.min(hi, Math.max(lo, 10 ** e)));
   return fc.double({ min: lo, max: hi, noNaN: true });
 }
 
@@ -55,21 +83,38 @@ function numberArb(spec: Extract<ParamSpec, { kind: 'number' }>, practical: bool
 function argsArb(method: CalcMethod, practical: boolean): fc.Arbitrary<Record<string, RawArg | undefined>> {
   const alternatives = practical ? ONE_OF[method.id] : undefined;
   if (!alternatives) return paramsArb(method, practical, new Set(), new Set());
-  return fc.integer({ min: 0, max: alternatives.length - 1 }).chain((k) =>
-    paramsArb(method, practical, new Set(alternatives[k]), new Set(alternatives.flatMap((a, i) => (i === k ? [] : a)))));
+  return fc
+    .integer({ min: 0, max: alternatives.length - 1 })
+    .chain((k) =>
+      paramsArb(
+        method,
+        practical,
+        new Set(alternatives[k]),
+        new Set(alternatives.flatMap((a, i) => (i === k ? [] : a))),
+      ),
+    );
 }
 
 /** Arguments with `given` always present and `absent` left out; the rest optional as the method allows. */
-function paramsArb(method: CalcMethod, practical: boolean, given: Set<string>, absent: Set<string>): fc.Arbitrary<Record<string, RawArg | undefined>> {
+function paramsArb(
+  method: CalcMethod,
+  practical: boolean,
+  given: Set<string>,
+  absent: Set<string>,
+): fc.Arbitrary<Record<string, RawArg | undefined>> {
   const optional = (p: ParamSpec) => !given.has(p.name) && (p.optional || ('default' in p && p.default !== undefined));
   const entries = method.params.map((p): [string, fc.Arbitrary<RawArg | undefined>] => {
     if (absent.has(p.name)) return [p.name, fc.constant(undefined)];
     const maybe = <T extends RawArg>(a: fc.Arbitrary<T>) => (optional(p) ? fc.option(a, { nil: undefined }) : a);
     switch (p.kind) {
-      case 'number': return [p.name, maybe(numberArb(p, practical))];
-      case 'choice': return [p.name, fc.constantFrom(...p.choices)];
-      case 'profile': return [p.name, maybe(fc.constant(PROFILE))];
-      case 'text': return [p.name, fc.constantFrom('5:40,30:40', '2:10', '1:5,10:5,20:5')];
+      case 'number':
+        return [p.name, maybe(numberArb(p, practical))];
+      case 'choice':
+        return [p.name, fc.constantFrom(...p.choices)];
+      case 'profile':
+        return [p.name, maybe(fc.constant(PROFILE))];
+      case 'text':
+        return [p.name, fc.constantFrom('5:40,30:40', '2:10', '1:5,10:5,20:5')];
     }
   });
   return fc.record(Object.fromEntries(entries));
@@ -79,7 +124,8 @@ function paramsArb(method: CalcMethod, practical: boolean, given: Set<string>, a
 function computes(method: CalcMethod, args: Record<string, RawArg | undefined>): boolean {
   try {
     const out = runCalc(method, args);
-    for (const r of Object.values(out.results)) if (typeof r.value === 'number') expect(Number.isFinite(r.value)).toBe(true);
+    for (const r of Object.values(out.results))
+      if (typeof r.value === 'number') expect(Number.isFinite(r.value)).toBe(true);
     return true;
   } catch (e) {
     if (!(e instanceof InputError || e instanceof ProfileError)) throw e;
@@ -91,11 +137,21 @@ function computes(method: CalcMethod, args: Record<string, RawArg | undefined>):
 describe('every calc method on arbitrary arguments', () => {
   for (const method of CALC_METHODS) {
     it(`${method.id}: anywhere in the hard ranges, finite results or a named input error`, () => {
-      fc.assert(fc.property(argsArb(method, false), (args) => { computes(method, args); }), { numRuns: RUNS, seed: 20261202 });
+      fc.assert(
+        fc.property(argsArb(method, false), (args) => {
+          computes(method, args);
+        }),
+        { numRuns: RUNS, seed: 20261202 },
+      );
     }, 120_000);
     it(`${method.id}: in everyday ranges, most draws compute`, () => {
       let computed = 0;
-      fc.assert(fc.property(argsArb(method, true), (args) => { if (computes(method, args)) computed++; }), { numRuns: RUNS, seed: 20261203 });
+      fc.assert(
+        fc.property(argsArb(method, true), (args) => {
+          if (computes(method, args)) computed++;
+        }),
+        { numRuns: RUNS, seed: 20261203 },
+      );
       expect(computed, `${computed} of ${RUNS} draws computed`).toBeGreaterThanOrEqual(RUNS / 2);
     }, 120_000);
   }

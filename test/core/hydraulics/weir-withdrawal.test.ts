@@ -10,33 +10,62 @@ import { runCalc } from '../../../shared-core/calc/resolve';
 
 const n = (i: Record<string, number | string>, k: string) => Number(i[k]);
 
-runCheckValues('hydraulics', 'weir-skimming-withdrawal', (i) => weirSkimmingWithdrawalMax(n(i, 'g_prime'), n(i, 'crest_depth'), n(i, 'interface_depth')).value);
+runCheckValues(
+  'hydraulics',
+  'weir-skimming-withdrawal',
+  (i) => weirSkimmingWithdrawalMax(n(i, 'g_prime'), n(i, 'crest_depth'), n(i, 'interface_depth')).value,
+);
 
 describe('skimming over a weir', () => {
   it('is the curtain wall turned upside down (Boussinesq), up to the surface drawdown (g′/g)(Y − h) (property)', () => {
-    fc.assert(fc.property(fc.double({ min: 1e-3, max: 0.1, noNaN: true }), fc.double({ min: 0.05, max: 0.95, noNaN: true }), fc.double({ min: 0.5, max: 30, noNaN: true }), (gp, f, Y) => {
-      const h = f * Y;
-      if (gp * (Y - h) >= (GRAVITY * h) / 3) return;
-      const weir = weirSkimmingWithdrawalMax(gp, h, Y).value, wall = curtainWallWithdrawalMax(gp, h, Y).value;
-      expect(Math.abs(weir / wall - 1)).toBeLessThanOrEqual((gp / GRAVITY) * ((Y - h) / h) * (1 + 1e-9));
-      expect(weir).toBeLessThanOrEqual(sillOverflowCritical(gp, Y).value * (1 + 1e-12));
-    }), { numRuns: 200 });
+    fc.assert(
+      fc.property(
+        fc.double({ min: 1e-3, max: 0.1, noNaN: true }),
+        fc.double({ min: 0.05, max: 0.95, noNaN: true }),
+        fc.double({ min: 0.5, max: 30, noNaN: true }),
+        (gp, f, Y) => {
+          const h = f * Y;
+          if (gp * (Y - h) >= (GRAVITY * h) / 3) return;
+          const weir = weirSkimmingWithdrawalMax(gp, h, Y).value,
+            wall = curtainWallWithdrawalMax(gp, h, Y).value;
+          expect(Math.abs(weir / wall - 1)).toBeLessThanOrEqual((gp / GRAVITY) * ((Y - h) / h) * (1 + 1e-9));
+          expect(weir).toBeLessThanOrEqual(sillOverflowCritical(gp, Y).value * (1 + 1e-12));
+        },
+      ),
+      { numRuns: 200 },
+    );
   });
 
   it('rises as the interface lies deeper below the crest, up to the free-surface critical discharge', () => {
-    fc.assert(fc.property(fc.double({ min: 0.1, max: 5, noNaN: true }), fc.double({ min: 1.01, max: 1000, noNaN: true }), fc.double({ min: 1.001, max: 2, noNaN: true }), (h, k, m) => {
-      const a = weirSkimmingWithdrawalMax(0.02, h, k * h).value, b = weirSkimmingWithdrawalMax(0.02, h, k * m * h).value;
-      expect(b).toBeGreaterThanOrEqual(a);
-      expect(b).toBeLessThanOrEqual((2 / 3) ** 1.5 * Math.sqrt(GRAVITY * h ** 3) * (1 + 1e-12));
-    }), { numRuns: 200 });
+    fc.assert(
+      fc.property(
+        fc.double({ min: 0.1, max: 5, noNaN: true }),
+        fc.double({ min: 1.01, max: 1000, noNaN: true }),
+        fc.double({ min: 1.001, max: 2, noNaN: true }),
+        (h, k, m) => {
+          const a = weirSkimmingWithdrawalMax(0.02, h, k * h).value,
+            b = weirSkimmingWithdrawalMax(0.02, h, k * m * h).value;
+          expect(b).toBeGreaterThanOrEqual(a);
+          expect(b).toBeLessThanOrEqual((2 / 3) ** 1.5 * Math.sqrt(GRAVITY * h ** 3) * (1 + 1e-12));
+        },
+      ),
+      { numRuns: 200 },
+    );
   });
 
   it('warns that a free overflow draws lower-layer water; refuses a crest below the interface', () => {
     expect(weirSkimmingWithdrawalMax(0.02, 1, 3).warnings.join(' ')).toMatch(/freely overflowing crest/);
     expect(() => weirSkimmingWithdrawalMax(0.02, 3, 2)).toThrow(InputError);
-    fc.assert(fc.property(fc.double(), fc.double(), fc.double(), (a, b, c) => {
-      try { expect(Number.isFinite(weirSkimmingWithdrawalMax(a, b, c).value)).toBe(true); } catch (e) { expect(e).toBeInstanceOf(InputError); }
-    }), { numRuns: 300 });
+    fc.assert(
+      fc.property(fc.double(), fc.double(), fc.double(), (a, b, c) => {
+        try {
+          expect(Number.isFinite(weirSkimmingWithdrawalMax(a, b, c).value)).toBe(true);
+        } catch (e) {
+          expect(e).toBeInstanceOf(InputError);
+        }
+      }),
+      { numRuns: 300 },
+    );
   });
 });
 
@@ -52,8 +81,17 @@ describe('hydraulics calc methods', () => {
     const m = findCalcMethod('internal-jump')!;
     const deep = runCalc(m, { discharge_per_width: '0.2', upstream_thickness: '0.5', g_prime: '0.02' });
     expect(deep.results.downstream_thickness.value).toBeCloseTo(2.589454172900137, 9); // Bélanger form, y1 = 0.5 m, F1 = 4
-    const finite = runCalc(m, { discharge_per_width: '0.05', upstream_thickness: '0.2', g_prime: '0.02', total_depth: '2' });
-    expect(finite.results.downstream_thickness.value).toBeGreaterThan(finite.results.downstream_thickness_alt.value as number);
-    expect(() => runCalc(m, { discharge_per_width: '0.2', upstream_thickness: '0.5', g_prime: '0.02', upper_discharge: '0.1' })).toThrow(InputError);
+    const finite = runCalc(m, {
+      discharge_per_width: '0.05',
+      upstream_thickness: '0.2',
+      g_prime: '0.02',
+      total_depth: '2',
+    });
+    expect(finite.results.downstream_thickness.value).toBeGreaterThan(
+      finite.results.downstream_thickness_alt.value as number,
+    );
+    expect(() =>
+      runCalc(m, { discharge_per_width: '0.2', upstream_thickness: '0.5', g_prime: '0.02', upper_discharge: '0.1' }),
+    ).toThrow(InputError);
   });
 });

@@ -6,12 +6,23 @@ import { InputError } from '../../../shared-core/core/errors';
 import { runCheckValues } from '../../helpers/check-values';
 
 const keys: Record<string, string> = {
-  l_q: 'lQ', l_m: 'lM', l_crossflow_momentum: 'lCrossflowMomentum', l_crossflow_buoyancy: 'lCrossflowBuoyancy',
-  l_strat_momentum: 'lStratMomentum', l_strat_buoyancy: 'lStratBuoyancy', froude: 'froude',
+  l_q: 'lQ',
+  l_m: 'lM',
+  l_crossflow_momentum: 'lCrossflowMomentum',
+  l_crossflow_buoyancy: 'lCrossflowBuoyancy',
+  l_strat_momentum: 'lStratMomentum',
+  l_strat_buoyancy: 'lStratBuoyancy',
+  froude: 'froude',
 };
 
 runCheckValues('jets', 'jet-length-scales', (i) => {
-  const r = jetLengthScales({ diameter: Number(i.diameter), velocity: Number(i.velocity), gPrime: Number(i.g_prime), current: Number(i.current ?? 0), buoyancyFrequency: Number(i.buoyancy_frequency ?? 0) });
+  const r = jetLengthScales({
+    diameter: Number(i.diameter),
+    velocity: Number(i.velocity),
+    gPrime: Number(i.g_prime),
+    current: Number(i.current ?? 0),
+    buoyancyFrequency: Number(i.buoyancy_frequency ?? 0),
+  });
   return (r as unknown as Record<string, number>)[keys[String(i.quantity)]];
 });
 
@@ -36,27 +47,44 @@ describe('jet length scales', () => {
     expect(r.warnings.join(' ')).toMatch(/froude/);
   });
   it('scales grow with momentum flux and fall with buoyancy (property)', () => {
-    fc.assert(fc.property(fc.double({ min: 0.01, max: 2, noNaN: true }), fc.double({ min: 0.1, max: 10, noNaN: true }), fc.double({ min: 0.001, max: 1, noNaN: true }), (D, U, g) => {
-      const a = jetLengthScales({ diameter: D, velocity: U, gPrime: g });
-      const b = jetLengthScales({ diameter: D, velocity: U * 1.5, gPrime: g });
-      const c = jetLengthScales({ diameter: D, velocity: U, gPrime: -g });
-      expect(b.lM).toBeGreaterThan(a.lM);
-      expect(c.lM).toBeCloseTo(a.lM, 10);
-    }));
+    fc.assert(
+      fc.property(
+        fc.double({ min: 0.01, max: 2, noNaN: true }),
+        fc.double({ min: 0.1, max: 10, noNaN: true }),
+        fc.double({ min: 0.001, max: 1, noNaN: true }),
+        (D, U, g) => {
+          const a = jetLengthScales({ diameter: D, velocity: U, gPrime: g });
+          const b = jetLengthScales({ diameter: D, velocity: U * 1.5, gPrime: g });
+          const c = jetLengthScales({ diameter: D, velocity: U, gPrime: -g });
+          expect(b.lM).toBeGreaterThan(a.lM);
+          expect(c.lM).toBeCloseTo(a.lM, 10);
+        },
+      ),
+    );
   });
   it('bad input throws an InputError', () => {
     expect(() => jetLengthScales({ diameter: -1, velocity: 1, gPrime: 0.1 })).toThrow(InputError);
-    expect(() => jetLengthScales({ diameter: 1, velocity: 1, gPrime: 0.1, buoyancyFrequency: -0.1 })).toThrow(InputError);
+    expect(() => jetLengthScales({ diameter: 1, velocity: 1, gPrime: 0.1, buoyancyFrequency: -0.1 })).toThrow(
+      InputError,
+    );
     expect(() => linePlumeRobertsSnyderBaumgartner1989(0.01, 0.2, 0)).toThrow(InputError);
     expect(() => linePlumeRobertsSnyderBaumgartner1989(0.01, -0.2, 0.01)).toThrow(InputError);
   });
   it('line-plume dilution grows with current and never drops below 1 (property)', () => {
-    fc.assert(fc.property(fc.double({ min: 1e-4, max: 10, noNaN: true }), fc.double({ min: 1e-3, max: 5, noNaN: true }), fc.double({ min: 1e-3, max: 2, noNaN: true }), fc.double({ min: 0, max: 2, noNaN: true }), (q, g, N, u) => {
-      const r0 = linePlumeRobertsSnyderBaumgartner1989(q, g, N, u);
-      const r1 = linePlumeRobertsSnyderBaumgartner1989(q, g, N, u + 0.5);
-      expect(r0.dilution).toBeGreaterThanOrEqual(1);
-      expect(Number.isFinite(r0.riseHeight)).toBe(true);
-      expect(r1.dilution).toBeGreaterThanOrEqual(r0.dilution * (1 - 1e-12));
-    }));
+    fc.assert(
+      fc.property(
+        fc.double({ min: 1e-4, max: 10, noNaN: true }),
+        fc.double({ min: 1e-3, max: 5, noNaN: true }),
+        fc.double({ min: 1e-3, max: 2, noNaN: true }),
+        fc.double({ min: 0, max: 2, noNaN: true }),
+        (q, g, N, u) => {
+          const r0 = linePlumeRobertsSnyderBaumgartner1989(q, g, N, u);
+          const r1 = linePlumeRobertsSnyderBaumgartner1989(q, g, N, u + 0.5);
+          expect(r0.dilution).toBeGreaterThanOrEqual(1);
+          expect(Number.isFinite(r0.riseHeight)).toBe(true);
+          expect(r1.dilution).toBeGreaterThanOrEqual(r0.dilution * (1 - 1e-12));
+        },
+      ),
+    );
   });
 });

@@ -8,7 +8,11 @@ import { InputError } from '../../../shared-core/core/errors';
 import { SCREENING_CAUTION } from '../../../shared-core/core/caution';
 import { runCheckValues } from '../../helpers/check-values';
 
-runCheckValues('mixing-zone', 'required-dilution', (i) => requiredDilution(Number(i.effluent), Number(i.ambient), Number(i.criterion)).value);
+runCheckValues(
+  'mixing-zone',
+  'required-dilution',
+  (i) => requiredDilution(Number(i.effluent), Number(i.ambient), Number(i.criterion)).value,
+);
 
 describe('required dilution', () => {
   it('an ambient that already fails the criterion is an InputError', () => {
@@ -17,18 +21,41 @@ describe('required dilution', () => {
     expect(() => requiredDilution(Number.NaN, 1, 2)).toThrow(InputError);
   });
   it('mixing effluent and ambient at the required dilution meets the criterion exactly (property)', () => {
-    fc.assert(fc.property(fc.double({ min: -1e3, max: 1e3, noNaN: true }), fc.double({ min: 0.01, max: 1e3, noNaN: true }), fc.double({ min: 1.01, max: 1e3, noNaN: true }), (ca, allowed, factor) => {
-      const cc = ca + allowed, ce = ca + allowed * factor;
-      const s = requiredDilution(ce, ca, cc).value;
-      expect(s).toBeGreaterThanOrEqual(1);
-      expect(ca + (ce - ca) / s).toBeCloseTo(cc, 6);
-    }));
+    fc.assert(
+      fc.property(
+        fc.double({ min: -1e3, max: 1e3, noNaN: true }),
+        fc.double({ min: 0.01, max: 1e3, noNaN: true }),
+        fc.double({ min: 1.01, max: 1e3, noNaN: true }),
+        (ca, allowed, factor) => {
+          const cc = ca + allowed,
+            ce = ca + allowed * factor;
+          const s = requiredDilution(ce, ca, cc).value;
+          expect(s).toBeGreaterThanOrEqual(1);
+          expect(ca + (ce - ca) / s).toBeCloseTo(cc, 6);
+        },
+      ),
+    );
   });
 });
 
 describe('mixing-zone boundary and compliance table', () => {
-  const winter = buoyantJetTrajectory({ diameter: 0.15, velocity: 3, angle: 0, portDepth: 35, effluentDensity: 1000, ambient: { kind: 'uniform', density: 1026 }, current: 0.1 });
-  const summer = buoyantJetTrajectory({ diameter: 0.15, velocity: 3, angle: 0, portDepth: 35, effluentDensity: 1000, ambient: { kind: 'table', depth: [0, 10, 20, 40], density: [1023, 1023.2, 1025.6, 1026] } });
+  const winter = buoyantJetTrajectory({
+    diameter: 0.15,
+    velocity: 3,
+    angle: 0,
+    portDepth: 35,
+    effluentDensity: 1000,
+    ambient: { kind: 'uniform', density: 1026 },
+    current: 0.1,
+  });
+  const summer = buoyantJetTrajectory({
+    diameter: 0.15,
+    velocity: 3,
+    angle: 0,
+    portDepth: 35,
+    effluentDensity: 1000,
+    ambient: { kind: 'table', depth: [0, 10, 20, 40], density: [1023, 1023.2, 1025.6, 1026] },
+  });
   const constituents: Constituent[] = [
     { name: 'ammonia', unit: 'mg/L', effluent: 30, ambient: 0.02, criterion: 1.5 },
     { name: 'copper', unit: 'µg/L', effluent: 400, ambient: 1, criterion: 3.1 },
@@ -67,7 +94,10 @@ describe('mixing-zone boundary and compliance table', () => {
     for (const r of rows) expect(['meets', 'does not meet', 'cannot tell']).toContain(r.verdict);
   });
   it('within the uncertainty band the verdict is cannot tell', () => {
-    const { rows } = complianceTable([{ name: 'c', dilution: 10.5 }], [{ name: 'x', unit: '', effluent: 11, ambient: 1, criterion: 2 }]);
+    const { rows } = complianceTable(
+      [{ name: 'c', dilution: 10.5 }],
+      [{ name: 'x', unit: '', effluent: 11, ambient: 1, criterion: 2 }],
+    );
     expect(rows[0].verdict).toBe('cannot tell');
     expect(() => complianceTable([], constituents)).toThrow(InputError);
     expect(() => complianceTable([{ name: 'c', dilution: 0.5 }], constituents)).toThrow(InputError);

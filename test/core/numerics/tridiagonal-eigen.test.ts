@@ -5,9 +5,19 @@ import fc from 'fast-check';
 import { kthEigenvalue, lowestEigenpairs, sturmCount } from '../../../shared-core/numerics/tridiagonal-eigen';
 
 /** scipy.linalg.eigh_tridiagonal / eigh reference, made by test/check-values/internal-waves/generators/internal_waves_reference.py */
-const ref = JSON.parse(readFileSync(resolve(import.meta.dirname, '../../check-values/internal-waves/generators/internal_waves_reference.json'), 'utf8')).tridiagonal as {
-  diag: number[]; off: number[]; standard_values: number[]; standard_vector0: number[];
-  pencil_weight: number[]; pencil_values: number[]; pencil_vector0: number[];
+const ref = JSON.parse(
+  readFileSync(
+    resolve(import.meta.dirname, '../../check-values/internal-waves/generators/internal_waves_reference.json'),
+    'utf8',
+  ),
+).tridiagonal as {
+  diag: number[];
+  off: number[];
+  standard_values: number[];
+  standard_vector0: number[];
+  pencil_weight: number[];
+  pencil_values: number[];
+  pencil_vector0: number[];
 };
 
 /** |cos| of the angle between two vectors: 1 when they are parallel either way. */
@@ -35,23 +45,31 @@ describe('Sturm bisection + inverse iteration', () => {
 
   it('matches scipy.linalg.eigh on a generalized pencil A x = λ B x', () => {
     const n = ref.pencil_weight.length;
-    const pairs = lowestEigenpairs({ diag: new Array(n).fill(2), off: new Array(n - 1).fill(-1), weight: ref.pencil_weight }, 5);
-    pairs.forEach((p, i) => expect(Math.abs(p.value - ref.pencil_values[i]) / ref.pencil_values[i]).toBeLessThan(1e-12));
+    const pairs = lowestEigenpairs(
+      { diag: new Array(n).fill(2), off: new Array(n - 1).fill(-1), weight: ref.pencil_weight },
+      5,
+    );
+    pairs.forEach((p, i) =>
+      expect(Math.abs(p.value - ref.pencil_values[i]) / ref.pencil_values[i]).toBeLessThan(1e-12),
+    );
     expect(alignment(pairs[0].vector, ref.pencil_vector0)).toBeGreaterThan(1 - 1e-10);
   });
 
   it('counts eigenvalues: sturmCount just above the k-th eigenvalue is k (property)', () => {
-    fc.assert(fc.property(
-      fc.array(fc.double({ min: -5, max: 5, noNaN: true }), { minLength: 3, maxLength: 30 }),
-      fc.double({ min: 0.05, max: 2, noNaN: true }),
-      (diag, offValue) => {
-        const p = { diag, off: new Array(diag.length - 1).fill(offValue) };
-        const k = 1 + (diag.length >> 1);
-        const lk = kthEigenvalue(p, k);
-        expect(sturmCount(p, lk + 1e-7 * (1 + Math.abs(lk)))).toBeGreaterThanOrEqual(k);
-        expect(sturmCount(p, lk - 1e-7 * (1 + Math.abs(lk)))).toBeLessThan(k);
-      },
-    ), { numRuns: 100 });
+    fc.assert(
+      fc.property(
+        fc.array(fc.double({ min: -5, max: 5, noNaN: true }), { minLength: 3, maxLength: 30 }),
+        fc.double({ min: 0.05, max: 2, noNaN: true }),
+        (diag, offValue) => {
+          const p = { diag, off: new Array(diag.length - 1).fill(offValue) };
+          const k = 1 + (diag.length >> 1);
+          const lk = kthEigenvalue(p, k);
+          expect(sturmCount(p, lk + 1e-7 * (1 + Math.abs(lk)))).toBeGreaterThanOrEqual(k);
+          expect(sturmCount(p, lk - 1e-7 * (1 + Math.abs(lk)))).toBeLessThan(k);
+        },
+      ),
+      { numRuns: 100 },
+    );
   });
 
   it('rejects inconsistent input', () => {

@@ -4,13 +4,23 @@ import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
 import { runCheckValues } from '../../helpers/check-values';
 import {
-  parseProfileCsv, makeProfile, n2Profile, stabilityFlags, mixedLayerDepth, thermoclineDepth, twoLayerFit, interpolateAt,
-  ProfileError, NEUTRAL_N2, parseHeader,
+  parseProfileCsv,
+  makeProfile,
+  n2Profile,
+  stabilityFlags,
+  mixedLayerDepth,
+  thermoclineDepth,
+  twoLayerFit,
+  interpolateAt,
+  ProfileError,
+  NEUTRAL_N2,
+  parseHeader,
 } from '../../../shared-core/profile';
 import { densitySeawaterEos80 } from '../../../shared-core/water';
 import { GRAVITY } from '../../../shared-core/quantities';
 
-const fixture = (name: string) => parseProfileCsv(readFileSync(resolve(import.meta.dirname, '../../fixtures/profiles', name), 'utf8'));
+const fixture = (name: string) =>
+  parseProfileCsv(readFileSync(resolve(import.meta.dirname, '../../fixtures/profiles', name), 'utf8'));
 
 runCheckValues('profile', 'two-layer-least-squares', (i) => {
   const fit = twoLayerFit(fixture(String(i.profile)));
@@ -45,9 +55,15 @@ describe('CSV import', () => {
       expect(msg).toMatch(/row 2, column "temperature": "abc" is not a number/);
       expect(msg).toMatch(/row 3, column "temperature": value is missing/);
     }
-    expect(() => parseProfileCsv('depth (m),temperature (degC)\n0,20\n1,99\n')).toThrow(/row 2, column "temperature": 99 degC is physically impossible/);
-    expect(() => parseProfileCsv('depth (m),temperature (degC)\n0,20\n0,19\n')).toThrow(/row 2, column "depth": duplicate depth/);
-    expect(() => parseProfileCsv('depth (m),temperature (degC)\n0,20\n5,19\n3,18\n')).toThrow(/row 3, column "depth": depth 3 m is shallower/);
+    expect(() => parseProfileCsv('depth (m),temperature (degC)\n0,20\n1,99\n')).toThrow(
+      /row 2, column "temperature": 99 degC is physically impossible/,
+    );
+    expect(() => parseProfileCsv('depth (m),temperature (degC)\n0,20\n0,19\n')).toThrow(
+      /row 2, column "depth": duplicate depth/,
+    );
+    expect(() => parseProfileCsv('depth (m),temperature (degC)\n0,20\n5,19\n3,18\n')).toThrow(
+      /row 3, column "depth": depth 3 m is shallower/,
+    );
     expect(() => parseProfileCsv('depth (kg),temperature (degC)\n0,20\n5,19\n')).toThrow(/cannot be converted to m/);
     expect(() => parseProfileCsv('height,colour\n0,1\n1,2\n')).toThrow(/no temperature column/);
   });
@@ -66,46 +82,60 @@ describe('stratification', () => {
     const p = makeProfile({ depth, temperature: [10, 10, 10, 10], salinity: [30, 31, 32, 33] });
     const { n2 } = n2Profile(p);
     const rho = depth.map((_, i) => densitySeawaterEos80(30 + i, 10).value);
-    n2.forEach((v, i) => expect(v).toBeCloseTo((GRAVITY * (rho[i + 1] - rho[i])) / (0.5 * (rho[i] + rho[i + 1]) * 10), 12));
+    n2.forEach((v, i) =>
+      expect(v).toBeCloseTo((GRAVITY * (rho[i + 1] - rho[i])) / (0.5 * (rho[i] + rho[i + 1]) * 10), 12),
+    );
   });
 
   it('the N² sign matches the stability flag (property)', () => {
-    fc.assert(fc.property(fc.array(fc.double({ min: 0, max: 30, noNaN: true }), { minLength: 2, maxLength: 30 }), (temps) => {
-      const p = makeProfile({ depth: temps.map((_, i) => i), temperature: temps });
-      const flags = stabilityFlags(p);
-      for (const f of flags) {
-        if (f.stability === 'unstable') expect(f.n2).toBeLessThan(-NEUTRAL_N2);
-        if (f.stability === 'stable') expect(f.n2).toBeGreaterThan(NEUTRAL_N2);
-        if (f.stability === 'neutral') expect(Math.abs(f.n2)).toBeLessThanOrEqual(NEUTRAL_N2);
-      }
-    }));
+    fc.assert(
+      fc.property(fc.array(fc.double({ min: 0, max: 30, noNaN: true }), { minLength: 2, maxLength: 30 }), (temps) => {
+        const p = makeProfile({ depth: temps.map((_, i) => i), temperature: temps });
+        const flags = stabilityFlags(p);
+        for (const f of flags) {
+          if (f.stability === 'unstable') expect(f.n2).toBeLessThan(-NEUTRAL_N2);
+          if (f.stability === 'stable') expect(f.n2).toBeGreaterThan(NEUTRAL_N2);
+          if (f.stability === 'neutral') expect(Math.abs(f.n2)).toBeLessThanOrEqual(NEUTRAL_N2);
+        }
+      }),
+    );
   });
 
   it('the two-layer fit conserves the column mass and brackets the profile (property)', () => {
-    fc.assert(fc.property(fc.array(fc.double({ min: 4, max: 30, noNaN: true }), { minLength: 3, maxLength: 20 }), (temps) => {
-      const sorted = [...temps].sort((a, b) => b - a); // warm on top: stable
-      const p = makeProfile({ depth: sorted.map((_, i) => i * 2), temperature: sorted });
-      const fit = twoLayerFit(p, 200);
-      const min = Math.min(...p.density), max = Math.max(...p.density);
-      expect(fit.rhoUpper).toBeGreaterThanOrEqual(min - 1e-9);
-      expect(fit.rhoLower).toBeLessThanOrEqual(max + 1e-9);
-      expect(fit.gPrime).toBeGreaterThanOrEqual(-1e-12);
-      const bottom = p.depth[p.depth.length - 1];
-      const cells = 200, dz = bottom / cells;
-      let mass = 0;
-      for (let i = 0; i < cells; i++) mass += interpolateAt(p.depth, p.density, (i + 0.5) * dz) * dz;
-      expect(fit.rhoUpper * fit.upperThickness + fit.rhoLower * fit.lowerThickness).toBeCloseTo(mass, 6);
-    }));
+    fc.assert(
+      fc.property(fc.array(fc.double({ min: 4, max: 30, noNaN: true }), { minLength: 3, maxLength: 20 }), (temps) => {
+        const sorted = [...temps].sort((a, b) => b - a); // warm on top: stable
+        const p = makeProfile({ depth: sorted.map((_, i) => i * 2), temperature: sorted });
+        const fit = twoLayerFit(p, 200);
+        const min = Math.min(...p.density),
+          max = Math.max(...p.density);
+        expect(fit.rhoUpper).toBeGreaterThanOrEqual(min - 1e-9);
+        expect(fit.rhoLower).toBeLessThanOrEqual(max + 1e-9);
+        expect(fit.gPrime).toBeGreaterThanOrEqual(-1e-12);
+        const bottom = p.depth[p.depth.length - 1];
+        const cells = 200,
+          dz = bottom / cells;
+        let mass = 0;
+        for (let i = 0; i < cells; i++) mass += interpolateAt(p.depth, p.density, (i + 0.5) * dz) * dz;
+        expect(fit.rhoUpper * fit.upperThickness + fit.rhoLower * fit.lowerThickness).toBeCloseTo(mass, 6);
+      }),
+    );
   });
 
   it('never lets NaN out of a profile built from arbitrary numbers', () => {
-    fc.assert(fc.property(fc.array(fc.double(), { minLength: 0, maxLength: 6 }), fc.array(fc.double(), { minLength: 0, maxLength: 6 }), (d, t) => {
-      try {
-        const p = makeProfile({ depth: d, temperature: t });
-        expect(p.density.every(Number.isFinite)).toBe(true);
-      } catch (e) {
-        expect(e).toBeInstanceOf(ProfileError);
-      }
-    }));
+    fc.assert(
+      fc.property(
+        fc.array(fc.double(), { minLength: 0, maxLength: 6 }),
+        fc.array(fc.double(), { minLength: 0, maxLength: 6 }),
+        (d, t) => {
+          try {
+            const p = makeProfile({ depth: d, temperature: t });
+            expect(p.density.every(Number.isFinite)).toBe(true);
+          } catch (e) {
+            expect(e).toBeInstanceOf(ProfileError);
+          }
+        },
+      ),
+    );
   });
 });

@@ -2,7 +2,14 @@ import { readFileSync } from 'node:fs';
 import { resolve } from 'node:path';
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
-import { loadSite, serialiseSite, assessSite, siteJsonSchema, SiteFileError, SITE_VERSION } from '../../../shared-core/site';
+import {
+  loadSite,
+  serialiseSite,
+  assessSite,
+  siteJsonSchema,
+  SiteFileError,
+  SITE_VERSION,
+} from '../../../shared-core/site';
 
 const ROOT = resolve(import.meta.dirname, '../../..');
 const read = (p: string) => readFileSync(resolve(ROOT, p), 'utf8');
@@ -39,7 +46,9 @@ describe('site document', () => {
   it('refuses a newer version with a clear message', () => {
     const doc = JSON.parse(read(DEMOS[0]));
     doc.version = SITE_VERSION + 1;
-    expect(() => loadSite(JSON.stringify(doc))).toThrow(new RegExp(`version ${SITE_VERSION + 1}; this gprime reads versions up to ${SITE_VERSION}`));
+    expect(() => loadSite(JSON.stringify(doc))).toThrow(
+      new RegExp(`version ${SITE_VERSION + 1}; this gprime reads versions up to ${SITE_VERSION}`),
+    );
   });
 
   it('names the place of a malformed value', () => {
@@ -57,9 +66,15 @@ describe('site document', () => {
   });
 
   it('never throws anything but SiteFileError on arbitrary JSON (property)', () => {
-    fc.assert(fc.property(fc.jsonValue(), (v) => {
-      try { loadSite(JSON.stringify(v)); } catch (e) { expect(e).toBeInstanceOf(SiteFileError); }
-    }));
+    fc.assert(
+      fc.property(fc.jsonValue(), (v) => {
+        try {
+          loadSite(JSON.stringify(v));
+        } catch (e) {
+          expect(e).toBeInstanceOf(SiteFileError);
+        }
+      }),
+    );
   });
 
   it('the shipped JSON Schema matches the zod schema', () => {

@@ -2,7 +2,15 @@ import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { findCalcMethod } from '../../../shared-core/calc/registry';
 import { InputError } from '../../../shared-core/core/errors';
-import { latinHypercube, normalCdf, normalQuantile, parseStandardUncertainty, propagateMonteCarloJcgm101, sampleQuantile, seededRandom } from '../../../shared-core/uncertainty';
+import {
+  latinHypercube,
+  normalCdf,
+  normalQuantile,
+  parseStandardUncertainty,
+  propagateMonteCarloJcgm101,
+  sampleQuantile,
+  seededRandom,
+} from '../../../shared-core/uncertainty';
 import { runCheckValues } from '../../helpers/check-values';
 
 const method = (id: string) => {
@@ -14,15 +22,26 @@ const method = (id: string) => {
 runCheckValues('uncertainty', 'monte-carlo-jcgm101', (inputs) => {
   const { method: id, vary, u, result, statistic, ...raw } = inputs;
   const args = Object.fromEntries(Object.entries(raw).map(([k, v]) => [k, typeof v === 'number' ? v : String(v)]));
-  const r = propagateMonteCarloJcgm101(method(String(id)), args, [{ name: String(vary), standardUncertainty: Number(u) }], { samples: 4000 });
+  const r = propagateMonteCarloJcgm101(
+    method(String(id)),
+    args,
+    [{ name: String(vary), standardUncertainty: Number(u) }],
+    { samples: 4000 },
+  );
   const band = r.bands.find((b) => b.name === result)!;
-  return statistic === 'relativeStandardDeviation' ? band.standardDeviation / band.nominal : band[statistic as 'standardDeviation' | 'low' | 'high'];
+  return statistic === 'relativeStandardDeviation'
+    ? band.standardDeviation / band.nominal
+    : band[statistic as 'standardDeviation' | 'low' | 'high'];
 });
 
 describe('normal distribution', () => {
   // Abramowitz & Stegun (1964) Table 26.1 (percentage points of the normal distribution)
   it.each([
-    [0.95, 1.644854], [0.975, 1.959964], [0.99, 2.326348], [0.999, 3.090232], [0.9999, 3.719016],
+    [0.95, 1.644854],
+    [0.975, 1.959964],
+    [0.99, 2.326348],
+    [0.999, 3.090232],
+    [0.9999, 3.719016],
   ])('z(%f) = %f (Abramowitz & Stegun 1964, Table 26.1)', (p, z) => {
     expect(normalQuantile(p)).toBeCloseTo(z, 5);
     expect(normalQuantile(1 - p)).toBeCloseTo(-z, 5);
@@ -45,13 +64,16 @@ describe('sample quantiles, type 7 (Hyndman & Fan 1996)', () => {
 
 describe('Latin hypercube (McKay, Beckman & Conover 1979)', () => {
   it('puts exactly one draw in each of the n strata of every dimension', () => {
-    fc.assert(fc.property(fc.integer({ min: 1, max: 200 }), fc.integer({ min: 1, max: 4 }), fc.integer(), (n, d, seed) => {
-      const rows = latinHypercube(n, d, seededRandom(seed));
-      for (let k = 0; k < d; k++) {
-        const strata = rows.map((r) => Math.floor(r[k] * n)).sort((a, b) => a - b);
-        expect(strata).toEqual(Array.from({ length: n }, (_, i) => i));
-      }
-    }), { numRuns: 50 });
+    fc.assert(
+      fc.property(fc.integer({ min: 1, max: 200 }), fc.integer({ min: 1, max: 4 }), fc.integer(), (n, d, seed) => {
+        const rows = latinHypercube(n, d, seededRandom(seed));
+        for (let k = 0; k < d; k++) {
+          const strata = rows.map((r) => Math.floor(r[k] * n)).sort((a, b) => a - b);
+          expect(strata).toEqual(Array.from({ length: n }, (_, i) => i));
+        }
+      }),
+      { numRuns: 50 },
+    );
   });
 });
 
@@ -71,26 +93,38 @@ describe('Monte Carlo propagation', () => {
     expect(r.bands[0].high).toBeCloseTo(r.bands[0].nominal, 12);
   });
   it('the band holds the median and widens with the input uncertainty', () => {
-    fc.assert(fc.property(fc.double({ min: 0.01, max: 2, noNaN: true }), (u) => {
-      const narrow = propagateMonteCarloJcgm101(jet, raw, [{ name: 'effluent', standardUncertainty: u }], { samples: 200 }).bands[0];
-      const wide = propagateMonteCarloJcgm101(jet, raw, [{ name: 'effluent', standardUncertainty: 2 * u }], { samples: 200 }).bands[0];
-      expect(narrow.low).toBeLessThanOrEqual(narrow.median);
-      expect(narrow.median).toBeLessThanOrEqual(narrow.high);
-      expect(wide.high - wide.low).toBeGreaterThan(narrow.high - narrow.low);
-    }), { numRuns: 20 });
+    fc.assert(
+      fc.property(fc.double({ min: 0.01, max: 2, noNaN: true }), (u) => {
+        const narrow = propagateMonteCarloJcgm101(jet, raw, [{ name: 'effluent', standardUncertainty: u }], {
+          samples: 200,
+        }).bands[0];
+        const wide = propagateMonteCarloJcgm101(jet, raw, [{ name: 'effluent', standardUncertainty: 2 * u }], {
+          samples: 200,
+        }).bands[0];
+        expect(narrow.low).toBeLessThanOrEqual(narrow.median);
+        expect(narrow.median).toBeLessThanOrEqual(narrow.high);
+        expect(wide.high - wide.low).toBeGreaterThan(narrow.high - narrow.low);
+      }),
+      { numRuns: 20 },
+    );
   });
   it('leaves out and reports draws outside an input’s allowed range', () => {
-    const r = propagateMonteCarloJcgm101(method('front-speed'), { g_prime: '0.01', current_depth: '2' }, [{ name: 'g_prime', standardUncertainty: 0.01 }]);
+    const r = propagateMonteCarloJcgm101(method('front-speed'), { g_prime: '0.01', current_depth: '2' }, [
+      { name: 'g_prime', standardUncertainty: 0.01 },
+    ]);
     expect(r.evaluated).toBeLessThan(r.samples);
     expect(r.warnings.join(' ')).toMatch(/g_prime outside its allowed range/);
     expect(r.bands.find((b) => b.name === 'speed')!.low).toBeGreaterThan(0);
   });
   it('names the field of a bad uncertainty', () => {
-    const bad = (name: string, u: number) => () => propagateMonteCarloJcgm101(jet, raw, [{ name, standardUncertainty: u }]);
+    const bad = (name: string, u: number) => () =>
+      propagateMonteCarloJcgm101(jet, raw, [{ name, standardUncertainty: u }]);
     expect(bad('effluent', -1)).toThrow(/uncertainty of effluent = -1/);
     expect(bad('nonsense', 1)).toThrow(InputError);
     expect(() => propagateMonteCarloJcgm101(jet, raw, [])).toThrow(/at least one input/);
-    expect(() => propagateMonteCarloJcgm101(jet, raw, [{ name: 'effluent', standardUncertainty: 1 }], { samples: 5 })).toThrow(/samples = 5/);
+    expect(() =>
+      propagateMonteCarloJcgm101(jet, raw, [{ name: 'effluent', standardUncertainty: 1 }], { samples: 5 }),
+    ).toThrow(/samples = 5/);
   });
 });
 
@@ -112,7 +146,11 @@ describe('warnings raised in some draws', () => {
   it('reports a new kind of warning with its share of draws, not the nominal warnings with other numbers', () => {
     // the Wedderburn method always states its drag coefficient (numbers vary with the wind); a validity
     // warning appears only in the draws whose wind speed leaves the Large & Pond (1981) range
-    const r = propagateMonteCarloJcgm101(method('wedderburn'), { g_prime: '0.02', upper_thickness: '6', wind_speed: '10', basin_length: '3000' }, [{ name: 'wind_speed', standardUncertainty: 3 }]);
+    const r = propagateMonteCarloJcgm101(
+      method('wedderburn'),
+      { g_prime: '0.02', upper_thickness: '6', wind_speed: '10', basin_length: '3000' },
+      [{ name: 'wind_speed', standardUncertainty: 3 }],
+    );
     expect(r.warnings.filter((w) => /Drag coefficient/.test(w))).toEqual([]);
     expect(r.warnings.some((w) => /^In [\d.]+ % of the draws: .*outside the range 4 … 25 m\/s/.test(w))).toBe(true);
   });

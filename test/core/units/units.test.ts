@@ -29,25 +29,35 @@ describe('quantities with units (NIST SP 811, Appendix B)', () => {
   });
 
   it('refuses mismatched or unknown units with the field named', () => {
-    expect(() => parseQuantity('depth', '3 kg', 'm')).toThrow(/depth = "3 kg" m is not allowed: "kg" cannot be converted to m/);
+    expect(() => parseQuantity('depth', '3 kg', 'm')).toThrow(
+      /depth = "3 kg" m is not allowed: "kg" cannot be converted to m/,
+    );
     expect(() => parseQuantity('depth', '3 furlongz', 'm')).toThrow(/unit "furlongz" is not known/);
     expect(() => parseQuantity('depth', 'deep', 'm')).toThrow(/it is not a number/);
   });
 
   it('display conversions round-trip (property)', () => {
-    fc.assert(fc.property(fc.double({ min: -1e6, max: 1e6, noNaN: true }), fc.constantFrom('m', 'm/s', 'm3/s', 'degC', 'kg/m3', 'm2/s', 'm/s2'), (v, unit) => {
-      const shown = toDisplay(v, unit, 'us');
-      expect(fromDisplay(shown.value, unit, 'us')).toBeCloseTo(v, 6);
-    }));
+    fc.assert(
+      fc.property(
+        fc.double({ min: -1e6, max: 1e6, noNaN: true }),
+        fc.constantFrom('m', 'm/s', 'm3/s', 'degC', 'kg/m3', 'm2/s', 'm/s2'),
+        (v, unit) => {
+          const shown = toDisplay(v, unit, 'us');
+          expect(fromDisplay(shown.value, unit, 'us')).toBeCloseTo(v, 6);
+        },
+      ),
+    );
   });
 
   it('never throws anything but InputError on arbitrary text (property)', () => {
-    fc.assert(fc.property(fc.string(), (s) => {
-      try {
-        expect(Number.isFinite(parseQuantity('x', s, 'm'))).toBe(true);
-      } catch (e) {
-        expect(e).toBeInstanceOf(InputError);
-      }
-    }));
+    fc.assert(
+      fc.property(fc.string(), (s) => {
+        try {
+          expect(Number.isFinite(parseQuantity('x', s, 'm'))).toBe(true);
+        } catch (e) {
+          expect(e).toBeInstanceOf(InputError);
+        }
+      }),
+    );
   });
 });
