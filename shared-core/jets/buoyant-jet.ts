@@ -179,7 +179,7 @@ export function assembleTrajectory(run: JetRun, stretches: readonly Stretch[], a
     message = last.message;
   if (status === 'terminal-event') events.push({ ...events[events.length - 1], kind: 'end of near field' });
   const maxRise = Math.max(...path.z);
-  const outcome = describeOutcome(events, status, maxRise, path, run.bed === undefined ? undefined : run.bed - H);
+  const outcome = describeOutcome(events, status, maxRise, path);
   const warnings = [
     ...amb.warnings,
     ...run.scales.warnings,

@@ -15,7 +15,6 @@ export function describeOutcome(
   status: OdeStatus,
   maxRise: number,
   path: JetPath,
-  bedBelowPort?: number,
 ): { kind: JetOutcome; text: string } {
   const find = (k: JetEvent['kind']) => events.find((e) => e.kind === k);
   const end = find('end of near field');

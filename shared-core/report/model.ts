@@ -239,7 +239,7 @@ export function buildReportModel(a: Assessment, units: UnitSystem): ReportModel 
     ...estimates.map((s) => ({ number: s.number, title: `${s.title} (${s.id})`, anchor: s.id })),
     ...(compliance ? [{ number: String(next++), title: 'Mixing-zone compliance', anchor: 'compliance' }] : []),
     { number: String(next++), title: 'References', anchor: 'references' },
-    { number: String(next++), title: 'Cautions', anchor: 'cautions' },
+    { number: String(next), title: 'Cautions', anchor: 'cautions' },
   ];
   const p = a.project;
   const unitsLabel = units === 'us' ? 'US customary (ft, cfs, °F, lb/ft³)' : 'SI (m, m³/s, °C, kg/m³)';

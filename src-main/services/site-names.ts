@@ -6,6 +6,7 @@ export const SITE_EXTENSION = `.${SITE_FILE_EXTENSION}`;
 /** A file name safe in every file system: no folders, no reserved characters, with the site extension. */
 export function safeSiteFileName(name: string): string {
   const base = basename(name.replace(/\\/g, '/'))
+    // eslint-disable-next-line no-control-regex -- control characters are exactly what is replaced
     .replace(/[<>:"/\\|?*\u0000-\u001f]/g, '-')
     .replace(/^[.\s]+/, '')
     .trim()
