@@ -1,6 +1,7 @@
 import { InputError } from '../core/errors';
 import { describeRange, requireInRange } from '../core/range';
 import { parseQuantity } from '../units/units';
+import { uniqueWarnings } from '../core/warning';
 import type { Profile } from '../profile/profile';
 import type { CalcArgs, CalcMethod, CalcOutput, ParamSpec } from './types';
 
@@ -95,7 +96,7 @@ export function runCalc(method: CalcMethod, raw: Record<string, RawArg | undefin
       );
     }
   }
-  out.warnings = [...new Set(out.warnings)];
+  out.warnings = uniqueWarnings(out.warnings);
   out.sources = [...new Set(out.sources)];
   return out;
 }

@@ -1,5 +1,7 @@
 import type { Profile } from '../profile/profile';
 import type { Range } from '../core/range';
+import type { Warning } from '../core/warning';
+import type { EstimateModel } from './model';
 
 /**
  * The calc contract shared by the CLI (`gprime calc`), the site file and the UI: a method declares its
@@ -46,6 +48,11 @@ export interface SeriesAxis {
  * vertical-section charts where y is a depth drawn downwards (profiles, mode shapes, plume paths).
  */
 export interface Series {
+  /**
+   * stable identifier of what the curve is (kebab-case, e.g. "plume-centreline", "withdrawal-outflow");
+   * views find curves by kind, never by title
+   */
+  kind: string;
   title: string;
   x: SeriesAxis;
   y: SeriesAxis[];
@@ -70,10 +77,17 @@ export function keyResultName(results: Record<string, ResultValue>): string | un
 
 export interface CalcOutput {
   results: Record<string, ResultValue>;
-  warnings: string[];
+  warnings: Warning[];
   sources: string[];
   /** curves for charts; not part of the CLI's JSON contract */
   series?: Series[];
+  /** the typed model result the views draw from (a jet's path, a release's withdrawal zones…) */
+  model?: EstimateModel;
+  /**
+   * set when the computation did not finish (an integration stopped at its step limit or on a failed
+   * step): the results are partial and the estimate is marked incomplete with this reason
+   */
+  incomplete?: string;
 }
 
 export type CalcArgValue = number | string | Profile;
@@ -87,6 +101,13 @@ export interface CalcMethod {
   params: readonly ParamSpec[];
   results: readonly ResultSpec[];
   run(args: CalcArgs): CalcOutput;
+  /**
+   * everyday argument ranges [SI] for the reliability net (test/core/calc/every-method.test.ts); a number
+   * parameter not named here is drawn in its hard range
+   */
+  everyday?: Readonly<Record<string, readonly [number, number]>>;
+  /** groups of parameters of which exactly one is given (e.g. ambient_density or file) */
+  oneOf?: readonly (readonly string[])[];
 }
 
 /** Typed accessors for resolved arguments (the resolver has validated kinds and ranges). */

@@ -1,5 +1,6 @@
 import { formatNumber } from './errors';
 import { inRange, type Range } from './range';
+import { outsideValidity, type Warning } from './warning';
 
 /** A calibrated or validated input range of a published method; outside it the result gets a warning. */
 export interface ValidityRange extends Range {
@@ -27,12 +28,12 @@ export interface Scalar {
   value: number;
   unit: string;
   method: string;
-  warnings: string[];
+  warnings: Warning[];
 }
 
 /** Warnings for every input outside the method's validity ranges. */
-export function validityWarnings(info: MethodInfo, inputs: Record<string, number>): string[] {
-  const out: string[] = [];
+export function validityWarnings(info: MethodInfo, inputs: Record<string, number>): Warning[] {
+  const out: Warning[] = [];
   for (const [name, range] of Object.entries(info.validity)) {
     const x = inputs[name];
     if (x === undefined || inRange(x, range)) continue;
@@ -40,9 +41,13 @@ export function validityWarnings(info: MethodInfo, inputs: Record<string, number
     const lo = range.min === undefined ? '−∞' : formatNumber(range.min);
     const hi = range.max === undefined ? '∞' : formatNumber(range.max);
     out.push(
-      `${name} = ${formatNumber(x)}${u} is outside the range ${lo} … ${hi}${u} of ${info.title}` +
-        (range.note ? ` (${range.note})` : '') +
-        '; the result is an extrapolation.',
+      outsideValidity(
+        'validity-range',
+        `${name} = ${formatNumber(x)}${u} is outside the range ${lo} … ${hi}${u} of ${info.title}` +
+          (range.note ? ` (${range.note})` : '') +
+          '; the result is an extrapolation.',
+        name,
+      ),
     );
   }
   return out;
@@ -54,7 +59,7 @@ export function scalar(
   value: number,
   unit: string,
   inputs: Record<string, number>,
-  extra: string[] = [],
+  extra: Warning[] = [],
 ): Scalar {
   return { value, unit, method: info.id, warnings: [...validityWarnings(info, inputs), ...extra] };
 }
