@@ -1,6 +1,7 @@
 import { GRAVITY } from '../quantities';
 import { positive, requireInRange } from '../core/range';
 import type { MethodInfo, Scalar } from '../core/method';
+import { caution, type Warning } from '../core/warning';
 
 export type DensityReference = 'lower' | 'upper' | 'mean';
 
@@ -25,11 +26,21 @@ export function reducedGravity(rhoUpper: number, rhoLower: number, reference: De
   const r2 = requireInRange('rho_lower', rhoLower, 'kg/m3', { min: 500, max: 3000 });
   const ref = reference === 'lower' ? r2 : reference === 'upper' ? r1 : (r1 + r2) / 2;
   const g = (GRAVITY * (r2 - r1)) / ref;
-  const warnings: string[] = [];
-  if (r2 < r1) warnings.push('rho_lower is less than rho_upper: the layering is unstable and g′ is negative.');
+  const warnings: Warning[] = [];
+  if (r2 < r1)
+    warnings.push(
+      caution(
+        'unstable-layering',
+        'rho_lower is less than rho_upper: the layering is unstable and g′ is negative.',
+        'rho_lower',
+      ),
+    );
   if (Math.abs(r2 - r1) / ref > 0.1) {
     warnings.push(
-      `Δρ/ρ = ${(Math.abs(r2 - r1) / ref).toFixed(3)} exceeds 0.1: the Boussinesq approximation does not hold; use methods that take the density ratio.`,
+      caution(
+        'non-boussinesq',
+        `Δρ/ρ = ${(Math.abs(r2 - r1) / ref).toFixed(3)} exceeds 0.1: the Boussinesq approximation does not hold; use methods that take the density ratio.`,
+      ),
     );
   }
   return { value: g, unit: 'm/s2', method: REDUCED_GRAVITY.id, warnings };
@@ -50,7 +61,16 @@ export function densimetricFroude(velocity: number, gPrime: number, length: numb
   const g = requireInRange('g_prime', gPrime, 'm/s2', { ...positive, max: 20 });
   const l = requireInRange('length', length, 'm', { ...positive, max: 1e6 });
   const fr = Math.abs(u) / Math.sqrt(g * l);
-  const warnings = fr < 1e-3 ? ['Fr < 0.001: the flow is dominated by buoyancy; check the velocity.'] : [];
+  const warnings =
+    fr < 1e-3
+      ? [
+          caution(
+            'buoyancy-dominated',
+            'Fr < 0.001: the flow is dominated by buoyancy; check the velocity.',
+            'velocity',
+          ),
+        ]
+      : [];
   return { value: fr, unit: '1', method: DENSIMETRIC_FROUDE.id, warnings };
 }
 

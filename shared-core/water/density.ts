@@ -1,6 +1,7 @@
 import { InputError } from '../core/errors';
 import { nonNegative, requireInRange } from '../core/range';
 import type { Scalar } from '../core/method';
+import { note } from '../core/warning';
 import { densityPureWaterTanaka2001, TANAKA_2001 } from './fresh-density';
 import { densitySeawaterEos80, EOS80 } from './eos80';
 import { densitySeawaterTeos10, TEOS10_75 } from './teos10';
@@ -52,7 +53,10 @@ export function waterDensity(state: WaterState): Scalar {
         'the fresh-water equation of state takes no salt; choose eos80 or teos10',
       );
     base = densityPureWaterTanaka2001(state.temperature);
-    if (pressure > 0) base.warnings.push('eos = fresh ignores pressure; the density is at 1 atm.');
+    if (pressure > 0)
+      base.warnings.push(
+        note('pressure-ignored', 'eos = fresh ignores pressure; the density is at 1 atm.', 'pressure'),
+      );
   } else if (eos === 'eos80') {
     base = densitySeawaterEos80(salinity, state.temperature, pressure);
   } else if (eos === 'teos10') {

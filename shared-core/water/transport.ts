@@ -1,5 +1,6 @@
 import { requireInRange } from '../core/range';
 import { scalar, type MethodInfo, type Scalar } from '../core/method';
+import { uniqueWarnings } from '../core/warning';
 import { densityPureWaterKell1975 } from './fresh-density';
 
 export const VISCOSITY_KESTIN_1978: MethodInfo = {
@@ -74,6 +75,6 @@ export function thermalDiffusivityWater(temperature: number): Scalar {
   const k = thermalConductivityRamires1995(temperature);
   const rho = densityPureWaterKell1975(temperature);
   const cp = specificHeatMillero1973(temperature);
-  const warnings = [...new Set([...k.warnings, ...cp.warnings])];
+  const warnings = uniqueWarnings([...k.warnings, ...cp.warnings]);
   return { value: k.value / (rho.value * cp.value), unit: 'm2/s', method: 'thermal-diffusivity', warnings };
 }

@@ -83,9 +83,21 @@ describe('water properties: invariants', () => {
   });
 
   it('warns outside the validated ranges instead of failing', () => {
-    expect(densityPureWaterTanaka2001(50).warnings.join(' ')).toMatch(/outside the range/);
-    expect(densitySeawaterEos80(45, 10).warnings.join(' ')).toMatch(/salinity/);
-    expect(reducedGravity(1000, 1200).warnings.join(' ')).toMatch(/Boussinesq/);
+    expect(densityPureWaterTanaka2001(50).warnings).toMatchObject([
+      { code: 'validity-range', severity: 'outside-validity', input: 'temperature' },
+    ]);
+    expect(densitySeawaterEos80(45, 10).warnings).toMatchObject([{ code: 'validity-range', input: 'salinity' }]);
+    expect(reducedGravity(1000, 1200).warnings).toMatchObject([{ code: 'non-boussinesq', severity: 'caution' }]);
+    expect(reducedGravity(1000, 1200).warnings[0].message).toMatch(/Boussinesq/);
+  });
+
+  it('names the input of a structured warning', () => {
+    expect(reducedGravity(1010, 1000).warnings.map((w) => [w.code, w.input])).toEqual([
+      ['unstable-layering', 'rho_lower'],
+    ]);
+    expect(waterDensity({ temperature: 10, pressure: 100, eos: 'fresh' }).warnings).toMatchObject([
+      { code: 'pressure-ignored', severity: 'note', input: 'pressure' },
+    ]);
   });
 });
 
