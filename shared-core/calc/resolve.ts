@@ -1,4 +1,4 @@
-import { InputError } from '../core/errors';
+import { ComputationError, InputError } from '../core/errors';
 import { describeRange, requireInRange } from '../core/range';
 import { parseQuantity } from '../units/units';
 import { uniqueWarnings } from '../core/warning';
@@ -82,18 +82,21 @@ function resolveOne(spec: ParamSpec, value: RawArg): CalcArgs[string] {
   }
 }
 
-/** Runs a method on raw arguments and guarantees that no NaN or Infinity leaves it. */
+/**
+ * Runs a method on raw arguments and guarantees that no NaN or Infinity leaves it: a non-finite result or
+ * chart value is a ComputationError (an internal failure, not bad input).
+ */
 export function runCalc(method: CalcMethod, raw: Record<string, RawArg | undefined>): CalcOutput {
   const out = method.run(resolveArgs(method, raw));
   for (const [name, r] of Object.entries(out.results)) {
     if (typeof r.value === 'number' && !Number.isFinite(r.value)) {
-      throw new InputError(
-        name,
-        r.value,
-        r.unit,
-        'a finite result',
-        `the computation of ${name} did not give a finite number for these inputs`,
-      );
+      throw new ComputationError(`${method.id}: the result ${name} is not a finite number (${r.value})`);
+    }
+  }
+  for (const s of out.series ?? []) {
+    for (const axis of [s.x, ...s.y]) {
+      if (axis.values.some((v) => !Number.isFinite(v)))
+        throw new ComputationError(`${method.id}: the chart series “${s.title}” holds a non-finite ${axis.label}`);
     }
   }
   out.warnings = uniqueWarnings(out.warnings);

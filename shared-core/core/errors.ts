@@ -29,3 +29,14 @@ export function formatNumber(x: number): string {
 export function formatShort(x: number): string {
   return Number.isFinite(x) ? formatNumber(Number(x.toPrecision(4))) : String(x);
 }
+
+/**
+ * A computation that failed inside a method although its inputs were valid (a root not bracketed, a
+ * non-finite result, an eigen-solver that did not converge): an internal error, never reported as bad input.
+ */
+export class ComputationError extends Error {
+  constructor(message: string) {
+    super(message);
+    this.name = 'ComputationError';
+  }
+}

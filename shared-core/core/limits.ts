@@ -7,7 +7,7 @@ export const LIMITS = {
   /** ports of one intake (the release blend grows linearly with them) */
   intakePorts: 200,
   /** ports of one outfall diffuser */
-  diffuserPorts: 2000,
+  diffuserPorts: 500,
   /** Monte Carlo draws of one uncertainty band */
   monteCarloDraws: 100_000,
   /** rows of one measured profile */

@@ -1,6 +1,7 @@
 import type { Assessment, ComplianceRow, EstimateOutcome } from '../site/assess';
 import { keyResultName, type ResultValue } from '../calc/types';
 import { findCalcMethod } from '../calc/registry';
+import { asWarning } from '../core/warning';
 import { toDisplay, type UnitSystem } from '../units/units';
 import { chartSpecs, type ChartSpec } from './charts';
 import { formatValue, prettyUnit, readableName } from './format';
@@ -40,7 +41,8 @@ export interface EstimateSection {
   methodTitle: string;
   feature?: string;
   condition?: string;
-  status: 'ok' | 'error';
+  status: 'ok' | 'incomplete' | 'error';
+  /** why it was not computed (error) or stopped early (incomplete) */
   error?: string;
   inputs: QuantityRow[];
   results: QuantityRow[];
@@ -87,7 +89,14 @@ export interface ReportModel {
   titleBlock: { label: string; value: string }[];
   contents: ContentsEntry[];
   /** one line per estimate: id, method, key result, number of warnings */
-  summary: { id: string; title: string; where: string; keyResult: string; warnings: number; status: 'ok' | 'error' }[];
+  summary: {
+    id: string;
+    title: string;
+    where: string;
+    keyResult: string;
+    warnings: number;
+    status: 'ok' | 'incomplete' | 'error';
+  }[];
   estimates: EstimateSection[];
   compliance: ComplianceTable | null;
   /** every cited source, once, in order of first citation */
@@ -156,7 +165,7 @@ function uncertaintySection(e: EstimateOutcome, units: UnitSystem): UncertaintyS
         values,
       };
     }),
-    warnings: [...r.warnings],
+    warnings: r.warnings.map((w) => asWarning(w).message),
   };
 }
 
@@ -181,11 +190,11 @@ function section(e: EstimateOutcome, number: string, units: UnitSystem): Estimat
     feature: e.feature?.name,
     condition: e.condition?.name,
     status: e.status,
-    error: e.error,
+    error: e.error ?? e.incomplete,
     inputs: quantities(e.inputs, paramText, units),
     results: quantities(e.results, resultText, units),
     methods: methodTexts(e.sources),
-    warnings: [...e.warnings],
+    warnings: e.warnings.map((w) => w.message),
     charts: chartSpecs(e.series, units, e.id),
     ...(e.uncertainty ? { uncertainty: uncertaintySection(e, units) } : {}),
   };
@@ -193,6 +202,7 @@ function section(e: EstimateOutcome, number: string, units: UnitSystem): Estimat
 
 function keyResult(s: EstimateSection, results: Record<string, ResultValue>): string {
   if (s.status === 'error') return `not computed: ${s.error ?? 'error'}`;
+  if (s.status === 'incomplete') return `incomplete: ${s.error ?? ''}`;
   const key = keyResultName(results);
   const r = s.results.find((q) => q.name === key);
   if (!r) return '';

@@ -1,33 +1,47 @@
 import { findCalcMethod } from '../calc/registry';
 import { resolveArgs, runCalc, type RawArg } from '../calc/resolve';
+import type { EstimateModel } from '../calc/model';
 import type { CalcMethod, ResultValue, Series } from '../calc/types';
-import { InputError } from '../core/errors';
+import { ComputationError, InputError } from '../core/errors';
 import { SCREENING_CAUTION } from '../core/caution';
+import { asWarning, uniqueWarnings, type Warning } from '../core/warning';
 import { ProfileError } from '../profile/profile';
 import { boundArgs } from './bindings';
-import { makeContext } from './context';
+import { makeContext, ProfileCache, type EstimateContext } from './context';
 import type { Estimate, Site } from './schema';
-import { siteCompliance } from './compliance';
+import { complianceEstimates, siteCompliance } from './compliance';
+import { assessConditions, type ConditionOutcome } from './conditions';
 import { bandsFromTyped, MONTE_CARLO_JCGM101, type UncertaintyResult } from '../uncertainty';
 
+/**
+ * The outcome of one estimate: what every view (cards, section, detail charts, compliance, report,
+ * CSV/XLSX, bands) reads. `ok`: computed; `incomplete`: the computation stopped early (an integration at its
+ * step limit or on a failed step), results are partial; `error`: not computed, `error` says why.
+ */
 export interface EstimateOutcome {
   id: string;
   method: string;
   title: string;
   feature?: { id: string; name: string; kind: string };
   condition?: { id: string; name: string };
-  status: 'ok' | 'error';
+  status: 'ok' | 'incomplete' | 'error';
   /** the arguments the method ran with, in SI */
   inputs: Record<string, ResultValue>;
   results: Record<string, ResultValue>;
-  warnings: string[];
+  warnings: Warning[];
   sources: string[];
   /** curves for charts, when the method provides them */
   series: Series[];
+  /** the typed model result (a jet's path, a release's withdrawal zones…), when the method has one */
+  model?: EstimateModel;
   /** why the estimate could not be computed (status 'error') */
   error?: string;
+  /** why the computation stopped early (status 'incomplete') */
+  incomplete?: string;
   /** uncertainty bands of the results, when the estimate states input uncertainties */
   uncertainty?: UncertaintyResult;
+  /** added by the assessment (not in the site file): the near-field run a compliance row needs */
+  added?: boolean;
 }
 
 /** One row of the mixing-zone compliance table: a constituent of an outfall under one condition. */
@@ -44,6 +58,8 @@ export interface ComplianceRow {
   margin: number | null;
   verdict: 'meets' | 'does not meet' | 'cannot tell';
   note: string;
+  /** the id of the estimate whose outcome gave the achieved dilution */
+  estimate?: string;
 }
 
 export interface Assessment {
@@ -55,6 +71,8 @@ export interface Assessment {
   siteHash: string;
   units: Site['units'];
   caution: string;
+  /** how each condition's profile reads */
+  conditions: ConditionOutcome[];
   estimates: EstimateOutcome[];
   /** mixing-zone compliance per outfall, condition and constituent */
   compliance: ComplianceRow[];
@@ -77,13 +95,45 @@ function describeInputs(
   return out;
 }
 
-/** Runs one estimate of a site; a bad input gives status 'error' with the reason, never an exception. */
 /** `bands: false` skips the Monte Carlo bands (the live workspace computes them apart, off the main thread). */
 export interface AssessOptions {
   bands?: boolean;
 }
 
-export function runEstimate(site: Site, e: Estimate, index: number, options: AssessOptions = {}): EstimateOutcome {
+/** The message of an error raised inside one estimate; an unexpected one is named as an internal error. */
+function failureMessage(err: unknown, method: string): string {
+  if (err instanceof InputError || err instanceof ProfileError) return err.message;
+  if (err instanceof ComputationError) return `${method} could not compute a result: ${err.message}`;
+  const text = err instanceof Error ? err.message : String(err);
+  return `internal error in ${method} (please report it): ${text}`;
+}
+
+/** The bound and typed arguments of an estimate, before defaults and range checks. */
+export function estimateArgs(method: CalcMethod, ctx: EstimateContext, e: Estimate): Record<string, RawArg> {
+  const known = new Set(method.params.map((p) => p.name));
+  const bound = Object.fromEntries(Object.entries(boundArgs(method.id, ctx)).filter(([k]) => known.has(k)));
+  return { ...bound, ...e.params } as Record<string, RawArg>;
+}
+
+/** Where an estimate's condition profile failed: the condition named, then the reader's message. */
+function conditionFailure(site: Site, conditionId: string | undefined, err: unknown): string {
+  const i = conditionId ? site.conditions.findIndex((c) => c.id === conditionId) : 0;
+  const c = site.conditions[i];
+  const message = err instanceof Error ? err.message : String(err);
+  return c ? `conditions[${i}] (“${c.name}”) profile: ${message}` : message;
+}
+
+/**
+ * Runs one estimate of a site. Never throws: a bad input, a profile that cannot be read or a failure
+ * inside the method marks this estimate only ('error', with the reason naming the site field).
+ */
+export function runEstimate(
+  site: Site,
+  e: Estimate,
+  index: number,
+  options: AssessOptions = {},
+  cache = new ProfileCache(),
+): EstimateOutcome {
   const method = findCalcMethod(e.method);
   const base = {
     id: e.id,
@@ -91,43 +141,61 @@ export function runEstimate(site: Site, e: Estimate, index: number, options: Ass
     title: e.title ?? method?.title ?? e.method,
     inputs: {},
     results: {},
-    warnings: [] as string[],
+    warnings: [] as Warning[],
     sources: [] as string[],
     series: [] as Series[],
   };
-  const ctx = makeContext(site, e.condition, e.feature);
-  const feature = ctx.feature && { id: ctx.feature.id, name: ctx.feature.name, kind: ctx.feature.kind };
-  const condition = ctx.condition && { id: ctx.condition.id, name: ctx.condition.name };
-  const fail = (error: string): EstimateOutcome => ({ ...base, feature, condition, status: 'error', error });
+  // as makeContext: an estimate without a condition sees the first one
+  const condition = e.condition ? site.conditions.find((c) => c.id === e.condition) : site.conditions[0];
+  const found = site.features.find((f) => f.id === e.feature);
+  const where = {
+    ...(found ? { feature: { id: found.id, name: found.name, kind: found.kind } } : {}),
+    ...(condition ? { condition: { id: condition.id, name: condition.name } } : {}),
+  };
+  const fail = (error: string): EstimateOutcome => ({ ...base, ...where, status: 'error', error });
   if (!method) return fail(`estimates[${index}].method: "${e.method}" is not a gprime method (see gprime calc --list)`);
-  if (e.feature && !ctx.feature) return fail(`estimates[${index}].feature: no feature with id "${e.feature}"`);
-  if (e.condition && !ctx.condition)
-    return fail(`estimates[${index}].condition: no condition with id "${e.condition}"`);
+  if (e.feature && !found) return fail(`estimates[${index}].feature: no feature with id "${e.feature}"`);
+  if (e.condition && !condition) return fail(`estimates[${index}].condition: no condition with id "${e.condition}"`);
+  let ctx: EstimateContext;
   try {
-    const known = new Set(method.params.map((p) => p.name));
-    const bound = Object.fromEntries(Object.entries(boundArgs(method.id, ctx)).filter(([k]) => known.has(k)));
-    const raw: Record<string, RawArg> = { ...bound, ...e.params };
+    ctx = makeContext(site, e.condition, e.feature, cache);
+  } catch (err) {
+    return fail(conditionFailure(site, e.condition, err));
+  }
+  try {
+    const raw = estimateArgs(method, ctx, e);
     const out = runCalc(method, raw);
     const inputs = describeInputs(method, resolveArgs(method, raw), ctx.condition?.name);
-    const warnings = [...(ctx.profile?.warnings ?? []), ...out.warnings];
+    const warnings = uniqueWarnings([...(ctx.profile?.warnings ?? []).map(asWarning), ...out.warnings]);
     const wantsBand = options.bands !== false && e.uncertainty && Object.keys(e.uncertainty).length > 0;
     const uncertainty = wantsBand ? bandsFromTyped(method, raw, e.uncertainty!) : undefined;
     return {
       ...base,
-      feature,
-      condition,
-      status: 'ok',
+      ...where,
+      status: out.incomplete ? 'incomplete' : 'ok',
+      ...(out.incomplete ? { incomplete: out.incomplete } : {}),
       inputs,
       results: out.results,
-      warnings: [...new Set(warnings)],
-      sources: out.sources,
+      warnings,
+      sources: uncertainty ? [...out.sources, MONTE_CARLO_JCGM101.source] : out.sources,
       series: out.series ?? [],
-      ...(uncertainty ? { uncertainty, sources: [...out.sources, MONTE_CARLO_JCGM101.source] } : {}),
+      ...(out.model ? { model: out.model } : {}),
+      ...(uncertainty ? { uncertainty } : {}),
     };
   } catch (err) {
-    if (err instanceof InputError || err instanceof ProfileError) return fail(err.message);
-    throw err;
+    return fail(failureMessage(err, method.id));
   }
+}
+
+/** The estimates of a site plus the near-field runs its compliance table needs and the site lacks. */
+export function assessedEstimates(site: Site): { estimate: Estimate; index: number; added: boolean }[] {
+  const own = site.estimates.map((estimate, index) => ({ estimate, index, added: false }));
+  const extra = complianceEstimates(site).map((estimate, k) => ({
+    estimate,
+    index: site.estimates.length + k,
+    added: true,
+  }));
+  return [...own, ...extra];
 }
 
 /** Evaluates every estimate of a site. Deterministic: the same site gives the same numbers. */
@@ -135,7 +203,13 @@ export function assessSite(
   site: Site,
   meta: { gprimeVersion: string; siteHash: string },
   options: AssessOptions = {},
+  cache = new ProfileCache(),
+  run: (e: Estimate, index: number) => EstimateOutcome = (e, index) => runEstimate(site, e, index, options, cache),
 ): Assessment {
+  const estimates = assessedEstimates(site).map(({ estimate, index, added }) => {
+    const o = run(estimate, index);
+    return added ? { ...o, added: true } : o;
+  });
   return {
     format: 'gprime-assessment',
     project: site.project,
@@ -144,7 +218,8 @@ export function assessSite(
     siteHash: meta.siteHash,
     units: site.units,
     caution: SCREENING_CAUTION,
-    estimates: site.estimates.map((e, i) => runEstimate(site, e, i, options)),
-    compliance: siteCompliance(site),
+    conditions: assessConditions(site, cache),
+    estimates,
+    compliance: siteCompliance(site, estimates),
   };
 }

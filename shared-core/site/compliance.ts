@@ -1,52 +1,108 @@
-import { findCalcMethod } from '../calc/registry';
-import { resolveArgs } from '../calc/resolve';
+import type { EstimateModel } from '../calc/model';
 import { InputError } from '../core/errors';
-import { ProfileError } from '../profile/profile';
-import { buoyantJetTrajectory } from '../jets/buoyant-jet';
-import { buoyantJetInputFromArgs, diffuserInputFromArgs } from '../jets/calc';
-import { diffuserPlume } from '../jets/diffuser';
 import { dilutionAtBoundary, type BoundaryDilution, type MixingZoneBoundary } from '../mixing-zone/boundary';
 import { complianceTable } from '../mixing-zone/compliance';
-import { boundArgs } from './bindings';
-import { makeContext, si } from './context';
-import type { ComplianceRow } from './assess';
-import type { Site } from './schema';
+import { si } from './context';
+import type { ComplianceRow, EstimateOutcome } from './assess';
+import type { Estimate, Outfall, Site } from './schema';
+
+/** The near-field method that gives an outfall's dilution: the merged-diffuser model for several ports. */
+const nearFieldMethod = (o: Outfall) => (o.ports > 1 ? 'diffuser-plume' : 'buoyant-jet');
+
+const outfallsWithConstituents = (site: Site) =>
+  site.features.flatMap((f, index) => (f.kind === 'outfall' && f.constituents.length > 0 ? [{ f, index }] : []));
+
+/** The estimate of the site that gives an outfall's near-field dilution under a condition (the first one). */
+function ownNearField(site: Site, o: Outfall, conditionId: string): Estimate | undefined {
+  const first = site.conditions[0]?.id;
+  return site.estimates.find(
+    (e) => e.method === nearFieldMethod(o) && e.feature === o.id && (e.condition ?? first) === conditionId,
+  );
+}
 
 /**
- * Mixing-zone compliance of every outfall with constituents, under every ambient condition: the buoyant-jet
- * model (feature + condition bindings) gives the centreline dilution at the mixing-zone boundary, measured
- * horizontally from the port; complianceTable() compares it with each constituent's required dilution.
- * An outfall with several ports uses the merged-diffuser model (diffuser-plume): the smaller of the merged and the
- * single-port dilutions at the boundary; without a port spacing it cannot tell.
- * A condition the model cannot run for gives 'cannot tell' rows with the reason.
+ * The near-field estimates the compliance table needs and the site lacks: one per outfall with constituents
+ * and condition, with the outfall's and condition's bound inputs only. They are part of the assessment's
+ * outcomes (marked `added`), so every view shows the run behind a verdict.
  */
-export function siteCompliance(site: Site): ComplianceRow[] {
-  const method = findCalcMethod('buoyant-jet'),
-    diffuser = findCalcMethod('diffuser-plume');
-  if (!method || !diffuser) return [];
+export function complianceEstimates(site: Site): Estimate[] {
+  const out: Estimate[] = [];
+  for (const { f } of outfallsWithConstituents(site)) {
+    if (f.kind !== 'outfall') continue;
+    for (const c of site.conditions) {
+      if (ownNearField(site, f, c.id)) continue;
+      out.push({
+        id: `${f.id}--${c.id}--near-field`,
+        method: nearFieldMethod(f),
+        feature: f.id,
+        condition: c.id,
+        title: `Near-field dilution of ${f.name} (${c.name}), for compliance`,
+        params: {},
+      } as Estimate);
+    }
+  }
+  return out;
+}
+
+/** The centreline dilution at the boundary from a computed jet or diffuser model, and which run gave it. */
+function boundaryDilution(
+  model: EstimateModel | undefined,
+  edge: MixingZoneBoundary,
+  ports: number,
+): { at: BoundaryDilution; model: string } | undefined {
+  if (model?.kind === 'jet') return { at: dilutionAtBoundary(model.trajectory, edge), model: '' };
+  if (model?.kind !== 'diffuser') return undefined;
+  const d = model.diffuser;
+  const [merged, single] = [dilutionAtBoundary(d.merged, edge), dilutionAtBoundary(d.isolated, edge)];
+  const useMerged = merged.dilutionCentreline <= single.dilutionCentreline;
+  const which = useMerged && d.merge ? 'merged plumes' : 'single-port plume';
+  return {
+    at: useMerged ? merged : single,
+    model: `${ports} ports, ${which} (the smaller dilution); `,
+  };
+}
+
+/**
+ * Mixing-zone compliance of every outfall with constituents, under every ambient condition, read from the
+ * assessment's own near-field outcomes (the estimate the user sees, with its own parameters, or the one the
+ * assessment added): the centreline dilution at the mixing-zone boundary, measured horizontally from the port,
+ * against each constituent's required dilution (complianceTable). An estimate that did not compute gives
+ * 'cannot tell' rows with its reason.
+ */
+export function siteCompliance(site: Site, outcomes: readonly EstimateOutcome[]): ComplianceRow[] {
   const rows: ComplianceRow[] = [];
-  site.features.forEach((feature, index) => {
-    if (feature.kind !== 'outfall' || feature.constituents.length === 0) return;
+  for (const { f, index } of outfallsWithConstituents(site)) {
+    if (f.kind !== 'outfall') continue;
     for (const condition of site.conditions) {
-      const base = { feature: feature.name, condition: condition.name };
+      const base = { feature: f.name, condition: condition.name };
+      const estimate = ownNearField(site, f, condition.id)?.id ?? `${f.id}--${condition.id}--near-field`;
+      const outcome = outcomes.find((o) => o.id === estimate);
+      const cannotTell = (note: string) =>
+        f.constituents.map((c) => ({
+          ...base,
+          constituent: c.name,
+          unit: c.unit,
+          requiredDilution: null,
+          achievedDilution: null,
+          margin: null,
+          verdict: 'cannot tell' as const,
+          note,
+          estimate,
+        }));
+      if (!outcome || outcome.status === 'error') {
+        rows.push(...cannotTell(`the near-field estimate ${estimate} did not compute: ${outcome?.error ?? 'missing'}`));
+        continue;
+      }
       try {
-        const ctx = makeContext(site, condition.id, feature.id);
-        const distance = si(`features[${index}].mixingZone.distance`, feature.mixingZone.distance, 'm');
-        const edge: MixingZoneBoundary = { distance, measure: 'horizontal' };
-        let boundary: BoundaryDilution;
-        let model = '';
-        if (feature.ports > 1) {
-          const d = diffuserPlume(diffuserInputFromArgs(resolveArgs(diffuser, boundArgs(diffuser.id, ctx))));
-          const [a, b] = [dilutionAtBoundary(d.merged, edge), dilutionAtBoundary(d.isolated, edge)];
-          boundary = a.dilutionCentreline <= b.dilutionCentreline ? a : b;
-          model = `${feature.ports} ports, ${boundary === a && d.merge ? 'merged plumes' : 'single-port plume'} (the smaller dilution); `;
-        } else {
-          boundary = dilutionAtBoundary(
-            buoyantJetTrajectory(buoyantJetInputFromArgs(resolveArgs(method, boundArgs(method.id, ctx)))),
-            edge,
-          );
+        const distance = si(`features[${index}].mixingZone.distance`, f.mixingZone.distance, 'm');
+        const found = boundaryDilution(outcome.model, { distance, measure: 'horizontal' }, f.ports);
+        if (!found) {
+          rows.push(...cannotTell(`the estimate ${estimate} holds no near-field path`));
+          continue;
         }
-        const table = complianceTable([{ name: condition.name, dilution: boundary }], feature.constituents);
+        const partial =
+          outcome.status === 'incomplete' ? `the near-field run is incomplete (${outcome.incomplete}); ` : '';
+        const table = complianceTable([{ name: condition.name, dilution: found.at }], f.constituents);
         for (const r of table.rows) {
           rows.push({
             ...base,
@@ -55,26 +111,16 @@ export function siteCompliance(site: Site): ComplianceRow[] {
             requiredDilution: r.requiredDilution ?? null,
             achievedDilution: r.achievedDilution,
             margin: r.margin ?? null,
-            verdict: r.verdict,
-            note: model + r.note,
+            verdict: outcome.status === 'incomplete' ? 'cannot tell' : r.verdict,
+            note: partial + found.model + r.note,
+            estimate,
           });
         }
       } catch (e) {
-        if (!(e instanceof InputError || e instanceof ProfileError)) throw e;
-        for (const c of feature.constituents) {
-          rows.push({
-            ...base,
-            constituent: c.name,
-            unit: c.unit,
-            requiredDilution: null,
-            achievedDilution: null,
-            margin: null,
-            verdict: 'cannot tell',
-            note: e.message,
-          });
-        }
+        if (!(e instanceof InputError)) throw e;
+        rows.push(...cannotTell(e.message));
       }
     }
-  });
+  }
   return rows;
 }

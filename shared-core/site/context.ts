@@ -25,15 +25,54 @@ export interface EstimateContext {
   featureIndex: number;
 }
 
-/** Reads a condition's profile (memoised per condition object). */
-const profileCache = new WeakMap<Condition, Profile>();
-export function conditionProfile(c: Condition): Profile {
-  let p = profileCache.get(c);
-  if (!p) {
-    p = profileFromTable(c.profile, { eos: c.eos });
-    profileCache.set(c, p);
+/** A condition's profile as read, with its two-layer fit, or why it could not be read. */
+type ReadProfile = { profile: Profile; fit: TwoLayerFit } | { error: unknown };
+
+/**
+ * Profiles read once per distinct table: the key is the table's content, so an edited copy of a site (or
+ * one that crossed to a worker) finds the profiles of unchanged conditions already read.
+ */
+export class ProfileCache {
+  private byContent = new Map<string, ReadProfile>();
+  private keys = new WeakMap<object, string>();
+
+  /** a key of the condition's profile table and equation of state (content, not identity) */
+  key(c: Condition): string {
+    let k = this.keys.get(c.profile);
+    if (k === undefined) {
+      k = JSON.stringify(c.profile);
+      this.keys.set(c.profile, k);
+    }
+    return `${c.eos ?? ''}|${k}`;
   }
-  return p;
+
+  read(c: Condition): ReadProfile {
+    const key = this.key(c);
+    let r = this.byContent.get(key);
+    if (!r) {
+      try {
+        const profile = profileFromTable(c.profile, { eos: c.eos });
+        r = { profile, fit: twoLayerFit(profile) };
+      } catch (error) {
+        r = { error };
+      }
+      this.byContent.set(key, r);
+    }
+    return r;
+  }
+
+  /** forgets profiles no longer in the site */
+  keepOnly(site: Site): void {
+    const live = new Set(site.conditions.map((c) => this.key(c)));
+    for (const k of this.byContent.keys()) if (!live.has(k)) this.byContent.delete(k);
+  }
+}
+
+/** Reads a condition's profile (throws the reader's ProfileError). */
+export function conditionProfile(c: Condition, cache = new ProfileCache()): Profile {
+  const r = cache.read(c);
+  if ('error' in r) throw r.error;
+  return r.profile;
 }
 
 /** Buoyancy frequency N [1/s] at a depth from the profile's N² (negative N² counts as 0). */
@@ -53,17 +92,19 @@ export function makeContext(
   site: Site,
   conditionId: string | undefined,
   featureId: string | undefined,
+  cache = new ProfileCache(),
 ): EstimateContext {
   const conditionIndex = conditionId ? site.conditions.findIndex((c) => c.id === conditionId) : 0;
   const featureIndex = featureId ? site.features.findIndex((f) => f.id === featureId) : -1;
   const condition = conditionIndex >= 0 ? site.conditions[conditionIndex] : undefined;
-  const profile = condition ? conditionProfile(condition) : undefined;
+  const read = condition ? cache.read(condition) : undefined;
+  if (read && 'error' in read) throw read.error;
   return {
     site,
     condition,
     conditionIndex,
-    profile,
-    fit: profile ? twoLayerFit(profile) : undefined,
+    profile: read?.profile,
+    fit: read?.fit,
     feature: featureIndex >= 0 ? site.features[featureIndex] : undefined,
     featureIndex,
   };

@@ -3,3 +3,9 @@ export * from './load';
 export * from './assess';
 export * from './context';
 export { boundArgs } from './bindings';
+export { SiteAssessor } from './incremental';
+export { complianceEstimates, siteCompliance } from './compliance';
+export type { ConditionOutcome } from './conditions';
+// reading a profile table as the document holds it (the workspace's CSV import)
+export { parseHeader, readCsvTable, type ProfileTable } from '../profile/csv';
+export type { ProfileIssue } from '../profile/profile';

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { LIMITS } from '../core/limits';
 
 /**
  * The gprime site document (our own format, file extension .gpsite, JSON). A quantity is either a number
@@ -18,7 +19,9 @@ export type QuantityInput = z.infer<typeof quantitySchema>;
 
 export const profileTableSchema = z.object({
   columns: z.array(z.string().min(1)).min(2),
-  rows: z.array(z.array(z.union([z.number().finite(), z.string(), z.null()]))),
+  rows: z
+    .array(z.array(z.union([z.number().finite(), z.string(), z.null()])))
+    .max(LIMITS.profileRows, `a profile holds at most ${LIMITS.profileRows} rows`),
 });
 
 export const conditionSchema = z.object({
@@ -39,7 +42,7 @@ export const intakeSchema = z.object({
   id,
   kind: z.literal('intake'),
   name,
-  ports: z.array(portSchema).min(1),
+  ports: z.array(portSchema).min(1).max(LIMITS.intakePorts, `an intake has at most ${LIMITS.intakePorts} ports`),
   /** total planned release [m3/s] */
   release: quantitySchema,
   targetTemperature: quantitySchema.optional(),
@@ -68,7 +71,12 @@ export const outfallSchema = z.object({
   discharge: quantitySchema,
   /** vertical angle above horizontal [deg] */
   angle: quantitySchema,
-  ports: z.number().int().min(1).max(500).default(1),
+  ports: z
+    .number()
+    .int()
+    .min(1)
+    .max(LIMITS.diffuserPorts, `a diffuser has at most ${LIMITS.diffuserPorts} ports`)
+    .default(1),
   /** port spacing along a multiport diffuser [m] */
   spacing: quantitySchema.optional(),
   effluent: z.object({

@@ -1,12 +1,15 @@
-import { parseHeader, profileFromTable, readCsvTable, type ProfileTable } from '../../../shared-core/profile/csv';
-import { ProfileError, type Profile, type ProfileIssue } from '../../../shared-core/profile/profile';
-import type { EquationOfState } from '../../../shared-core/water/density';
+import {
+  parseHeader,
+  readCsvTable,
+  type ConditionOutcome,
+  type ProfileIssue,
+  type ProfileTable,
+} from '../../../shared-core/site';
 
 export type Cell = string | number | null;
 
-/** Reading of a profile table: the profile when it is sound, and every problem placed at its row and column. */
+/** The problems of a profile table (from the assessment's reading of it), each placed at its row and column. */
 export interface TableCheck {
-  profile?: Profile;
   issues: ProfileIssue[];
   /** "row:col" (0-based data row, column index) → message */
   cells: Map<string, string>;
@@ -31,22 +34,19 @@ function columnIndex(columns: string[], name: string): number {
   return re ? names.findIndex((n) => re.test(n.replace(/[\s.-]+/g, '_'))) : -1;
 }
 
-export function checkTable(table: ProfileTable, eos?: EquationOfState): TableCheck {
+export function checkTable(table: ProfileTable, reading: ConditionOutcome | undefined): TableCheck {
   const out: TableCheck = { issues: [], cells: new Map(), columns: new Map(), other: [] };
-  try {
-    out.profile = profileFromTable(table, { eos });
-  } catch (e) {
-    if (!(e instanceof ProfileError)) {
-      out.other.push(String(e instanceof Error ? e.message : e));
-      return out;
-    }
-    out.issues = e.issues;
-    for (const i of e.issues) {
-      const c = columnIndex(table.columns, i.column);
-      if (i.row > 0 && c >= 0) out.cells.set(`${i.row - 1}:${c}`, i.message);
-      else if (c >= 0) out.columns.set(c, i.message);
-      else out.other.push(i.row > 0 ? `row ${i.row}: ${i.message}` : i.message);
-    }
+  if (!reading || reading.status === 'ok') return out;
+  if (reading.issues.length === 0) {
+    out.other.push(reading.error ?? 'the profile cannot be read');
+    return out;
+  }
+  out.issues = reading.issues;
+  for (const i of reading.issues) {
+    const c = columnIndex(table.columns, i.column);
+    if (i.row > 0 && c >= 0) out.cells.set(`${i.row - 1}:${c}`, i.message);
+    else if (c >= 0) out.columns.set(c, i.message);
+    else out.other.push(i.row > 0 ? `row ${i.row}: ${i.message}` : i.message);
   }
   return out;
 }

@@ -36,6 +36,7 @@ export function resultsTableText(
     ...rows(o.results, system),
   ];
   if (o.status === 'error') lines.push(['cannot compute', cell(o.error ?? '')].join('\t'));
+  if (o.status === 'incomplete') lines.push(['incomplete', cell(o.incomplete ?? '')].join('\t'));
   lines.push('', ['input', 'value', 'unit'].join('\t'), ...rows(o.inputs, system), '');
   if (band)
     lines.push(
@@ -43,7 +44,7 @@ export function resultsTableText(
       ['band note', BAND_NOTE].join('\t'),
       '',
     );
-  lines.push(...o.warnings.map((w) => ['warning', cell(w)].join('\t')));
+  lines.push(...o.warnings.map((w) => ['warning', cell(w.message)].join('\t')));
   lines.push(['method', cell(methodTitle ? `${o.method}: ${methodTitle}` : o.method)].join('\t'));
   lines.push(...o.sources.map((s) => ['source', cell(s)].join('\t')));
   lines.push(['caution', SCREENING_CAUTION].join('\t'));

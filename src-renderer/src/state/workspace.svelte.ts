@@ -1,17 +1,9 @@
-import {
-  assessSite,
-  runEstimate,
-  loadSite,
-  SiteFileError,
-  type Assessment,
-  type EstimateOutcome,
-  type Site,
-} from '../../../shared-core/site';
-import { SCREENING_CAUTION } from '../../../shared-core/core/caution';
+import { loadSite, SiteFileError, type Assessment } from '../../../shared-core/site';
 import type { UnitSystem } from '../../../shared-core/units/units';
 import { drawEstimate, type EstimateDrawing } from '../lib/estimate-curves';
 import { SiteDocument } from './document.svelte';
 import { BandStore } from './bands.svelte';
+import { AssessmentStore, emptyAssessment } from './assessment.svelte';
 
 export type Selection =
   | { kind: 'project' }
@@ -23,43 +15,6 @@ export type Selection =
 export interface Notice {
   tone: 'info' | 'error';
   text: string;
-}
-
-/** Runs every estimate; an unexpected failure of one estimate never hides the others. */
-function assess(site: Site): Assessment {
-  try {
-    return assessSite(site, { gprimeVersion: 'workspace', siteHash: '' }, { bands: false });
-  } catch {
-    const estimates: EstimateOutcome[] = site.estimates.map((e, i) => {
-      try {
-        return runEstimate(site, e, i, { bands: false });
-      } catch (err) {
-        return {
-          id: e.id,
-          method: e.method,
-          title: e.title ?? e.method,
-          status: 'error',
-          inputs: {},
-          results: {},
-          warnings: [],
-          sources: [],
-          series: [],
-          error: `could not be computed (${String(err)})`,
-        };
-      }
-    });
-    return {
-      format: 'gprime-assessment',
-      project: site.project,
-      waterBody: site.waterBody.name,
-      gprimeVersion: 'workspace',
-      siteHash: '',
-      units: site.units,
-      caution: SCREENING_CAUTION,
-      estimates,
-      compliance: [],
-    };
-  }
 }
 
 /** The workspace: the open document, what is selected, the condition shown, and the live assessment. */
@@ -80,10 +35,14 @@ export class Workspace {
     return this.conditionChoice && ids.includes(this.conditionChoice) ? this.conditionChoice : ids[0];
   });
   condition = $derived(this.doc.site.conditions.find((c) => c.id === this.conditionId));
-  assessment = $derived(assess(this.doc.site));
+  /** the live assessment, computed in a worker; views read only this */
+  live = new AssessmentStore();
+  assessment: Assessment = $derived(this.live.current ?? emptyAssessment(this.doc.site));
   drawings = $derived(
-    new Map<string, EstimateDrawing>(this.assessment.estimates.map((o) => [o.id, drawEstimate(this.doc.site, o)])),
+    new Map<string, EstimateDrawing>(this.assessment.estimates.map((o) => [o.id, drawEstimate(o)])),
   );
+  /** how the profile of the condition shown reads */
+  conditionOutcome = $derived(this.assessment.conditions.find((c) => c.id === this.conditionId));
   /** estimates shown for the current condition (those without a condition show under every condition) */
   visible = $derived(this.assessment.estimates.filter((o) => !o.condition || o.condition.id === this.conditionId));
 

@@ -81,7 +81,7 @@ function numberArb(spec: Extract<ParamSpec, { kind: 'number' }>, practical: bool
 }
 
 function argsArb(method: CalcMethod, practical: boolean): fc.Arbitrary<Record<string, RawArg | undefined>> {
-  const alternatives = practical ? ONE_OF[method.id] : undefined;
+  const alternatives = practical ? (method.oneOf ?? ONE_OF[method.id]) : undefined;
   if (!alternatives) return paramsArb(method, practical, new Set(), new Set());
   return fc
     .integer({ min: 0, max: alternatives.length - 1 })
@@ -124,8 +124,21 @@ function paramsArb(
 function computes(method: CalcMethod, args: Record<string, RawArg | undefined>): boolean {
   try {
     const out = runCalc(method, args);
-    for (const r of Object.values(out.results))
-      if (typeof r.value === 'number') expect(Number.isFinite(r.value)).toBe(true);
+    const declared = new Set(method.results.map((r) => r.name));
+    for (const [name, r] of Object.entries(out.results)) {
+      expect(declared.has(name), `${method.id} returns the undeclared result ${name}`).toBe(true);
+      if (typeof r.value === 'number') expect(Number.isFinite(r.value), `${name} = ${r.value}`).toBe(true);
+    }
+    for (const series of out.series ?? []) {
+      expect(series.kind, `a series of ${method.id} has no kind`).toMatch(/^[a-z0-9]+(-[a-z0-9]+)*$/);
+      for (const axis of [series.x, ...series.y])
+        expect(axis.values.every(Number.isFinite), `${series.kind}: ${axis.label} holds NaN or Infinity`).toBe(true);
+    }
+    for (const w of out.warnings) {
+      expect(w.code, `a warning of ${method.id} has no code: ${JSON.stringify(w)}`).toMatch(/^[a-z0-9]+(-[a-z0-9]+)*$/);
+      expect(['note', 'caution', 'outside-validity']).toContain(w.severity);
+      expect(w.message.length).toBeGreaterThan(10);
+    }
     return true;
   } catch (e) {
     if (!(e instanceof InputError || e instanceof ProfileError)) throw e;
