@@ -1,6 +1,7 @@
 import { num } from '../calc/resolve';
 import { arg, type CalcMethod } from '../calc/types';
 import { InputError } from '../core/errors';
+import { caution, note } from '../core/warning';
 import { DENSITY_METHODS } from '../water/density';
 import {
   n2Profile,
@@ -12,7 +13,7 @@ import {
   THERMOCLINE_MAX_GRADIENT,
   TWO_LAYER_FIT,
 } from './stratification';
-import type { Profile } from './profile';
+import { largestFinite, type Profile } from './profile';
 import type { CalcOutput, Series } from '../calc/types';
 
 /** Summary of a measured profile: mixed layer, thermocline, peak N² and the equivalent two layers. */
@@ -23,21 +24,33 @@ export function summariseProfile(p: Profile): CalcOutput {
   const n2 = n2Profile(p).n2;
   const warnings = [...p.warnings, ...fit.warnings];
   if (mld.mixedToBottom)
-    warnings.push('The density never exceeds the surface value by 0.03 kg/m³: the column is mixed to the bottom.');
+    warnings.push(
+      note(
+        'mixed-to-bottom',
+        'The density never exceeds the surface value by 0.03 kg/m³: the column is mixed to the bottom.',
+      ),
+    );
   if (th.weak)
     warnings.push(
-      `The largest density gradient is ${th.gradient.toFixed(3)} kg/m³ per m, below 0.1: there is no distinct thermocline.`,
+      note(
+        'no-thermocline',
+        `The largest density gradient is ${th.gradient.toFixed(3)} kg/m³ per m, below 0.1: there is no distinct thermocline.`,
+      ),
     );
   const unstable = stabilityFlags(p).filter((f) => f.stability === 'unstable');
   for (const f of unstable)
     warnings.push(
-      `Density inversion between ${f.top} m and ${f.bottom} m (N² = ${f.n2.toExponential(2)} 1/s²): unstable or a sensor error.`,
+      caution(
+        'density-inversion',
+        `Density inversion between ${f.top} m and ${f.bottom} m (N² = ${f.n2.toExponential(2)} 1/s²): unstable or a sensor error.`,
+        'file',
+      ),
     );
   return {
     results: {
       mixed_layer_depth: num(mld.value, 'm'),
       thermocline_depth: num(th.value, 'm'),
-      n2_max: num(Math.max(...n2), '1/s2'),
+      n2_max: num(largestFinite(n2), '1/s2'),
       upper_thickness: num(fit.upperThickness, 'm'),
       rho_upper: num(fit.rhoUpper, 'kg/m3'),
       rho_lower: num(fit.rhoLower, 'kg/m3'),
@@ -60,6 +73,7 @@ export function profileSeries(p: Profile): Series[] {
   const n2 = n2Profile(p);
   const out: Series[] = [
     {
+      kind: 'profile-temperature',
       title: 'Temperature',
       x: depth,
       y: [{ label: 'Temperature', unit: 'degC', values: [...p.temperature] }],
@@ -67,6 +81,7 @@ export function profileSeries(p: Profile): Series[] {
       caption: 'Measured temperature against depth',
     },
     {
+      kind: 'profile-density',
       title: 'Density',
       x: depth,
       y: [{ label: 'Density', unit: 'kg/m3', values: [...p.density] }],
@@ -74,6 +89,7 @@ export function profileSeries(p: Profile): Series[] {
       caption: `Potential density (${p.eos}) against depth`,
     },
     {
+      kind: 'profile-n2',
       title: 'Buoyancy frequency squared',
       x: { label: 'Depth', unit: 'm', values: n2.depth },
       y: [{ label: 'N²', unit: '1/s2', values: n2.n2 }],
@@ -83,6 +99,7 @@ export function profileSeries(p: Profile): Series[] {
   ];
   if (p.salinity.some((s) => s > 0))
     out.splice(1, 0, {
+      kind: 'profile-salinity',
       title: 'Salinity',
       x: depth,
       y: [{ label: 'Salinity', unit: 'PSU', values: [...p.salinity] }],
@@ -91,6 +108,7 @@ export function profileSeries(p: Profile): Series[] {
     });
   for (const c of p.extra)
     out.push({
+      kind: 'profile-extra',
       title: c.name,
       x: depth,
       y: [{ label: c.name, unit: c.unit || '1', values: [...c.values] }],

@@ -2,7 +2,15 @@ import Papa from 'papaparse';
 import { InputError } from '../core/errors';
 import { convertToSi } from '../units/units';
 import type { EquationOfState } from '../water/density';
-import { makeProfile, ProfileError, type Profile, type ProfileColumn, type ProfileIssue } from './profile';
+import {
+  largestFinite,
+  makeProfile,
+  ProfileError,
+  requireProfileRows,
+  type Profile,
+  type ProfileColumn,
+  type ProfileIssue,
+} from './profile';
 
 /** Which standard column a header names; anything else is an extra constituent. */
 type Role = 'depth' | 'elevation' | 'temperature' | 'salinity' | 'sediment';
@@ -106,6 +114,7 @@ export function parseProfileCsv(text: string, options: CsvProfileOptions = {}): 
 export function profileFromTable(table: ProfileTable, options: CsvProfileOptions = {}): Profile {
   if (table.rows.length < 2)
     throw new ProfileError([{ row: 0, column: '(file)', message: 'needs a header line and at least 2 data rows' }]);
+  requireProfileRows(table.rows.length);
   const headers = table.columns.map(parseHeader);
   const issues: ProfileIssue[] = [];
   const roles = headers.map((h) => roleOf(h.name));
@@ -128,8 +137,8 @@ export function profileFromTable(table: ProfileTable, options: CsvProfileOptions
 
   const data = table.rows;
   const column = (c: number): number[] => {
-    const role = roles[c];
     const h = headers[c];
+    const toSi = columnConversion(h, roles[c], issues);
     return data.map((r, i) => {
       if (r.length !== headers.length) {
         issues.push({
@@ -146,18 +155,12 @@ export function profileFromTable(table: ProfileTable, options: CsvProfileOptions
         issues.push({ row: i + 1, column: h.name, message: shown ? `"${shown}" is not a number` : 'value is missing' });
         return NaN;
       }
-      if (!role) return v;
-      try {
-        return convertToSi(h.name, v, h.unit || DEFAULT_UNIT[role], SI_UNIT[role]);
-      } catch (e) {
-        issues.push({ row: i + 1, column: h.name, message: e instanceof InputError ? e.message : String(e) });
-        return NaN;
-      }
+      return toSi(v);
     });
   };
   let depth = column(depthCol);
   if (roles[depthCol] === 'elevation') {
-    const surface = options.surfaceElevation ?? Math.max(...depth.filter(Number.isFinite));
+    const surface = options.surfaceElevation ?? largestFinite(depth);
     depth = depth.map((z) => surface - z);
   }
   const col = (r: Role) => (find(r) >= 0 ? column(find(r)) : undefined);
@@ -180,6 +183,24 @@ export function profileFromTable(table: ProfileTable, options: CsvProfileOptions
     extra: extra.map((e) => ({ ...e, values: pick(e.values)! })),
     eos: options.eos,
   });
+}
+
+/**
+ * The conversion of a column's values to SI, found once per column: every unit of a standard column is an
+ * affine map (a scale, plus an offset for °F and °C), so two conversions give it. An extra column keeps its
+ * values; a unit that does not fit the column is one issue on the header.
+ */
+function columnConversion(h: ParsedHeader, role: Role | undefined, issues: ProfileIssue[]): (v: number) => number {
+  if (!role) return (v) => v;
+  try {
+    const unit = h.unit || DEFAULT_UNIT[role];
+    const offset = convertToSi(h.name, 0, unit, SI_UNIT[role]);
+    const scale = convertToSi(h.name, 1, unit, SI_UNIT[role]) - offset;
+    return (v) => scale * v + offset;
+  } catch (e) {
+    issues.push({ row: 0, column: h.name, message: e instanceof InputError ? e.message : String(e) });
+    return () => NaN;
+  }
 }
 
 function dedupe(issues: ProfileIssue[]): ProfileIssue[] {

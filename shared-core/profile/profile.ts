@@ -1,4 +1,6 @@
 import { InputError } from '../core/errors';
+import { LIMITS } from '../core/limits';
+import { uniqueWarnings, type Warning } from '../core/warning';
 import { waterDensity, type EquationOfState, defaultEos } from '../water/density';
 
 /** An extra constituent column (e.g. dissolved oxygen) carried through in its own unit. */
@@ -21,7 +23,7 @@ export interface Profile {
   readonly extra: readonly ProfileColumn[];
   readonly eos: EquationOfState;
   readonly density: readonly number[];
-  readonly warnings: readonly string[];
+  readonly warnings: readonly Warning[];
 }
 
 export interface ProfileInput {
@@ -55,19 +57,24 @@ export class ProfileError extends Error {
   }
 }
 
-const LIMITS = {
+const COLUMN_RANGES = {
   depth: { min: 0, max: 11000, unit: 'm' },
   temperature: { min: -2.5, max: 60, unit: 'degC' },
   salinity: { min: 0, max: 70, unit: 'PSU' },
   sediment: { min: 0, max: 500, unit: 'kg/m3' },
 } as const;
 
-function checkColumn(name: keyof typeof LIMITS, values: readonly number[], n: number, issues: ProfileIssue[]): void {
+function checkColumn(
+  name: keyof typeof COLUMN_RANGES,
+  values: readonly number[],
+  n: number,
+  issues: ProfileIssue[],
+): void {
   if (values.length !== n) {
     issues.push({ row: 0, column: name, message: `has ${values.length} values but depth has ${n}` });
     return;
   }
-  const { min, max, unit } = LIMITS[name];
+  const { min, max, unit } = COLUMN_RANGES[name];
   values.forEach((v, i) => {
     if (!Number.isFinite(v)) issues.push({ row: i + 1, column: name, message: 'value is missing or not a number' });
     else if (v < min || v > max)
@@ -79,9 +86,22 @@ function checkColumn(name: keyof typeof LIMITS, values: readonly number[], n: nu
   });
 }
 
+/** Throws a ProfileError when a profile has more rows than LIMITS.profileRows. */
+export function requireProfileRows(rows: number): void {
+  if (rows > LIMITS.profileRows)
+    throw new ProfileError([
+      {
+        row: 0,
+        column: '(file)',
+        message: `has ${rows} data rows, more than the ${LIMITS.profileRows} rows one profile may have`,
+      },
+    ]);
+}
+
 /** Validates a profile and computes its density; throws a ProfileError listing every problem. */
 export function makeProfile(input: ProfileInput): Profile {
   const n = input.depth.length;
+  requireProfileRows(n);
   const issues: ProfileIssue[] = [];
   if (n < 2) issues.push({ row: 0, column: 'depth', message: `a profile needs at least 2 rows, got ${n}` });
   const salinity = input.salinity ?? new Array<number>(n).fill(0);
@@ -121,10 +141,10 @@ export function makeProfile(input: ProfileInput): Profile {
       'the profile has salinity above 0; choose eos80 or teos10',
     );
   }
-  const warnings = new Set<string>();
+  const warnings: Warning[] = [];
   const density = input.depth.map((_, i) => {
     const r = waterDensity({ temperature: input.temperature[i], salinity: salinity[i], sediment: sediment[i], eos });
-    r.warnings.forEach((w) => warnings.add(w));
+    for (const w of r.warnings) warnings.push(w);
     return r.value;
   });
   return {
@@ -135,7 +155,7 @@ export function makeProfile(input: ProfileInput): Profile {
     extra: (input.extra ?? []).map((c) => ({ ...c, values: [...c.values] })),
     eos,
     density,
-    warnings: [...warnings],
+    warnings: uniqueWarnings(warnings),
   };
 }
 
@@ -164,6 +184,13 @@ export function profileColumns(p: Profile): ProfileColumn[] {
     { name: 'density', unit: 'kg/m3', values: [...p.density] },
     ...p.extra.map((c) => ({ ...c, values: [...c.values] })),
   ];
+}
+
+/** The largest finite value, −∞ if none (a loop: spreading a long array into Math.max overflows the stack). */
+export function largestFinite(values: readonly number[]): number {
+  let best = -Infinity;
+  for (const v of values) if (Number.isFinite(v) && v > best) best = v;
+  return best;
 }
 
 /** Water-column depth covered by the profile: the deepest sample [m]. */

@@ -1,6 +1,7 @@
 import { GRAVITY } from '../quantities';
 import { buoyancyFrequencySquared } from '../water/buoyancy';
 import type { MethodInfo } from '../core/method';
+import { caution, note, type Warning } from '../core/warning';
 import { interpolateAt, type Profile } from './profile';
 
 /** N² on the intervals between samples, at the interval mid-depths [1/s2]. */
@@ -123,7 +124,7 @@ export interface TwoLayerFit {
   rhoUpper: number;
   rhoLower: number;
   gPrime: number;
-  warnings: string[];
+  warnings: Warning[];
 }
 
 /**
@@ -154,14 +155,20 @@ export function twoLayerFit(p: Profile, cells = 400): TwoLayerFit {
   }
   const rhoUpper = (s1[bestK] - s1[0]) / bestK,
     rhoLower = (s1[cells] - s1[bestK]) / (cells - bestK);
-  const warnings: string[] = [];
+  const warnings: Warning[] = [];
   const contrast = rhoLower - rhoUpper;
   if (contrast < 0.01)
     warnings.push(
-      `The fitted layers differ by only ${contrast.toFixed(4)} kg/m³: the column is nearly mixed and a two-layer model is not meaningful.`,
+      caution(
+        'nearly-mixed',
+        `The fitted layers differ by only ${contrast.toFixed(4)} kg/m³: the column is nearly mixed and a two-layer model is not meaningful.`,
+      ),
     );
   warnings.push(
-    'A two-layer reduction of a smooth profile overestimates first-mode internal wave speeds by a few % to ≈10 %; where the profile is measured, the vertical-mode solution is the reference.',
+    note(
+      'two-layer-overestimates-speed',
+      'A two-layer reduction of a smooth profile overestimates first-mode internal wave speeds by a few % to ≈10 %; where the profile is measured, the vertical-mode solution is the reference.',
+    ),
   );
   return {
     upperThickness: top + bestK * dz,

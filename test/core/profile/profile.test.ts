@@ -15,7 +15,10 @@ import {
   ProfileError,
   NEUTRAL_N2,
   parseHeader,
+  profileFromTable,
 } from '../../../shared-core/profile';
+import { summariseProfile } from '../../../shared-core/profile/calc';
+import { LIMITS } from '../../../shared-core/core/limits';
 import { densitySeawaterEos80 } from '../../../shared-core/water';
 import { GRAVITY } from '../../../shared-core/quantities';
 
@@ -66,6 +69,27 @@ describe('CSV import', () => {
     );
     expect(() => parseProfileCsv('depth (kg),temperature (degC)\n0,20\n5,19\n')).toThrow(/cannot be converted to m/);
     expect(() => parseProfileCsv('height,colour\n0,1\n1,2\n')).toThrow(/no temperature column/);
+  });
+
+  it('reads a long elevation profile (150 000 rows) without overflowing the stack', () => {
+    // spreading ≥ ~150 000 values into Math.max throws RangeError in V8 (field notes); reading must loop
+    const n = 150_000;
+    const rows = Array.from({ length: n }, (_, i) => [100 - i * 0.0005, 20 - i * 0.0001]);
+    const p = profileFromTable({ columns: ['elevation (m)', 'temperature (degC)'], rows });
+    expect(p.depth.length).toBe(n);
+    expect(p.depth[0]).toBe(0);
+    expect(p.depth[n - 1]).toBeCloseTo((n - 1) * 0.0005, 9);
+    expect(summariseProfile(p).results.n2_max.value).toBeGreaterThan(0);
+  });
+
+  it('refuses more rows than LIMITS.profileRows, naming the limit', () => {
+    const tooMany = LIMITS.profileRows + 1;
+    const rows = new Array<(string | number)[]>(tooMany).fill(['1', '10']);
+    const table = () => profileFromTable({ columns: ['depth (m)', 'temperature (degC)'], rows });
+    expect(table).toThrow(ProfileError);
+    expect(table).toThrow(`has ${tooMany} data rows, more than the ${LIMITS.profileRows} rows one profile may have`);
+    const column = new Array<number>(tooMany).fill(10);
+    expect(() => makeProfile({ depth: column, temperature: column })).toThrow(/more than the 1000000 rows/);
   });
 
   it('splits header names and units in the common forms', () => {
@@ -119,6 +143,17 @@ describe('stratification', () => {
         for (let i = 0; i < cells; i++) mass += interpolateAt(p.depth, p.density, (i + 0.5) * dz) * dz;
         expect(fit.rhoUpper * fit.upperThickness + fit.rhoLower * fit.lowerThickness).toBeCloseTo(mass, 6);
       }),
+    );
+  });
+
+  it('gives structured warnings: a density inversion names the profile input', () => {
+    const inverted = makeProfile({ depth: [0, 5, 10, 20], temperature: [20, 24, 12, 8] });
+    const w = summariseProfile(inverted).warnings;
+    expect(w.filter((x) => x.code === 'density-inversion')).toMatchObject([{ severity: 'caution', input: 'file' }]);
+    expect(w.map((x) => x.code)).toContain('two-layer-overestimates-speed');
+    const mixed = makeProfile({ depth: [0, 10], temperature: [12, 12] });
+    expect(summariseProfile(mixed).warnings.map((x) => x.code)).toEqual(
+      expect.arrayContaining(['mixed-to-bottom', 'no-thermocline', 'nearly-mixed']),
     );
   });
 
