@@ -22,6 +22,7 @@ import {
 import { HUPPERT_1982, type SpreadingGeometry } from './viscous';
 import { LOCK_RELEASE_HS1980, lockReleaseHuppertSimpson1980 } from './release';
 import { formatNumber, InputError } from '../core/errors';
+import { note, type Warning } from '../core/warning';
 
 const G_PRIME = {
   kind: 'number',
@@ -72,7 +73,7 @@ function frontReport(
   pieces: readonly FrontPiece[],
   time: number,
   arrival: number | undefined,
-  warnings: string[],
+  warnings: Warning[],
   sources: string[],
 ) {
   const s = frontAt(pieces, time);
@@ -144,7 +145,10 @@ export const gravityCurrentCalcMethods: CalcMethod[] = [
       if (model === 'von-karman') {
         r = frontSpeedVonKarman1940(g, h);
         source = VON_KARMAN_1940.source;
-        if (H !== undefined) r.warnings.push('total_depth is ignored by the deep-ambient von Kármán speed.');
+        if (H !== undefined)
+          r.warnings.push(
+            note('input-ignored', 'total_depth is ignored by the deep-ambient von Kármán speed.', 'total_depth'),
+          );
       } else if (model === 'huppert-simpson') {
         r = frontSpeedHuppertSimpson1980(g, h, H);
         source = HUPPERT_SIMPSON_1980_FRONT.source;
@@ -261,7 +265,10 @@ export const gravityCurrentCalcMethods: CalcMethod[] = [
             'the slope current (Britter & Linden 1980) is a line-source current: use geometry=planar',
           );
         const u = frontSpeedSlopeBritterLinden1980(g, flux, slope);
-        const warnings = [...u.warnings, `Laboratory scatter: ${formatNumber(u.low)} … ${formatNumber(u.high)} m/s.`];
+        const warnings = [
+          ...u.warnings,
+          note('laboratory-scatter', `Laboratory scatter: ${formatNumber(u.low)} … ${formatNumber(u.high)} m/s.`),
+        ];
         return frontReport(
           [{ phase: 'steady', tStart: 0, xStart: 0, c: u.value, m: 0 }],
           arg.num(a, 'time'),
@@ -289,12 +296,14 @@ export function frontSeriesCharts(f: FrontSeries): Series[] {
   const phases = f.transitions.map((t) => `${t.phase} from ${Math.round(t.time)} s`).join(', ');
   return [
     {
+      kind: 'front-position',
       title: 'Front position',
       x: time,
       y: [{ label: 'Front position', unit: 'm', values: [...f.position] }],
       caption: `Front distance from the back wall against time${phases ? ` (${phases})` : ''}`,
     },
     {
+      kind: 'front-speed',
       title: 'Front speed',
       x: time,
       y: [{ label: 'Front speed', unit: 'm/s', values: [...f.speed] }],

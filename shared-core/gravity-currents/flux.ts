@@ -1,6 +1,7 @@
 import { GRAVITY } from '../quantities';
 import { positive, requireInRange } from '../core/range';
 import { scalar, validityWarnings, type MethodInfo, type Scalar } from '../core/method';
+import { note, outsideValidity, type Warning } from '../core/warning';
 import { powerLawPiece, sampleFront, type FrontPiece, type FrontSeries } from './front-pieces';
 import { viscousFrontCoefficientHuppert1982, type SpreadingGeometry } from './viscous';
 
@@ -26,7 +27,7 @@ export interface ConstantFluxInput {
  * the slower (the laws cross at the transition time, so the position is continuous).
  * @returns the pieces of the front model (positions from the source [m], times [s])
  */
-export function constantFluxRelease(input: ConstantFluxInput): { pieces: FrontPiece[]; warnings: string[] } {
+export function constantFluxRelease(input: ConstantFluxInput): { pieces: FrontPiece[]; warnings: Warning[] } {
   const g = requireInRange('g_prime', input.gPrime, 'm/s2', { ...positive, max: GRAVITY });
   const q = requireInRange('flux', input.flux, input.geometry === 'planar' ? 'm2/s' : 'm3/s', {
     ...positive,
@@ -91,10 +92,19 @@ export function frontSpeedSlopeBritterLinden1980(gPrime: number, flux: number, s
   const b = Math.cbrt(g * q);
   const extra =
     th <= 0.5
-      ? ['On slopes below about 0.5° the head decelerates with distance (Britter & Linden 1980): no steady speed.']
+      ? [
+          outsideValidity(
+            'decelerating-head',
+            'On slopes below about 0.5° the head decelerates with distance (Britter & Linden 1980): no steady speed.',
+            'slope',
+          ),
+        ]
       : [];
   extra.push(
-    'The head grows by entrainment as it runs down the slope; the front moves at about 60 % of the following flow.',
+    note(
+      'head-entrainment',
+      'The head grows by entrainment as it runs down the slope; the front moves at about 60 % of the following flow.',
+    ),
   );
   return { ...scalar(BRITTER_LINDEN_1980, 1.5 * b, 'm/s', { slope: th }, extra), low: 1.3 * b, high: 1.7 * b };
 }

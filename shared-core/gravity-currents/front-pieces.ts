@@ -1,5 +1,6 @@
 import { requireInRange, nonNegative } from '../core/range';
 import { InputError } from '../core/errors';
+import type { Warning } from '../core/warning';
 
 /**
  * A front that advances through phases, each a power law dx/dt = c·x^(−m). Within a phase
@@ -48,7 +49,7 @@ export interface FrontSeries {
   transitions: PhaseTransition[];
   /** first arrival of the front at each requested distance [m]; time [s] is 0 for a point inside the release */
   arrivals: { distance: number; time: number }[];
-  warnings: string[];
+  warnings: Warning[];
 }
 
 /** Position at which a piece reaches time t. */
@@ -99,7 +100,7 @@ export function sampleFront(
   pieces: readonly FrontPiece[],
   times: readonly number[],
   distances: readonly number[],
-  warnings: string[],
+  warnings: Warning[],
 ): FrontSeries {
   const states = times.map((t) => frontAt(pieces, t));
   return {

@@ -1,6 +1,7 @@
 import { GRAVITY } from '../quantities';
 import { positive, requireInRange } from '../core/range';
 import { scalar, type MethodInfo, type Scalar } from '../core/method';
+import { caution, note, type Warning } from '../core/warning';
 
 /**
  * Steady front speeds of gravity currents. g′ = g(ρ_current − ρ_ambient)/ρ_ambient for a dense current
@@ -39,7 +40,10 @@ export function frontSpeedVonKarman1940(gPrime: number, currentDepth: number): F
   const { g, h } = checkedCurrent(gPrime, currentDepth);
   const u = Math.sqrt(2 * g * h);
   const extra = [
-    'Deep-ambient inviscid limit: laboratory currents run slower (Fr ≈ 1.0–1.2 instead of √2; Huppert & Simpson 1980; Shin et al. 2004).',
+    caution(
+      'inviscid-limit-overestimates',
+      'Deep-ambient inviscid limit: laboratory currents run slower (Fr ≈ 1.0–1.2 instead of √2; Huppert & Simpson 1980; Shin et al. 2004).',
+    ),
   ];
   return { ...scalar(VON_KARMAN_1940, u, 'm/s', {}, extra), froude: Math.SQRT2 };
 }
@@ -73,7 +77,10 @@ export function frontSpeedBenjamin1968(gPrime: number, currentDepth: number, tot
     a === 0.5
       ? []
       : [
-          'Benjamin’s current conserves energy only at a = h/H = 1/2; elsewhere the flow-force balance implies dissipation (or, for a > 1/2, an impossible energy gain).',
+          note(
+            'energy-not-conserved',
+            'Benjamin’s current conserves energy only at a = h/H = 1/2; elsewhere the flow-force balance implies dissipation (or, for a > 1/2, an impossible energy gain).',
+          ),
         ];
   return fromFroude(BENJAMIN_1968, benjaminFroude(a), g, h, totalDepth, { depth_ratio: a }, extra);
 }
@@ -159,7 +166,12 @@ export function lockExchangeSpeed(gPrime: number, depth: number): LockExchangeSp
   const g = requireInRange('g_prime', gPrime, 'm/s2', { ...positive, max: GRAVITY });
   const h = requireInRange('depth', depth, 'm', { ...positive, max: 1e4 });
   const c = Math.sqrt(g * h);
-  const extra = ['Laboratory lock exchanges run 4–12 % slower than the ideal value because of mixing and friction.'];
+  const extra = [
+    note(
+      'laboratory-slower',
+      'Laboratory lock exchanges run 4–12 % slower than the ideal value because of mixing and friction.',
+    ),
+  ];
   return {
     ideal: scalar(LOCK_EXCHANGE, 0.5 * c, 'm/s', { g_prime: g }, extra),
     low: LOCK_EXCHANGE_FROUDE.low * c,
@@ -176,7 +188,7 @@ function fromFroude(
   h: number,
   totalDepth: number | undefined,
   inputs: Record<string, number>,
-  extra: string[] = [],
+  extra: Warning[] = [],
 ): FrontSpeed {
   const u = fr * Math.sqrt(g * h);
   return {

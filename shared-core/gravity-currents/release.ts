@@ -1,6 +1,7 @@
 import { GRAVITY } from '../quantities';
 import { positive, requireInRange } from '../core/range';
 import { validityWarnings, type MethodInfo } from '../core/method';
+import { note, type Warning } from '../core/warning';
 import { type FrontPiece, type FrontSeries, sampleFront, frontAt, type FrontState } from './front-pieces';
 import { viscousFrontCoefficientHuppert1982, type SpreadingGeometry } from './viscous';
 
@@ -36,7 +37,7 @@ export interface ReleaseModel {
   /** released area per unit width [m2] (planar) or volume [m3] (axisymmetric) */
   volume: number;
   geometry: SpreadingGeometry;
-  warnings: string[];
+  warnings: Warning[];
 }
 
 /**
@@ -102,10 +103,15 @@ export function lockReleaseHuppertSimpson1980(input: LockReleaseInput): ReleaseM
   }
   const warnings = validityWarnings(LOCK_RELEASE_HS1980, { g_prime: g, lock_aspect: h0 / x0 });
   warnings.push(
-    'Box model: the current is taken as a uniform slab without entrainment; experiments scatter about ±10–20 % around it.',
+    note(
+      'box-model-scatter',
+      'Box model: the current is taken as a uniform slab without entrainment; experiments scatter about ±10–20 % around it.',
+    ),
   );
   if (pieces[0].phase === 'viscous')
-    warnings.push('Viscous forces dominate from the release: the current never spreads inertially.');
+    warnings.push(
+      note('viscous-from-release', 'Viscous forces dominate from the release: the current never spreads inertially.'),
+    );
   return { pieces, volume: vol, geometry: input.geometry, warnings };
 }
 

@@ -1,4 +1,6 @@
 import { describe, expect, it } from 'vitest';
+import { gravityCurrentCalcMethods } from '../../../shared-core/gravity-currents/calc';
+import { resolveArgs, runCalc } from '../../../shared-core/calc/resolve';
 import fc from 'fast-check';
 import { runCheckValues } from '../../helpers/check-values';
 import {
@@ -128,7 +130,7 @@ describe('lock release: invariants', () => {
       kinematicViscosity: 0.5,
     });
     expect(m.pieces[0].phase).toBe('viscous');
-    expect(m.warnings.join(' ')).toMatch(/Viscous forces dominate/);
+    expect(m.warnings.map((w) => w.code)).toContain('viscous-from-release');
   });
 });
 
@@ -153,7 +155,14 @@ describe('constant-flux and slope currents', () => {
     const s = slopeCurrentSeries(0.1, 0.02, 10, [0, 100], [50]);
     expect(s.position[1]).toBeCloseTo(100 * s.speed[1], 9);
     expect(s.arrivals[0].time).toBeCloseTo(50 / s.speed[0], 9);
-    expect(frontSpeedSlopeBritterLinden1980(0.1, 0.02, 2).warnings.join(' ')).toMatch(/outside the range/);
+    expect(frontSpeedSlopeBritterLinden1980(0.1, 0.02, 2).warnings).toMatchObject([
+      { code: 'validity-range', severity: 'outside-validity', input: 'slope' },
+      { code: 'head-entrainment', severity: 'note' },
+    ]);
+    expect(frontSpeedSlopeBritterLinden1980(0.1, 0.02, 0.3).warnings[1]).toMatchObject({
+      code: 'decelerating-head',
+      input: 'slope',
+    });
   });
 });
 
@@ -188,5 +197,13 @@ describe('release models: bad input', () => {
       }),
     ).toThrow(/total_depth/);
     expect(() => viscousFrontCoefficientHuppert1982(-1, 'planar')).toThrow(InputError);
+  });
+});
+
+describe('release charts', () => {
+  it('name their curves by kind', () => {
+    const lock = gravityCurrentCalcMethods.find((m) => m.id === 'lock-release')!;
+    const out = runCalc(lock, resolveArgs(lock, { g_prime: '0.1', lock_length: '1', lock_depth: '0.2', time: '10' }));
+    expect(out.series?.map((s) => s.kind)).toEqual(['front-position', 'front-speed']);
   });
 });
