@@ -74,6 +74,7 @@ export const estuaryCalcMethods: CalcMethod[] = [
       const series: Series[] = profile.distance.length
         ? [
             {
+              kind: 'salt-wedge-interface',
               title: 'Salt-wedge interface',
               x: { label: 'Distance landward from the mouth', unit: 'm', values: profile.distance },
               y: [{ label: 'Interface depth', unit: 'm', values: profile.interfaceDepth }],
@@ -210,6 +211,7 @@ export const estuaryCalcMethods: CalcMethod[] = [
         : exchangeNetFlowCurve(g, h, b);
       const series: Series[] = [
         {
+          kind: 'exchange-layer-discharges',
           title: 'Layer discharges against net flow',
           x: { label: 'Net discharge Q0 (positive with the upper layer)', unit: 'm3/s', values: curve.net },
           y: [

@@ -1,6 +1,7 @@
 import { GRAVITY } from '../quantities';
 import { requireInRange } from '../core/range';
 import { scalar, type MethodInfo, type Scalar } from '../core/method';
+import { caution, note, type Warning } from '../core/warning';
 import { brentRoot } from '../numerics/roots';
 
 /**
@@ -122,7 +123,7 @@ export interface NetFlowExchange {
   energyAtVirtualControl?: number;
   /** |Q0| at which maximal exchange ends, (2/3)^{3/2} b √(g′H³) [m3/s] */
   flushingDischarge: number;
-  warnings: string[];
+  warnings: Warning[];
 }
 
 /** The inputs shared by the net-flow exchange solutions, range-checked (InputError naming the field). */
@@ -158,7 +159,7 @@ export function exchangeWithNetFlowArmiFarmer1986(
     s = Math.abs(Q0) / scale,
     upperWithFlow = Q0 >= 0;
   const flushingDischarge = MAXIMAL_EXCHANGE_LIMIT * scale;
-  const warnings: string[] = [];
+  const warnings: Warning[] = [];
   const layers = (withFlow: number, against: number) => {
     const [up, low] = upperWithFlow ? [withFlow, against] : [against, withFlow];
     return {
@@ -168,8 +169,12 @@ export function exchangeWithNetFlowArmiFarmer1986(
   };
   if (s >= MAXIMAL_EXCHANGE_LIMIT) {
     warnings.push(
-      `|Q0| = ${Math.abs(Q0).toPrecision(3)} m3/s ≥ (2/3)^{3/2} b√(g′H³) = ${flushingDischarge.toPrecision(3)} m3/s: one-way flow, no exchange. ` +
-        `The opposing layer cannot pass the narrows (an arrested wedge may still reach it while |Q0| < b√(g′H³) = ${scale.toPrecision(3)} m3/s).`,
+      caution(
+        'one-way-flow',
+        `|Q0| = ${Math.abs(Q0).toPrecision(3)} m3/s ≥ (2/3)^{3/2} b√(g′H³) = ${flushingDischarge.toPrecision(3)} m3/s: one-way flow, no exchange. ` +
+          `The opposing layer cannot pass the narrows (an arrested wedge may still reach it while |Q0| < b√(g′H³) = ${scale.toPrecision(3)} m3/s).`,
+        'net_discharge',
+      ),
     );
     const r = layers(Math.abs(Q0), 0);
     return { ...r, regime: 'one-way', flushingDischarge, warnings: [...r.upperDischarge.warnings, ...warnings] };
@@ -180,12 +185,19 @@ export function exchangeWithNetFlowArmiFarmer1986(
   if (bEnd !== undefined && bv > bEnd) {
     regime = 'submaximal';
     warnings.push(
-      `The virtual control needs a width of ${bv.toPrecision(3)} m, more than the ${bEnd.toPrecision(3)} m at the channel ends: it cannot form inside the channel, so the exchange is submaximal (less than shown, set by the reservoir conditions, not computed here).`,
+      caution(
+        'submaximal-exchange',
+        `The virtual control needs a width of ${bv.toPrecision(3)} m, more than the ${bEnd.toPrecision(3)} m at the channel ends: it cannot form inside the channel, so the exchange is submaximal (less than shown, set by the reservoir conditions, not computed here).`,
+        'end_width',
+      ),
     );
   }
   if (s > 0)
     warnings.push(
-      `The virtual control lies on the side the net flow comes from, where the channel has widened to ${bv.toPrecision(3)} m.`,
+      note(
+        'virtual-control-position',
+        `The virtual control lies on the side the net flow comes from, where the channel has widened to ${bv.toPrecision(3)} m.`,
+      ),
     );
   const r = layers(d.withFlow * scale, d.against * scale);
   const fromOpposing = (e: number) => (upperWithFlow ? e : 1 - e) * g * H; // E measured from the bed

@@ -1,5 +1,6 @@
 import { requireInRange } from '../core/range';
 import { scalar, type MethodInfo, type Scalar } from '../core/method';
+import { caution, note, type Warning } from '../core/warning';
 import { brentRoot } from '../numerics/roots';
 import { checkedExchangeInputs } from './exchange-net-flow';
 
@@ -110,7 +111,7 @@ export interface SillNetFlowExchange {
   /** net discharges [m3/s] at which the exchange ends: with the upper layer (> 0) and with the lower layer (< 0) */
   flushingWithUpper: number;
   flushingWithLower: number;
-  warnings: string[];
+  warnings: Warning[];
 }
 
 /**
@@ -140,7 +141,7 @@ export function exchangeSillWithNetFlowFarmerArmi1986(
     s = Q0 / scale;
   const flushingWithUpper = scale,
     flushingWithLower = -sillFlushingWithLowerLayer(r) * scale;
-  const warnings: string[] = [];
+  const warnings: Warning[] = [];
   const layers = (up: number, low: number) => ({
     upperDischarge: scalar(FARMER_ARMI_1986_SILL_NET_FLOW, up, 'm3/s', { g_prime: g }),
     lowerDischarge: scalar(FARMER_ARMI_1986_SILL_NET_FLOW, low, 'm3/s', { g_prime: g }),
@@ -149,9 +150,13 @@ export function exchangeSillWithNetFlowFarmerArmi1986(
   if (Q0 >= flushingWithUpper || Q0 <= flushingWithLower) {
     const upward = Q0 > 0;
     warnings.push(
-      upward
-        ? `Q0 = ${Q0.toPrecision(3)} m3/s ≥ b√(g′D³) = ${scale.toPrecision(3)} m3/s: one-way flow, no exchange; the upper layer fills the crest section and the dense water is held below crest level.`
-        : `Q0 = ${Q0.toPrecision(3)} m3/s ≤ ${flushingWithLower.toPrecision(3)} m3/s, the critical overflow of the dense water alone: one-way flow, no exchange.`,
+      caution(
+        'one-way-flow',
+        upward
+          ? `Q0 = ${Q0.toPrecision(3)} m3/s ≥ b√(g′D³) = ${scale.toPrecision(3)} m3/s: one-way flow, no exchange; the upper layer fills the crest section and the dense water is held below crest level.`
+          : `Q0 = ${Q0.toPrecision(3)} m3/s ≤ ${flushingWithLower.toPrecision(3)} m3/s, the critical overflow of the dense water alone: one-way flow, no exchange.`,
+        'net_discharge',
+      ),
     );
     const rl = upward ? layers(Q0, 0) : layers(0, -Q0);
     return { ...rl, regime: 'one-way', ...common, warnings: [...rl.upperDischarge.warnings, ...warnings] };
@@ -161,14 +166,24 @@ export function exchangeSillWithNetFlowFarmerArmi1986(
   const c = controls(q1, q2, r);
   if (H === Infinity)
     warnings.push(
-      'Deep dense basin assumed (H ≫ D): the second control is the virtual control where the lower layer becomes deep and the upper layer critical.',
+      note(
+        'deep-basin-assumed',
+        'Deep dense basin assumed (H ≫ D): the second control is the virtual control where the lower layer becomes deep and the upper layer critical.',
+        'reservoir_depth',
+      ),
     );
   else
     warnings.push(
-      `The second control sits at the foot of the sill on the dense side, where the bed levels off at ${H.toPrecision(3)} m.`,
+      note(
+        'foot-control',
+        `The second control sits at the foot of the sill on the dense side, where the bed levels off at ${H.toPrecision(3)} m.`,
+      ),
     );
   warnings.push(
-    'Maximal exchange: a dense-side interface higher than the foot control allows (e.g. a shallow or ponded basin) gives less exchange (submaximal, not computed).',
+    note(
+      'maximal-exchange-assumed',
+      'Maximal exchange: a dense-side interface higher than the foot control allows (e.g. a shallow or ponded basin) gives less exchange (submaximal, not computed).',
+    ),
   );
   const rl = layers(q1 * scale, q2 * scale);
   return {

@@ -1,6 +1,7 @@
 import { GRAVITY } from '../quantities';
 import { positive, requireInRange } from '../core/range';
 import { scalar, type MethodInfo, type Scalar } from '../core/method';
+import { note } from '../core/warning';
 import { brentRoot } from '../numerics/roots';
 import { compositeFroudeArmi1986 } from '../hydraulics/two-layer';
 
@@ -51,7 +52,10 @@ function inputs(gPrime: number, depth: number, width: number) {
   };
 }
 
-const NO_NET_FLOW = 'No net (barotropic) flow is included; a river or tidal net flow changes the exchange.';
+const NO_NET_FLOW = note(
+  'no-net-flow',
+  'No net (barotropic) flow is included; a river or tidal net flow changes the exchange.',
+);
 
 /**
  * Maximal exchange through a contraction of width b [m] and constant depth H [m]: Q = ¼b√(g′H³) [m3/s] each way.

@@ -1,5 +1,6 @@
 import { positive, nonNegative, requireInRange } from '../core/range';
 import type { MethodInfo } from '../core/method';
+import { note, type Warning } from '../core/warning';
 import { LOCK_EXCHANGE_FROUDE, lockExchangeSpeed } from '../gravity-currents/front-speed';
 
 export const NAVIGATION_LOCK_EXCHANGE: MethodInfo = {
@@ -20,7 +21,7 @@ export interface LockExchangeSeries {
   /** [m/s] front speed used */ frontSpeed: number;
   /** [s] time for the fronts to reach the ends of the chamber, L/U */ traverseTime: number;
   /** [m3] chamber volume L B H */ chamberVolume: number;
-  warnings: string[];
+  warnings: Warning[];
 }
 
 export interface LockExchangeInput {
@@ -52,7 +53,10 @@ export function navigationLockExchange(input: LockExchangeInput, times: readonly
     return t <= T ? 0.5 * B * H * U * t : V * (1 - 0.5 * Math.exp(-(t - T) / T));
   });
   const warnings = [
-    `Front speed ${input.speed === 'ideal' ? LOCK_EXCHANGE_FROUDE.ideal : LOCK_EXCHANGE_FROUDE.typical}√(g′H); after the currents reflect (t > L/U) the approach to full exchange is a simple exponential (common practice, no source).`,
+    note(
+      'exchange-approach-rule-of-thumb',
+      `Front speed ${input.speed === 'ideal' ? LOCK_EXCHANGE_FROUDE.ideal : LOCK_EXCHANGE_FROUDE.typical}√(g′H); after the currents reflect (t > L/U) the approach to full exchange is a simple exponential (common practice, no source).`,
+    ),
   ];
   return {
     time: [...times],

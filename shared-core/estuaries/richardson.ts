@@ -1,6 +1,7 @@
 import { GRAVITY } from '../quantities';
 import { positive, requireInRange } from '../core/range';
 import { scalar, type MethodInfo, type Scalar } from '../core/method';
+import { note } from '../core/warning';
 
 export const FISCHER_1972: MethodInfo = {
   id: 'estuarine-richardson-fischer-1972',
@@ -46,7 +47,10 @@ export function estuarineRichardsonFischer1972(
   const u = requireInRange('tidal_velocity', tidalVelocity, 'm/s', { min: 1e-3, max: 10 });
   const ri = (g * q) / (w * u ** 3);
   const extra = [
-    'The class thresholds 0.08 and 0.8 are rules of thumb (Fischer et al. 1979); the transition is gradual.',
+    note(
+      'rule-of-thumb-classes',
+      'The class thresholds 0.08 and 0.8 are rules of thumb (Fischer et al. 1979); the transition is gradual.',
+    ),
   ];
   return { richardson: scalar(FISCHER_1972, ri, '1', {}, extra), estuaryClass: estuaryClass(ri) };
 }

@@ -2,6 +2,7 @@ import { GRAVITY } from '../quantities';
 import { positive, requireInRange } from '../core/range';
 import { formatNumber, InputError } from '../core/errors';
 import { scalar, type MethodInfo, type Scalar } from '../core/method';
+import { caution, note, type Warning } from '../core/warning';
 import { solveOde, type OdeStatus } from '../numerics/ode';
 
 /**
@@ -63,8 +64,11 @@ function checked(input: SaltWedgeInput) {
   return { u, h, g, f, F0 };
 }
 
-const NO_WEDGE =
-  'The river densimetric Froude number F0 ≥ 1: the river flow pushes the sea water out of the mouth and no wedge is arrested.';
+const NO_WEDGE = note(
+  'no-wedge-arrested',
+  'The river densimetric Froude number F0 ≥ 1: the river flow pushes the sea water out of the mouth and no wedge is arrested.',
+  'river_velocity',
+);
 
 /**
  * Closed-form wedge length L = (H/4f_i)[F0⁻²/5 − 2 + 3F0^(2/3) − (6/5)F0^(4/3)] [m].
@@ -75,7 +79,9 @@ export function saltWedgeLengthSchijfSchonfeld1953(input: SaltWedgeInput): SaltW
   const inputs = { interfacial_friction: f, river_froude: F0 };
   if (F0 >= 1) return { length: scalar(SCHIJF_SCHONFELD_1953, 0, 'm', inputs, [NO_WEDGE]), riverFroude: F0 };
   const bracket = F0 ** -2 / 5 - 2 + 3 * F0 ** (2 / 3) - 1.2 * F0 ** (4 / 3);
-  const extra = ['No mixing across the interface is assumed; tides shorten and move the wedge.'];
+  const extra = [
+    note('no-interfacial-mixing', 'No mixing across the interface is assumed; tides shorten and move the wedge.'),
+  ];
   return { length: scalar(SCHIJF_SCHONFELD_1953, (h / (4 * f)) * bracket, 'm', inputs, extra), riverFroude: F0 };
 }
 
@@ -91,7 +97,7 @@ export interface SaltWedgeProfile {
   /** [1] F0 */ riverFroude: number;
   status: OdeStatus;
   evaluations: number;
-  warnings: string[];
+  warnings: Warning[];
 }
 
 /**
@@ -116,7 +122,10 @@ export function saltWedgeProfile(input: SaltWedgeInput, points = 50): SaltWedgeP
   const etaMouth = F0 ** (2 / 3);
   const rhs = (eta: number) => [((h / f) * (eta ** 3 - F0 * F0) * (1 - eta)) / (F0 * F0)];
   const sol = solveOde(rhs, etaMouth, [0], 1, { hMax: (1 - etaMouth) / points, rtol: 1e-9, atol: 1e-6 * h });
-  const warnings = sol.status === 'completed' ? [] : [`The profile integration stopped early: ${sol.message}.`];
+  const warnings =
+    sol.status === 'completed'
+      ? []
+      : [caution('integration-stopped', `The profile integration stopped early: ${sol.message}.`)];
   return {
     distance: sol.y.map((y) => y[0]),
     interfaceDepth: sol.t.map((eta) => eta * h),

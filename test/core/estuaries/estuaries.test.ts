@@ -154,7 +154,10 @@ describe('salt wedge: invariants', () => {
   it('no wedge is arrested for F0 ≥ 1, with a warning', () => {
     const r = saltWedgeLengthSchijfSchonfeld1953({ riverVelocity: 2, depth: 4, gPrime: 0.19 });
     expect(r.length.value).toBe(0);
-    expect(r.length.warnings.join(' ')).toMatch(/no wedge is arrested/);
+    const noWedge = r.length.warnings.find((w) => w.code === 'no-wedge-arrested');
+    expect(noWedge).toMatchObject({ severity: 'note', input: 'river_velocity' });
+    expect(noWedge!.message).toMatch(/no wedge is arrested/);
+    expect(r.length.warnings.find((w) => w.code === 'validity-range')?.input).toBe('river_froude');
   });
 });
 
@@ -278,14 +281,15 @@ describe('exchange with net flow (Armi & Farmer 1986): invariants', () => {
     expect(r.regime).toBe('one-way');
     expect(r.upperDischarge.value).toBe(0);
     expect(r.lowerDischarge.value).toBeCloseTo(0.8 * scale(0.02, 10, 50), 9);
-    expect(r.warnings.join(' ')).toMatch(/one-way flow, no exchange/);
+    expect(r.warnings.find((w) => w.code === 'one-way-flow')).toMatchObject({ input: 'net_discharge' });
+    expect(r.warnings.map((w) => w.message).join(' ')).toMatch(/one-way flow, no exchange/);
   });
   it('a virtual control wider than the channel ends makes the exchange submaximal', () => {
     const q0 = 0.4 * scale(0.02, 10, 50);
     const free = exchangeWithNetFlowArmiFarmer1986(0.02, 10, 50, q0);
     const r = exchangeWithNetFlowArmiFarmer1986(0.02, 10, 50, q0, 0.9 * free.virtualControlWidth!);
     expect(r.regime).toBe('submaximal');
-    expect(r.warnings.join(' ')).toMatch(/submaximal/);
+    expect(r.warnings.find((w) => w.code === 'submaximal-exchange')).toMatchObject({ input: 'end_width' });
     expect(exchangeWithNetFlowArmiFarmer1986(0.02, 10, 50, q0, 1.1 * free.virtualControlWidth!).regime).toBe('maximal');
   });
   it('calc: net_discharge for a contraction; the series spans the maximal-exchange range', () => {
@@ -375,7 +379,7 @@ describe('exchange over a sill with net flow (Farmer & Armi 1986 conditions): in
     const up = exchangeSillWithNetFlowFarmerArmi1986(0.02, 10, 50, 1.2 * z.flushingWithUpper, 30);
     expect(up.regime).toBe('one-way');
     expect(up.lowerDischarge.value).toBe(0);
-    expect(up.warnings.join(' ')).toMatch(/one-way flow, no exchange/);
+    expect(up.warnings.find((w) => w.code === 'one-way-flow')?.message).toMatch(/one-way flow, no exchange/);
     const low = exchangeSillWithNetFlowFarmerArmi1986(0.02, 10, 50, 1.01 * z.flushingWithLower, 30);
     expect(low.upperDischarge.value).toBe(0);
     expect(low.lowerDischarge.value).toBeCloseTo(-1.01 * z.flushingWithLower, 9);
