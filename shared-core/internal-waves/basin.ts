@@ -2,6 +2,7 @@ import { GRAVITY } from '../quantities';
 import { InputError } from '../core/errors';
 import { positive, requireInRange } from '../core/range';
 import { scalar, validityWarnings, type MethodInfo, type Scalar } from '../core/method';
+import { caution, outsideValidity, type Warning } from '../core/warning';
 import { interpolateAt } from '../profile/profile';
 import { twoLayerFreeSurfaceCelerities, type TwoLayer } from './two-layer';
 
@@ -31,7 +32,13 @@ export function internalSeichePeriodTwoLayer(basinLength: number, state: TwoLaye
   const H = state.upperThickness + state.lowerThickness;
   const warnings =
     L < 10 * H
-      ? [`The basin is only ${(L / H).toFixed(1)} depths long: the long-wave seiche formula needs L ≫ H.`]
+      ? [
+          outsideValidity(
+            'short-basin',
+            `The basin is only ${(L / H).toFixed(1)} depths long: the long-wave seiche formula needs L ≫ H.`,
+            'basin_length',
+          ),
+        ]
       : [];
   return scalar(INTERNAL_SEICHE_TWO_LAYER, (2 * L) / c, 's', {}, warnings);
 }
@@ -85,7 +92,7 @@ export interface WindStress {
   /** drag coefficient used [1] */
   dragCoefficient: number;
   method: string;
-  warnings: string[];
+  warnings: Warning[];
 }
 
 /**
@@ -187,7 +194,7 @@ export interface LakeNumberResult {
   /** height of the centre of volume above the bottom z_g [m] */
   centreOfVolumeHeight: number;
   method: string;
-  warnings: string[];
+  warnings: Warning[];
 }
 
 /**
@@ -273,7 +280,12 @@ export function lakeNumberImbergerPatterson1990(
   const value = (GRAVITY * st * (1 - zT / zm)) / (r0 * u * u * Math.pow(A0, 1.5) * (1 - zg / zm));
   const warnings =
     st <= 0
-      ? ['The Schmidt stability is not positive: the column is mixed or unstable, and the Lake number has no meaning.']
+      ? [
+          caution(
+            'no-schmidt-stability',
+            'The Schmidt stability is not positive: the column is mixed or unstable, and the Lake number has no meaning.',
+          ),
+        ]
       : [];
   return { value, schmidtStability: (GRAVITY * st) / A0, centreOfVolumeHeight: zg, method: LAKE_NUMBER.id, warnings };
 }

@@ -2,6 +2,7 @@ import { num, text } from '../calc/resolve';
 import { arg, type CalcArgs, type CalcMethod, type ResultSpec, type Series } from '../calc/types';
 import { InputError } from '../core/errors';
 import { positive } from '../core/range';
+import { note } from '../core/warning';
 import {
   INTERFACIAL_DISPERSION_FREE_SURFACE,
   SOLITARY_WAVE_KDV,
@@ -106,7 +107,11 @@ export const internalWaveCalcMethods: CalcMethod[] = [
       const warnings = [...sw.warnings];
       if (wavelength !== undefined && amplitude > 0)
         warnings.push(
-          'The amplitude correction is that of a long solitary wave; added to a finite-wavelength speed it is indicative only.',
+          note(
+            'amplitude-correction-indicative',
+            'The amplitude correction is that of a long solitary wave; added to a finite-wavelength speed it is indicative only.',
+            'wavelength',
+          ),
         );
       const sources = [INTERFACIAL_DISPERSION_FREE_SURFACE.source, SOLITARY_WAVE_KDV.source];
       return {
@@ -258,7 +263,10 @@ export const internalWaveCalcMethods: CalcMethod[] = [
       const warnings = [
         ...ws.warnings,
         ...w.warnings,
-        `Drag coefficient C_D = ${ws.dragCoefficient.toExponential(2)} (Large & Pond 1981), air density 1.225 kg/m³, water density 1000 kg/m³.`,
+        note(
+          'drag-coefficient',
+          `Drag coefficient C_D = ${ws.dragCoefficient.toExponential(2)} (Large & Pond 1981), air density 1.225 kg/m³, water density 1000 kg/m³.`,
+        ),
       ];
       return {
         results: {
@@ -277,6 +285,7 @@ export const internalWaveCalcMethods: CalcMethod[] = [
 export function dispersionSeries(s: TwoLayer): Series {
   const pts = dispersionCurve(s);
   return {
+    kind: 'dispersion-curve',
     title: 'Interfacial wave dispersion',
     x: { label: 'Wavelength', unit: 'm', values: pts.map((p) => p.wavelength) },
     y: [
@@ -290,6 +299,7 @@ export function dispersionSeries(s: TwoLayer): Series {
 /** Chart curve: vertical-displacement shapes of the modes against depth. */
 export function modeShapeSeries(r: VerticalModes): Series {
   return {
+    kind: 'mode-shape',
     title: 'Vertical mode shapes',
     x: { label: 'Depth', unit: 'm', values: [...r.depth] },
     y: r.modes.map((m) => ({

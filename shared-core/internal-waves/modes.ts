@@ -2,6 +2,7 @@ import { GRAVITY } from '../quantities';
 import { InputError } from '../core/errors';
 import { positive, requireInRange } from '../core/range';
 import type { MethodInfo } from '../core/method';
+import { caution, type Warning } from '../core/warning';
 import { interpolateAt, type Profile } from '../profile/profile';
 import { lowestEigenpairs, type TridiagonalPencil } from '../numerics/tridiagonal-eigen';
 
@@ -55,7 +56,7 @@ export interface VerticalModes {
   /** with a free surface: the barotropic (surface) mode speed, ≈ √(gH) [m/s] */
   surfaceCelerity?: number;
   surface: SurfaceCondition;
-  warnings: string[];
+  warnings: Warning[];
 }
 
 /**
@@ -84,10 +85,15 @@ export function verticalModesFromN2(column: N2Column, bottom: number, options: M
   column.n2.forEach((v, i) => requireInRange(`n2[${i}]`, v, '1/s2', { min: -1, max: 1 }));
   const dz = H / cells;
   const depth = Array.from({ length: cells + 1 }, (_, j) => j * dz);
-  const warnings: string[] = [];
+  const warnings: Warning[] = [];
   const raw = depth.map((d) => interpolateAt(column.depth, column.n2, d));
   if (raw.some((v) => v < 0))
-    warnings.push('N² is negative somewhere (a density inversion); those levels are treated as neutral (N² = 0).');
+    warnings.push(
+      caution(
+        'negative-n2-clipped',
+        'N² is negative somewhere (a density inversion); those levels are treated as neutral (N² = 0).',
+      ),
+    );
   const n2 = raw.map((v) => Math.max(0, v));
   const first = surface === 'free-surface' ? 0 : 1; // rigid lid: w(0) = 0 removes the surface node
   const nodes = cells - first; // bottom node (w = 0) excluded

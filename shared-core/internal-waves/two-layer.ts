@@ -1,6 +1,7 @@
 import { GRAVITY } from '../quantities';
 import { positive, requireInRange } from '../core/range';
 import { scalar, type MethodInfo, type Scalar } from '../core/method';
+import { caution, outsideValidity, type Warning } from '../core/warning';
 
 /**
  * Two-layer interfacial waves: layer 1 on top (ρ1, h1), layer 2 below (ρ2 > ρ1, h2), flat bottom.
@@ -30,10 +31,15 @@ export function checkTwoLayer(s: TwoLayer): TwoLayer {
 }
 
 /** Warning when Δρ/ρ2 is large enough that Boussinesq forms lose accuracy. */
-function boussinesqWarnings(s: TwoLayer): string[] {
+function boussinesqWarnings(s: TwoLayer): Warning[] {
   const r = (s.rhoLower - s.rhoUpper) / s.rhoLower;
   return r > 0.1
-    ? [`Δρ/ρ = ${r.toFixed(3)} exceeds 0.1: use the full density-ratio forms, not the Boussinesq one.`]
+    ? [
+        outsideValidity(
+          'non-boussinesq',
+          `Δρ/ρ = ${r.toFixed(3)} exceeds 0.1: use the full density-ratio forms, not the Boussinesq one.`,
+        ),
+      ]
     : [];
 }
 
@@ -119,7 +125,7 @@ export interface FreeSurfaceRoots {
   /** surface (barotropic, fast) root [m/s] */
   surface: number;
   method: string;
-  warnings: string[];
+  warnings: Warning[];
 }
 
 /**
@@ -226,7 +232,7 @@ export interface SolitaryWave {
   /** KdV half-width λ = √(12β/(α a)), β = c0 h1 h2/6 [m]; Infinity for a = 0 */
   halfWidth: number;
   method: string;
-  warnings: string[];
+  warnings: Warning[];
 }
 
 /**
@@ -250,15 +256,26 @@ export function solitaryWaveKdv(state: TwoLayer, amplitude: number): SolitaryWav
   const warnings = boussinesqWarnings(s);
   if (equal && a > 0)
     warnings.push(
-      'The layers are equally thick: the quadratic nonlinearity vanishes and the first-order correction is zero; a higher-order (Gardner) theory is needed.',
+      caution(
+        'equal-layers',
+        'The layers are equally thick: the quadratic nonlinearity vanishes and the first-order correction is zero; a higher-order (Gardner) theory is needed.',
+      ),
     );
   else if (a > limit)
     warnings.push(
-      `The amplitude ${a.toPrecision(3)} m exceeds the limiting amplitude |h2 − h1|/2 = ${limit.toPrecision(3)} m: no solitary wave of this size exists; expect a broad, flat-crested wave or a bore.`,
+      outsideValidity(
+        'amplitude-over-limit',
+        `The amplitude ${a.toPrecision(3)} m exceeds the limiting amplitude |h2 − h1|/2 = ${limit.toPrecision(3)} m: no solitary wave of this size exists; expect a broad, flat-crested wave or a bore.`,
+        'amplitude',
+      ),
     );
   else if (a > 0.5 * limit)
     warnings.push(
-      `The amplitude is more than half the limiting amplitude (${limit.toPrecision(3)} m): first-order KdV overestimates the speed of such large waves.`,
+      caution(
+        'large-amplitude',
+        `The amplitude is more than half the limiting amplitude (${limit.toPrecision(3)} m): first-order KdV overestimates the speed of such large waves.`,
+        'amplitude',
+      ),
     );
   const celerity = c0 + (Math.abs(alpha) * a) / 3;
   const beta = (c0 * h1 * h2) / 6;

@@ -126,7 +126,10 @@ describe('KdV solitary wave', () => {
 
   it('warns beyond the limiting amplitude', () => {
     const r = solitaryWaveKdv({ rhoUpper: 998, rhoLower: 1000, upperThickness: 5, lowerThickness: 15 }, 6);
-    expect(r.warnings.join(' ')).toMatch(/exceeds the limiting amplitude/);
+    expect(r.warnings).toMatchObject([
+      { code: 'amplitude-over-limit', severity: 'outside-validity', input: 'amplitude' },
+    ]);
+    expect(r.warnings[0].message).toMatch(/exceeds the limiting amplitude/);
   });
 });
 
