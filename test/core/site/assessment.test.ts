@@ -1,0 +1,101 @@
+import { readFileSync } from 'node:fs';
+import { resolve } from 'node:path';
+import { describe, expect, it } from 'vitest';
+import { assessSite, loadSite, SiteAssessor, type Site } from '../../../shared-core/site';
+
+// The single assessment (DEVELOPERS.md, "From site file to report"): every view reads these outcomes, so
+// these tests pin down what the outcomes promise. The demo site is invented; no value here is a reference
+// of a method (those are in test/check-values), only agreements between paths through the same code.
+const ROOT = resolve(import.meta.dirname, '../../..');
+const demo = (): Site => loadSite(readFileSync(resolve(ROOT, 'examples/quillmere-reservoir.gpsite'), 'utf8'));
+const META = { gprimeVersion: 't', siteHash: 'h' };
+const assess = (site: Site) => assessSite(site, META, { bands: false });
+const row = (a: ReturnType<typeof assess>, condition: string, constituent: string) =>
+  a.compliance.find((r) => r.condition === condition && r.constituent === constituent)!;
+
+describe('one assessment', () => {
+  it('compliance reads the near-field estimate the user sees, with its own parameter overrides', () => {
+    const site = demo();
+    const before = row(assess(site), 'Late summer', 'Ammonia-N');
+    expect(before.estimate).toBe('plume-summer');
+    const jet = assess(site).estimates.find((o) => o.id === 'plume-summer')!;
+    expect(jet.model?.kind).toBe('jet');
+    // a wider port (lower exit velocity) set on the estimate itself changes the verdict's dilution
+    site.estimates.find((e) => e.id === 'plume-summer')!.params = { angle: '0 deg' };
+    const after = row(assess(site), 'Late summer', 'Ammonia-N');
+    expect(after.achievedDilution).not.toBeCloseTo(before.achievedDilution!, 3);
+  });
+
+  it('adds the near-field run a compliance row needs when the site has none, and shows it among the outcomes', () => {
+    const site = demo();
+    site.estimates = site.estimates.filter((e) => e.id !== 'plume-winter');
+    const a = assess(site);
+    const added = a.estimates.filter((o) => o.added);
+    expect(added.map((o) => [o.method, o.feature?.id, o.condition?.id])).toEqual([
+      ['buoyant-jet', 'works', 'early-winter'],
+    ]);
+    expect(row(a, 'Early winter', 'Ammonia-N').estimate).toBe(added[0].id);
+    expect(row(a, 'Early winter', 'Ammonia-N').achievedDilution).toBeGreaterThan(1);
+  });
+
+  it('a profile that cannot be read marks only the estimates of its condition, naming the condition', () => {
+    const site = demo();
+    site.conditions[1].profile.rows[2][0] = 'deep';
+    const a = assess(site);
+    const winter = a.estimates.filter((o) => o.condition?.id === 'early-winter');
+    expect(winter.length).toBeGreaterThan(0);
+    for (const o of winter) {
+      expect(o.status).toBe('error');
+      expect(o.error).toMatch(/conditions\[1\] \(“Early winter”\) profile/);
+    }
+    expect(a.estimates.filter((o) => o.condition?.id === 'late-summer').every((o) => o.status !== 'error')).toBe(true);
+    expect(a.conditions.map((c) => c.status)).toEqual(['ok', 'error']);
+    expect(a.conditions[1].issues[0]).toMatchObject({ row: 3 });
+    expect(row(a, 'Early winter', 'Ammonia-N').verdict).toBe('cannot tell');
+  });
+
+  it('warnings are structured: a code, a severity and a message', () => {
+    for (const o of assess(demo()).estimates)
+      for (const w of o.warnings) {
+        expect(w.code).toMatch(/^[a-z0-9-]+$/);
+        expect(['note', 'caution', 'outside-validity']).toContain(w.severity);
+        expect(typeof w.message).toBe('string');
+      }
+  });
+
+  it('outcomes are plain data: a structured clone (the worker boundary) keeps them equal', () => {
+    const a = assess(demo());
+    expect(structuredClone(a)).toEqual(a);
+  });
+});
+
+describe('the incremental assessor', () => {
+  it('gives the same assessment as a full one, and after one edit recomputes only what that edit touches', () => {
+    const assessor = new SiteAssessor();
+    const site = demo();
+    expect(assessor.assess(site, META, { bands: false })).toEqual(assess(site));
+    expect(assessor.computed).toBe(site.estimates.length);
+
+    const edited = structuredClone(site);
+    const works = edited.features.find((f) => f.id === 'works')!;
+    if (works.kind !== 'outfall') throw new Error('the demo outfall');
+    works.discharge = '0.5 m3/s';
+    expect(assessor.assess(edited, META, { bands: false })).toEqual(assess(edited));
+    // the two plumes and the length scales of the outfall; nothing else
+    expect(assessor.computed).toBe(3);
+
+    expect(assessor.assess(structuredClone(edited), META, { bands: false })).toEqual(assess(edited));
+    expect(assessor.computed).toBe(0);
+  });
+
+  it('an edited profile recomputes the estimates of its condition only', () => {
+    const assessor = new SiteAssessor();
+    const site = demo();
+    assessor.assess(site, META, { bands: false });
+    const edited = structuredClone(site);
+    edited.conditions[1].profile.rows[0][1] = Number(edited.conditions[1].profile.rows[0][1]) + 0.5;
+    expect(assessor.assess(edited, META, { bands: false })).toEqual(assess(edited));
+    const winter = edited.estimates.filter((e) => e.condition === 'early-winter').length;
+    expect(assessor.computed).toBe(winter);
+  });
+});
