@@ -1,6 +1,8 @@
 import { InputError, formatNumber } from '../core/errors';
 import { describeRange, inRange } from '../core/range';
 import type { MethodInfo } from '../core/method';
+import { LIMITS } from '../core/limits';
+import { caution, note, type Warning } from '../core/warning';
 import { resolveArgs, runCalc, type RawArg } from '../calc/resolve';
 import type { CalcArgs, CalcMethod, CalcOutput } from '../calc/types';
 import { latinHypercube, normalQuantile, sampleQuantile, seededRandom } from './sampling';
@@ -45,7 +47,7 @@ export interface UncertaintyResult {
   evaluated: number;
   inputs: InputUncertainty[];
   bands: ResultBand[];
-  warnings: string[];
+  warnings: Warning[];
 }
 
 export interface PropagationOptions {
@@ -55,8 +57,8 @@ export interface PropagationOptions {
   coverage?: number;
 }
 
-/** A warning with its numbers taken out: draws that only change the numbers raise the same kind of warning. */
-const warningKind = (w: string) => w.replace(/[-+−]?\d[\d.,]*(?:[eE×][-+−]?\d+)?/g, '#');
+/** The kind of a warning: its code and the input it concerns (draws that only change the numbers raise the same kind). */
+const warningKind = (w: Warning) => `${w.code}|${w.input ?? ''}`;
 
 const pct = (x: number) => `${formatNumber(Math.round(x * 1000) / 10)} %`;
 
@@ -106,8 +108,14 @@ export function propagateMonteCarloJcgm101(
 ): UncertaintyResult {
   const samples = options.samples ?? 1000;
   const coverage = options.coverage ?? 0.9;
-  if (!(Number.isInteger(samples) && samples >= 100 && samples <= 100000))
-    throw new InputError('samples', samples, '1', '100 … 100000 (integer)');
+  if (!(Number.isInteger(samples) && samples >= 100 && samples <= LIMITS.monteCarloDraws))
+    throw new InputError(
+      'samples',
+      samples,
+      '1',
+      `100 … ${LIMITS.monteCarloDraws} (integer)`,
+      `the number of Monte Carlo draws is a whole number from 100 to the limit of ${LIMITS.monteCarloDraws} draws per band`,
+    );
   if (!(coverage >= 0.5 && coverage <= 0.99)) throw new InputError('coverage', coverage, '1', '0.5 … 0.99');
   if (inputs.length === 0)
     throw new InputError(
@@ -124,7 +132,7 @@ export function propagateMonteCarloJcgm101(
   const rows = latinHypercube(samples, inputs.length, seededRandom(options.seed ?? 20261202));
   const values = new Map<string, number[]>();
   const outside = new Map<string, number>();
-  const warningCounts = new Map<string, { count: number; example: string }>();
+  const warningCounts = new Map<string, { count: number; example: Warning }>();
   let failed = 0,
     firstFailure = '';
   for (const row of rows) {
@@ -163,18 +171,28 @@ export function propagateMonteCarloJcgm101(
   }
 
   const evaluated = samples - failed - [...outside.values()].reduce((a, b) => a + b, 0);
-  const warnings: string[] = [];
+  const warnings: Warning[] = [];
   for (const [name, n] of outside) {
     const spec = method.params.find((p) => p.name === name)!;
     const range = spec.kind === 'number' ? describeRange(spec.range ?? {}, spec.unit) : '';
     warnings.push(
-      `${pct(n / samples)} of the draws put ${name} outside its allowed range ${range} and were left out: the band is for a truncated input distribution.`,
+      caution(
+        'band-draws-truncated',
+        `${pct(n / samples)} of the draws put ${name} outside its allowed range ${range} and were left out: the band is for a truncated input distribution.`,
+        name,
+      ),
     );
   }
-  if (failed) warnings.push(`${failed} of ${samples} draws could not be computed (first: ${firstFailure}).`);
+  if (failed)
+    warnings.push(
+      caution('band-draws-failed', `${failed} of ${samples} draws could not be computed (first: ${firstFailure}).`),
+    );
   if (evaluated < 0.5 * samples)
     warnings.push(
-      `Only ${evaluated} of ${samples} draws gave results: the band is unreliable; reduce the uncertainties or check the inputs.`,
+      caution(
+        'band-unreliable',
+        `Only ${evaluated} of ${samples} draws gave results: the band is unreliable; reduce the uncertainties or check the inputs.`,
+      ),
     );
   const nominalKinds = new Set(nominal.warnings.map(warningKind));
   const occasional = [...warningCounts]
@@ -182,7 +200,12 @@ export function propagateMonteCarloJcgm101(
     .sort((a, b) => b[1].count - a[1].count)
     .slice(0, 3);
   for (const [, { count, example }] of occasional)
-    warnings.push(`In ${pct(count / Math.max(evaluated, 1))} of the draws: ${example}`);
+    warnings.push({
+      code: 'band-occasional-warning',
+      severity: example.severity,
+      ...(example.input === undefined ? {} : { input: example.input }),
+      message: `In ${pct(count / Math.max(evaluated, 1))} of the draws: ${example.message}`,
+    });
 
   const bands: ResultBand[] = [];
   for (const [name, r] of Object.entries(nominal.results)) {
@@ -192,7 +215,12 @@ export function propagateMonteCarloJcgm101(
     const mean = sorted.reduce((a, b) => a + b, 0) / sorted.length;
     const sd = Math.sqrt(sorted.reduce((a, b) => a + (b - mean) ** 2, 0) / (sorted.length - 1));
     if (list.length < evaluated)
-      warnings.push(`${name} exists in only ${pct(list.length / evaluated)} of the draws; its band is of those draws.`);
+      warnings.push(
+        note(
+          'band-result-partial',
+          `${name} exists in only ${pct(list.length / evaluated)} of the draws; its band is of those draws.`,
+        ),
+      );
     bands.push({
       name,
       unit: r.unit,

@@ -1,7 +1,8 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { findCalcMethod } from '../../../shared-core/calc/registry';
-import { InputError } from '../../../shared-core/core/errors';
+import { InputError, formatNumber } from '../../../shared-core/core/errors';
+import { LIMITS } from '../../../shared-core/core/limits';
 import {
   latinHypercube,
   normalCdf,
@@ -113,7 +114,11 @@ describe('Monte Carlo propagation', () => {
       { name: 'g_prime', standardUncertainty: 0.01 },
     ]);
     expect(r.evaluated).toBeLessThan(r.samples);
-    expect(r.warnings.join(' ')).toMatch(/g_prime outside its allowed range/);
+    expect(r.warnings.find((w) => w.code === 'band-draws-truncated')).toMatchObject({
+      severity: 'caution',
+      input: 'g_prime',
+    });
+    expect(r.warnings.map((w) => w.message).join(' ')).toMatch(/g_prime outside its allowed range/);
     expect(r.bands.find((b) => b.name === 'speed')!.low).toBeGreaterThan(0);
   });
   it('names the field of a bad uncertainty', () => {
@@ -125,6 +130,14 @@ describe('Monte Carlo propagation', () => {
     expect(() =>
       propagateMonteCarloJcgm101(jet, raw, [{ name: 'effluent', standardUncertainty: 1 }], { samples: 5 }),
     ).toThrow(/samples = 5/);
+  });
+  it('refuses more draws than LIMITS.monteCarloDraws, naming the field and the limit', () => {
+    const draws = (samples: number) => () =>
+      propagateMonteCarloJcgm101(jet, raw, [{ name: 'effluent', standardUncertainty: 1 }], { samples });
+    expect(draws(LIMITS.monteCarloDraws + 1)).toThrow(InputError);
+    expect(draws(LIMITS.monteCarloDraws + 1)).toThrow(
+      `samples = ${formatNumber(LIMITS.monteCarloDraws + 1)} is not allowed: the number of Monte Carlo draws is a whole number from 100 to the limit of ${LIMITS.monteCarloDraws} draws per band`,
+    );
   });
 });
 
@@ -151,7 +164,9 @@ describe('warnings raised in some draws', () => {
       { g_prime: '0.02', upper_thickness: '6', wind_speed: '10', basin_length: '3000' },
       [{ name: 'wind_speed', standardUncertainty: 3 }],
     );
-    expect(r.warnings.filter((w) => /Drag coefficient/.test(w))).toEqual([]);
-    expect(r.warnings.some((w) => /^In [\d.]+ % of the draws: .*outside the range 4 … 25 m\/s/.test(w))).toBe(true);
+    expect(r.warnings.filter((w) => /Drag coefficient/.test(w.message))).toEqual([]);
+    const occasional = r.warnings.filter((w) => w.code === 'band-occasional-warning');
+    expect(occasional).toMatchObject([{ severity: 'outside-validity', input: 'wind_speed' }]);
+    expect(occasional[0].message).toMatch(/^In [\d.]+ % of the draws: .*outside the range 4 … 25 m\/s/);
   });
 });
