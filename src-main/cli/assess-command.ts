@@ -2,7 +2,7 @@ import { assessSite, type Assessment } from '../../shared-core/site';
 import { formatNumber } from '../../shared-core/core/errors';
 import { keyResultName } from '../../shared-core/calc/types';
 import { readSiteFile, GPRIME_VERSION } from '../services/site-file';
-import { UsageError, type CommandResult } from './errors';
+import { EXIT_NOT_ALL_OK, UsageError, type CommandResult } from './errors';
 
 /** A short plain-text summary: per estimate its key result and warnings count. */
 export function summariseAssessment(a: Assessment): string {
@@ -17,6 +17,8 @@ export function summariseAssessment(a: Assessment): string {
       lines.push(`✗ ${e.id} (${e.method}${where ? `; ${where}` : ''}): ${e.error}`);
       continue;
     }
+    if (e.status === 'incomplete')
+      lines.push(`… ${e.id} (${e.method}${where ? `; ${where}` : ''}): incomplete, ${e.incomplete ?? 'stopped early'}`);
     const key = keyResultName(e.results) ?? '';
     const r = e.results[key] ?? { value: '', unit: '' };
     const value = typeof r.value === 'number' ? formatNumber(r.value) : r.value;
@@ -78,11 +80,25 @@ export function parseAssessArgs(args: string[]): AssessOptions {
   return opts;
 }
 
+/** Exit code 3 and a one-line reason when an estimate is 'error' or 'incomplete'; nothing when all are 'ok'. */
+export function assessmentExit(a: Assessment): Pick<CommandResult, 'exitCode' | 'stderr'> {
+  const count = (status: string) => a.estimates.filter((e) => e.status === status).length;
+  const failed = count('error');
+  const incomplete = count('incomplete');
+  if (!failed && !incomplete) return {};
+  const parts = [failed && `${failed} in error`, incomplete && `${incomplete} incomplete`].filter(Boolean);
+  return {
+    exitCode: EXIT_NOT_ALL_OK,
+    stderr: `${parts.join(' and ')} of ${a.estimates.length} estimates (output written in full; exit code ${EXIT_NOT_ALL_OK})`,
+  };
+}
+
 /** `gprime assess <site file> [--json]` evaluates every estimate of the site. */
 export async function assessCommand(args: string[], json: boolean): Promise<CommandResult> {
   const opts = parseAssessArgs(args);
   const loaded = readSiteFile(opts.file);
   const assessment = assessSite(loaded.site, { gprimeVersion: GPRIME_VERSION, siteHash: loaded.hash });
+  const exit = assessmentExit(assessment);
   if (opts.out) {
     const { writeReport } = await import('../report/write-report');
     const written = await writeReport(loaded, assessment, {
@@ -94,7 +110,7 @@ export async function assessCommand(args: string[], json: boolean): Promise<Comm
       summariseAssessment(assessment) +
       `\n\nWrote ${written.length} files to ${opts.out}:\n` +
       written.map((w) => `  ${w}`).join('\n');
-    return { stdout: json ? JSON.stringify({ ...assessment, written }) : summary };
+    return { stdout: json ? JSON.stringify({ ...assessment, written }) : summary, ...exit };
   }
-  return { stdout: json ? JSON.stringify(assessment) : summariseAssessment(assessment) };
+  return { stdout: json ? JSON.stringify(assessment) : summariseAssessment(assessment), ...exit };
 }

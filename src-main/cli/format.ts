@@ -1,6 +1,7 @@
 import { formatNumber } from '../../shared-core/core/errors';
 import { SCREENING_CAUTION } from '../../shared-core/core/caution';
 import type { CalcOutput, CalcMethod } from '../../shared-core/calc/types';
+import { asWarning } from '../../shared-core/core/warning';
 import { MONTE_CARLO_JCGM101, type UncertaintyResult } from '../../shared-core/uncertainty';
 
 /** Plain-text rendering of a calc result for a terminal. */
@@ -11,7 +12,7 @@ export function formatCalcText(method: CalcMethod, out: CalcOutput, appendix?: s
     const v = typeof r.value === 'number' ? formatNumber(r.value) : r.value;
     lines.push(`  ${name.padEnd(width)}  ${v}${r.unit && r.unit !== '1' ? ' ' + r.unit : ''}`);
   }
-  if (out.warnings.length) lines.push('Warnings:', ...out.warnings.map((w) => `  ! ${w}`));
+  if (out.warnings.length) lines.push('Warnings:', ...out.warnings.map((w) => `  ! ${w.message}`));
   lines.push('Sources:', ...out.sources.map((s) => `  - ${s}`));
   if (appendix) lines.push('', appendix);
   lines.push('', SCREENING_CAUTION);
@@ -32,7 +33,7 @@ export function formatUncertaintyText(r: UncertaintyResult): string {
       `  ${b.name.padEnd(width)}  ${formatNumber(b.low)} … ${formatNumber(b.high)}${u}  (median ${formatNumber(b.median)}, s.d. ${formatNumber(b.standardDeviation)})`,
     );
   }
-  if (r.warnings.length) lines.push(...r.warnings.map((w) => `  ! ${w}`));
+  if (r.warnings.length) lines.push(...r.warnings.map((w) => `  ! ${asWarning(w).message}`));
   lines.push(
     `  - ${MONTE_CARLO_JCGM101.source}`,
     '  The band covers the stated input uncertainties only, not the error of the method itself.',

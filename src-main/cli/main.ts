@@ -17,7 +17,8 @@ Usage:
                                                 write the calc sheet, charts and tables
   gprime help                                   this text
 
-Exit codes: 0 success, 2 bad input, 1 internal error.
+Exit codes: 0 success, 2 bad input, 1 internal error; assess: 3 when an estimate is in error or incomplete
+(its output is still written in full).
 Screening estimates only: local codes, the permitting authority and licensed engineering practice govern.`;
 
 export type CommandHandler = (args: string[], json: boolean) => CommandResult | Promise<CommandResult>;
@@ -45,6 +46,7 @@ export async function main(argv: string[]): Promise<number> {
     if (!handler) throw new UsageError(`unknown command "${command}"; try \`gprime help\``);
     const result = await handler(rest, json);
     process.stdout.write(result.stdout + '\n');
+    if (result.stderr) process.stderr.write(`gprime: ${result.stderr}\n`);
     return result.exitCode ?? 0;
   } catch (e) {
     const bad =

@@ -20,7 +20,9 @@ describe('gprime calc plunge-depth', () => {
       '--json',
     ]);
     expect(r.code).toBe(0);
-    expect(r.json.warnings.join(' ')).toMatch(/plunge_froude/);
+    expect(r.json.warnings).toContainEqual(
+      expect.objectContaining({ severity: 'outside-validity', input: 'plunge_froude' }),
+    );
   });
 
   it('a negative g′ exits 2 naming the parameter', () => {

@@ -80,7 +80,9 @@ describe('gprime calc: jets and mixing zones', () => {
     expect(r.code).toBe(0);
     expect(r.json.results.return_distance.value / 2).toBeGreaterThan(2.4 * 0.85);
     expect(r.json.results.return_distance.value / 2).toBeLessThan(2.4 * 1.15);
-    expect(r.json.warnings.join(' ')).toMatch(/under-predict/);
+    expect(r.json.warnings).toContainEqual(
+      expect.objectContaining({ severity: 'caution', message: expect.stringMatching(/under-predict/) }),
+    );
   });
 
   it('buoyant-jet refuses both or neither ambient, exit 2', () => {

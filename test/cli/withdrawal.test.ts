@@ -79,7 +79,9 @@ describe('gprime calc withdrawal methods', () => {
     expect(r.code).toBe(0);
     expect(r.json.results.feasible.value).toBe('no');
     expect(r.json.results.temperature.value).toBeLessThan(24);
-    expect(r.json.warnings.join(' ')).toMatch(/cannot be met/);
+    expect(r.json.warnings).toContainEqual(
+      expect.objectContaining({ input: 'target_temperature', message: expect.stringMatching(/cannot be met/) }),
+    );
   });
 
   it('release-blend: a bad ports list exits 2', () => {
