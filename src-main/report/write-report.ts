@@ -103,12 +103,18 @@ export async function writeReport(
 }
 
 /**
- * The report of a site document given as text (Electron main process, browser shell): validates it,
- * assesses it and writes the files. `name` names the output files (e.g. the document's file name).
+ * The report of a site document given as text (Electron main process and browser shell, through
+ * export-in-worker.ts): validates it, assesses it and writes the files. `name` names the output files (e.g. the
+ * document's file name); `version` is the gprime version the report names.
  */
-export async function exportSiteReport(text: string, name: string, options: ReportOptions): Promise<string[]> {
+export async function exportSiteReport(
+  text: string,
+  name: string,
+  options: ReportOptions,
+  version = GPRIME_VERSION,
+): Promise<string[]> {
   const site = loadSite(text);
   const hash = createHash('sha256').update(Buffer.from(text, 'utf8')).digest('hex');
-  const assessment = assessSite(site, { gprimeVersion: GPRIME_VERSION, siteHash: hash });
+  const assessment = assessSite(site, { gprimeVersion: version, siteHash: hash });
   return writeReport({ site, hash, path: name }, assessment, options);
 }

@@ -1,4 +1,3 @@
-import { createHash } from 'node:crypto';
 import { existsSync, mkdirSync } from 'node:fs';
 import { relative } from 'node:path';
 import {
@@ -9,7 +8,8 @@ import {
   type RequestOf,
   type ResponseOf,
 } from '../../shared-core/ipc/contract';
-import { assessSite, loadSite } from '../../shared-core/site';
+import { loadSite } from '../../shared-core/site';
+import { exportSiteReportInWorker } from '../report/export-in-worker';
 import { readSiteText, RecentFiles, saveSiteText } from './file-store';
 import { RecoveryStore } from './recovery';
 import { ServiceError, toContractError } from './service-error';
@@ -95,14 +95,9 @@ export function createChannelHandlers({ host, dataDir, version }: HandlerOptions
       const outDir = req.outDir !== null ? host.allowDir(req.outDir) : await host.pickExportDir(site.project.name);
       if (outDir === null) return null;
       mkdirSync(outDir, { recursive: true });
-      const hash = createHash('sha256').update(req.text, 'utf8').digest('hex');
-      const assessment = assessSite(site, { gprimeVersion: version, siteHash: hash });
-      const { writeReport } = await import('../report/write-report');
-      const written = await writeReport({ site, hash, path: req.path ?? '(unsaved site)' }, assessment, {
-        outDir,
-        formats: req.formats,
-        units: req.units,
-      });
+      // assessing and drawing take seconds: a worker thread does both, so this process keeps answering
+      const options = { outDir, formats: req.formats, units: req.units };
+      const written = await exportSiteReportInWorker(req.text, req.path ?? '(unsaved site)', options, version);
       return { outDir, files: written.map((w) => relative(outDir, w) || w) };
     },
     'clipboard.writeImage': async (req) => {
