@@ -1,4 +1,5 @@
 import { num, text } from '../calc/resolve';
+import { note } from '../core/warning';
 import { arg, type CalcMethod } from '../calc/types';
 import { InputError } from '../core/errors';
 import { positive } from '../core/range';
@@ -75,7 +76,10 @@ export const hydraulicsCalcMethods: CalcMethod[] = [
       const warnings = [...r.warnings];
       if (r.blocked)
         warnings.push(
-          `Water below about ${r.dividingStreamlineHeight.toPrecision(3)} m above the base (the dividing streamline) cannot pass over the obstacle and is held upstream.`,
+          note(
+            'blocked-below-dividing-streamline',
+            `Water below about ${r.dividingStreamlineHeight.toPrecision(3)} m above the base (the dividing streamline) cannot pass over the obstacle and is held upstream.`,
+          ),
         );
       return {
         results: {

@@ -1,4 +1,5 @@
 import { requireInRange } from '../core/range';
+import { caution, outsideValidity, type Warning } from '../core/warning';
 import type { MethodInfo } from '../core/method';
 import { brentRoot } from '../numerics/roots';
 
@@ -52,7 +53,7 @@ export interface FiniteDepthJump {
   /** true when no conjugate state exists and the results are the limiting (critical) state */
   limited: boolean;
   method: string;
-  warnings: string[];
+  warnings: Warning[];
 }
 
 const GP = { min: 1e-6, max: 20 };
@@ -88,14 +89,20 @@ export function internalJumpFiniteDepth(
   const G2 = (Y: number) => (F * F) / Y ** 3 + (Fu * Fu) / (d - Y) ** 3;
   const lowerHead = (Y: number) => -(Fu * Fu) / (2 * (d - Y) ** 2) + Y + (F * F) / (2 * Y * Y);
   const shear = (Y: number) => (F / Y - Fu / (d - Y)) ** 2 / d; // (Δu)²/(g′D)
-  const warnings: string[] = [];
+  const warnings: Warning[] = [];
   const result = (Y2: number, Yip: number, limited: boolean): FiniteDepthJump => {
     if (Math.max(shear(1), shear(Y2)) > 1)
       warnings.push(
-        'The shear across the interface exceeds the long-wave stability limit (Δu)² < g′D (Long 1956): the interface is unstable and mixing across the jump is likely; the conjugate states are a rough guide.',
+        outsideValidity(
+          'interface-shear-unstable',
+          'The shear across the interface exceeds the long-wave stability limit (Δu)² < g′D (Long 1956): the interface is unstable and mixing across the jump is likely; the conjugate states are a rough guide.',
+        ),
       );
     const loss = (lowerHead(1) - lowerHead(Y2)) * y;
-    if (loss < 0 && !limited) warnings.push('The lower layer would gain energy across this jump: not a physical jump.');
+    if (loss < 0 && !limited)
+      warnings.push(
+        outsideValidity('energy-gain', 'The lower layer would gain energy across this jump: not a physical jump.'),
+      );
     return {
       downstreamThickness: Y2 * y,
       downstreamThicknessInterfacialPressure: Yip * y,
@@ -113,14 +120,24 @@ export function internalJumpFiniteDepth(
   if (G2(1) <= 1 || Ym <= 1) {
     warnings.push(
       G2(1) <= 1
-        ? `The upstream flow is subcritical (G = ${Math.sqrt(G2(1)).toPrecision(3)} ≤ 1): no jump forms; y2 = y1 is shown.`
-        : 'The upstream flow is supercritical through its upper layer; this form treats a thickening lower layer only: y2 = y1 is shown.',
+        ? caution(
+            'subcritical-no-jump',
+            `The upstream flow is subcritical (G = ${Math.sqrt(G2(1)).toPrecision(3)} ≤ 1): no jump forms; y2 = y1 is shown.`,
+          )
+        : outsideValidity(
+            'upper-layer-supercritical',
+            'The upstream flow is supercritical through its upper layer; this form treats a thickening lower layer only: y2 = y1 is shown.',
+            'upper_discharge',
+          ),
     );
     return result(1, 1, false);
   }
   if (G2(Ym) >= 1) {
     warnings.push(
-      'No subcritical state exists for these discharges in this depth: the flow cannot jump to a subcritical state; the thickness of least G is shown.',
+      caution(
+        'no-subcritical-state',
+        'No subcritical state exists for these discharges in this depth: the flow cannot jump to a subcritical state; the thickness of least G is shown.',
+      ),
     );
     return result(Ym, Ym, true);
   }
@@ -137,7 +154,10 @@ export function internalJumpFiniteDepth(
     Yip = solve(pressureClosure) ?? Yc2;
   if (Y2 === undefined) {
     warnings.push(
-      `The jump exceeds the largest one the depth allows: no conjugate state, the downstream flow would have to pass the second critical thickness ${(Yc2 * y).toPrecision(3)} m. The jump cannot stand and is swept downstream (or the flow chokes); that limiting state is shown.`,
+      caution(
+        'jump-exceeds-depth',
+        `The jump exceeds the largest one the depth allows: no conjugate state, the downstream flow would have to pass the second critical thickness ${(Yc2 * y).toPrecision(3)} m. The jump cannot stand and is swept downstream (or the flow chokes); that limiting state is shown.`,
+      ),
     );
     return result(Yc2, Yip, true);
   }

@@ -1,4 +1,5 @@
 import { requireInRange } from '../core/range';
+import { note, outsideValidity, type Warning } from '../core/warning';
 import type { MethodInfo } from '../core/method';
 
 export const STRATIFIED_OBSTACLE_FLOW: MethodInfo = {
@@ -30,7 +31,7 @@ export interface ObstacleFlow {
   /** mode-1 lee-wave length in a channel of depth H, undefined when U/(NH) ≥ 1/π [m] */
   channelLeeWavelength?: number;
   method: string;
-  warnings: string[];
+  warnings: Warning[];
 }
 
 /**
@@ -55,14 +56,21 @@ export function stratifiedObstacleFlow(
   const blocked = froude < 1;
   const kz1 = Math.PI / H;
   const kx2 = (N / U) ** 2 - kz1 ** 2;
-  const warnings: string[] = [];
+  const warnings: Warning[] = [];
   if (kx2 <= 0)
     warnings.push(
-      `U/(NH) = ${froudeDepth.toPrecision(3)} ≥ 1/π: the flow is faster than the first internal mode, so no stationary lee waves fit in the depth; 2πU/N is only the deep-water scale.`,
+      note(
+        'no-channel-lee-waves',
+        `U/(NH) = ${froudeDepth.toPrecision(3)} ≥ 1/π: the flow is faster than the first internal mode, so no stationary lee waves fit in the depth; 2πU/N is only the deep-water scale.`,
+      ),
     );
   if (h > 0.5 * H)
     warnings.push(
-      'The obstacle fills more than half the depth: the flow is controlled by the constriction (two-layer or channel hydraulics), beyond this screening.',
+      outsideValidity(
+        'obstacle-fills-depth',
+        'The obstacle fills more than half the depth: the flow is controlled by the constriction (two-layer or channel hydraulics), beyond this screening.',
+        'obstacle_height',
+      ),
     );
   return {
     froude,

@@ -1,4 +1,5 @@
 import { requireInRange } from '../core/range';
+import { caution, note, type Warning } from '../core/warning';
 import { scalar, validityWarnings, type MethodInfo, type Scalar } from '../core/method';
 
 /** Two-layer hydraulics, Boussinesq, rigid lid unless said otherwise. Layer 1 on top, layer 2 below. */
@@ -27,7 +28,7 @@ export interface CompositeFroude {
   /** 'subcritical' (G < 1: interfacial waves travel both ways), 'critical' (|G − 1| ≤ 2 %), 'supercritical' */
   state: 'subcritical' | 'critical' | 'supercritical';
   method: string;
-  warnings: string[];
+  warnings: Warning[];
 }
 
 /**
@@ -105,7 +106,7 @@ export interface InternalJump {
   /** upstream layer Froude number F1 [1] */
   froude: number;
   method: string;
-  warnings: string[];
+  warnings: Warning[];
 }
 
 /**
@@ -121,10 +122,13 @@ export function internalHydraulicJump(q: number, y1: number, gPrime: number, tot
   const y = requireInRange('upstream_thickness', y1, 'm', DEPTH);
   const g = requireInRange('g_prime', gPrime, 'm/s2', GP);
   const F = flux / Math.sqrt(g * y ** 3);
-  const warnings: string[] = [];
+  const warnings: Warning[] = [];
   if (F <= 1)
     warnings.push(
-      `F1 = ${F.toPrecision(3)} ≤ 1: the upstream flow is subcritical and no jump forms; the conjugate thickness is shown for reference only.`,
+      caution(
+        'subcritical-no-jump',
+        `F1 = ${F.toPrecision(3)} ≤ 1: the upstream flow is subcritical and no jump forms; the conjugate thickness is shown for reference only.`,
+      ),
     );
   const y2 = 0.5 * y * (Math.sqrt(1 + 8 * F * F) - 1);
   if (totalDepth !== undefined) {
@@ -165,7 +169,11 @@ export function curtainWallWithdrawalMax(gPrime: number, lipHeight: number, inte
   const warnings =
     a > (2 * Y) / 3
       ? [
-          'The lip is above the critical depth 2Y/3: the flow under the wall is subcritical and draws the interface down gently.',
+          note(
+            'subcritical-lip',
+            'The lip is above the critical depth 2Y/3: the flow under the wall is subcritical and draws the interface down gently.',
+            'opening',
+          ),
         ]
       : [];
   return scalar(CURTAIN_WALL_WITHDRAWAL, a * Math.sqrt(2 * g * (Y - a)), 'm2/s', {}, warnings);

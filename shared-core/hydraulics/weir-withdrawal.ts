@@ -1,4 +1,5 @@
 import { GRAVITY } from '../quantities';
+import { caution, note, type Warning } from '../core/warning';
 import { requireInRange } from '../core/range';
 import { scalar, type MethodInfo, type Scalar } from '../core/method';
 
@@ -37,19 +38,29 @@ export function weirSkimmingWithdrawalMax(gPrime: number, crestDepth: number, in
   const criticalFreeSurface = (2 / 3) ** 1.5 * Math.sqrt(GRAVITY * h ** 3);
   if (g * (Y - h) >= (GRAVITY * h) / 3) {
     return scalar(WEIR_SKIMMING_WITHDRAWAL, criticalFreeSurface, 'm2/s', {}, [
-      'The interface lies so deep that the overflow reaches free-surface critical flow over the crest before the lower layer is lifted to it: lower-layer water is not drawn; the value is the critical discharge (2/3)^{3/2}√(g h³) of the crest.',
+      note(
+        'crest-controls-overflow',
+        'The interface lies so deep that the overflow reaches free-surface critical flow over the crest before the lower layer is lifted to it: lower-layer water is not drawn; the value is the critical discharge (2/3)^{3/2}√(g h³) of the crest.',
+      ),
     ]);
   }
   const u = Math.sqrt(2 * g * (Y - h)),
     q = u * (h - (u * u) / (2 * GRAVITY));
-  const warnings =
+  const warnings: Warning[] =
     h > (2 * Y) / 3
       ? [
-          'The crest is deeper than the critical depth 2Y/3: the skimmed layer stays subcritical up to the crest and lifts the interface gently.',
+          note(
+            'subcritical-crest',
+            'The crest is deeper than the critical depth 2Y/3: the skimmed layer stays subcritical up to the crest and lifts the interface gently.',
+            'opening',
+          ),
         ]
       : [];
   warnings.push(
-    `A freely overflowing crest passes about ${criticalFreeSurface.toPrecision(3)} m2/s at this head, ${(criticalFreeSurface / q).toPrecision(3)} times the limit: without throttling (gate, submerged outlet) lower-layer water is drawn.`,
+    caution(
+      'free-overflow-draws-lower-layer',
+      `A freely overflowing crest passes about ${criticalFreeSurface.toPrecision(3)} m2/s at this head, ${(criticalFreeSurface / q).toPrecision(3)} times the limit: without throttling (gate, submerged outlet) lower-layer water is drawn.`,
+    ),
   );
   return scalar(WEIR_SKIMMING_WITHDRAWAL, q, 'm2/s', {}, warnings);
 }
