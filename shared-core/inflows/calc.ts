@@ -1,4 +1,5 @@
 import { num, text } from '../calc/resolve';
+import { uniqueWarnings } from '../core/warning';
 import { arg, type CalcMethod, type CalcOutput, type ResultValue, type Series } from '../calc/types';
 import { InputError } from '../core/errors';
 import { positive, nonNegative } from '../core/range';
@@ -12,6 +13,7 @@ export function underflowSeries(path: UnderflowPath): Series[] {
   const distance = { label: 'Distance along the bed from the plunge line', unit: 'm', values: [...path.distance] };
   return [
     {
+      kind: 'underflow-path',
       title: 'Underflow path',
       x: distance,
       y: [{ label: 'Depth of the current', unit: 'm', values: [...path.depth] }],
@@ -19,12 +21,14 @@ export function underflowSeries(path: UnderflowPath): Series[] {
       caption: 'The current runs down the bed until it meets water of its own density',
     },
     {
+      kind: 'underflow-discharge',
       title: 'Underflow discharge',
       x: distance,
       y: [{ label: 'Discharge of the current', unit: 'm3/s', values: [...path.discharge] }],
       caption: 'Discharge grows by entrainment of reservoir water',
     },
     {
+      kind: 'underflow-temperature',
       title: 'Underflow temperature',
       x: distance,
       y: [{ label: 'Temperature of the current', unit: 'degC', values: [...path.temperature] }],
@@ -58,9 +62,11 @@ function runUnderflow(a: CalcArgs): CalcOutput {
       ? `The inflow plunges at ${r.plungeDepth.toFixed(1)} m and runs down the bed until it leaves it as an interflow at ${u.insertionDepth.toFixed(1)} m.`
       : 'The inflow plunges and runs down the bed to the bottom of the profile without meeting water of its own density.',
   );
+  const stopped = u.status === 'max-steps' || u.status === 'step-failed';
   return {
     results,
-    warnings: [...r.warnings, ...u.warnings],
+    ...(stopped ? { incomplete: `the underflow integration stopped early: ${u.message}` } : {}),
+    warnings: uniqueWarnings(r.warnings),
     sources: [PLUNGE_AKIYAMA_STEFAN_1984.source, UNDERFLOW_NORMAL_STATE.source],
     series: underflowSeries(u.path),
   };

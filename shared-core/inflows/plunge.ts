@@ -1,4 +1,5 @@
 import { nonNegative, positive, requireInRange } from '../core/range';
+import { outsideValidity, type Warning } from '../core/warning';
 import { scalar, type MethodInfo, type Scalar } from '../core/method';
 
 export const PLUNGE_AKIYAMA_STEFAN_1984: MethodInfo = {
@@ -63,7 +64,7 @@ export interface MixedInflow {
   discharge: number;
   /** the mixed value of each given property (same keys as the input) */
   values: Record<string, number>;
-  warnings: string[];
+  warnings: Warning[];
 }
 
 /**
@@ -82,6 +83,14 @@ export function mixAtPlunge(
   const values: Record<string, number> = {};
   for (const [k, v] of Object.entries(inflow)) values[k] = (v + phi * (surface[k] ?? v)) / (1 + phi);
   const warnings =
-    phi > 0.5 ? [`initial_mixing = ${phi} is above the reported range 0 … 0.5 of ${PLUNGE_INITIAL_MIXING.title}.`] : [];
+    phi > 0.5
+      ? [
+          outsideValidity(
+            'validity-range',
+            `initial_mixing = ${phi} is above the reported range 0 … 0.5 of ${PLUNGE_INITIAL_MIXING.title}.`,
+            'initial_mixing',
+          ),
+        ]
+      : [];
   return { discharge: q * (1 + phi), values, warnings };
 }

@@ -1,4 +1,5 @@
 import { requireInRange } from '../core/range';
+import type { Warning } from '../core/warning';
 import { GRAVITY } from '../quantities';
 import type { Profile } from '../profile/profile';
 import { waterDensity } from '../water/density';
@@ -32,7 +33,7 @@ export interface RiverInflowResult {
   /** discharge, density and temperature after plunge-line mixing */
   mixed: { discharge: number; density: number; temperature: number };
   underflow: UnderflowResult;
-  warnings: string[];
+  warnings: Warning[];
 }
 
 /**

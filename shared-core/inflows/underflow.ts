@@ -1,4 +1,5 @@
 import { InputError } from '../core/errors';
+import { caution, note, outsideValidity, type Warning } from '../core/warning';
 import { nonNegative, positive, requireInRange } from '../core/range';
 import type { MethodInfo } from '../core/method';
 import { GRAVITY } from '../quantities';
@@ -76,7 +77,7 @@ export interface UnderflowResult {
   message: string;
   events: { name: string; distance: number }[];
   evaluations: number;
-  warnings: string[];
+  warnings: Warning[];
 }
 
 /** Normal-state Richardson number of a current on slope tanθ: Ri tanθ = C_D + E(Ri) (Ellison & Turner 1959). */
@@ -108,14 +109,21 @@ export function underflowEllisonTurner1959(p: Profile, input: UnderflowInput): U
   const sin = s / Math.sqrt(1 + s * s);
   const ri = normalRichardson(s, cd, law),
     e = entrainment(law, ri);
-  const warnings: string[] = [];
+  const warnings: Warning[] = [];
   if (s < 0.001 || s > 0.2)
     warnings.push(
-      `bed_slope = ${s} is outside 0.001 … 0.2 of ${UNDERFLOW_NORMAL_STATE.title}; the result is an extrapolation.`,
+      outsideValidity(
+        'validity-range',
+        `bed_slope = ${s} is outside 0.001 … 0.2 of ${UNDERFLOW_NORMAL_STATE.title}; the result is an extrapolation.`,
+        'bed_slope',
+      ),
     );
   if (e === 0)
     warnings.push(
-      'At this slope and drag the normal-state Richardson number exceeds 0.8: the current entrains nothing (Ellison & Turner 1959).',
+      note(
+        'no-entrainment',
+        'At this slope and drag the normal-state Richardson number exceeds 0.8: the current entrains nothing (Ellison & Turner 1959).',
+      ),
     );
   const rhoA = (d: number) => interpolateAt(p.depth, p.density, d);
   const tA = (d: number) => interpolateAt(p.depth, p.temperature, d);
@@ -163,14 +171,21 @@ export function underflowEllisonTurner1959(p: Profile, input: UnderflowInput): U
   const reachedPoint = point !== undefined && sol.status === 'completed' && point <= (bed - d0) / sin;
   if (inserted && point !== undefined)
     warnings.push(
-      `The current leaves the bed at ${path.depth[last].toFixed(1)} m depth, ${sol.t[last].toFixed(0)} m from the start, before the point of interest; its travel beyond as an interflow is not estimated here.`,
+      note(
+        'leaves-bed-before-point',
+        `The current leaves the bed at ${path.depth[last].toFixed(1)} m depth, ${sol.t[last].toFixed(0)} m from the start, before the point of interest; its travel beyond as an interflow is not estimated here.`,
+        'distance',
+      ),
     );
   if (!inserted && !reachedPoint && sol.status === 'completed')
     warnings.push(
-      `The current reaches the deepest bed (${bed} m) still denser than the water there: it pools at the bottom.`,
+      note(
+        'pools-at-bottom',
+        `The current reaches the deepest bed (${bed} m) still denser than the water there: it pools at the bottom.`,
+      ),
     );
   if (sol.status === 'max-steps' || sol.status === 'step-failed')
-    warnings.push(`The integration stopped early: ${sol.message}.`);
+    warnings.push(caution('integration-stopped', `The integration stopped early: ${sol.message}.`));
   return {
     path,
     insertionDepth: inserted ? path.depth[last] : undefined,

@@ -142,7 +142,10 @@ describe('inflow invariants', () => {
     expect(r.mixed.discharge).toBeCloseTo(27.5, 9);
     expect(r.underflow.insertionDepth).toBeGreaterThan(r.plungeDepth);
     expect(r.underflow.travelTimeToPoint).toBeUndefined();
-    expect(r.warnings.some((w) => w.includes('leaves the bed'))).toBe(true);
+    expect(r.warnings.find((w) => w.code === 'leaves-bed-before-point')).toMatchObject({
+      severity: 'note',
+      input: 'distance',
+    });
   });
 });
 
