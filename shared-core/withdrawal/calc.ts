@@ -1,5 +1,7 @@
 import { num, text } from '../calc/resolve';
+import type { WithdrawalZone } from '../calc/model';
 import { arg, type CalcMethod, type Series } from '../calc/types';
+import { note } from '../core/warning';
 import { formatShort, InputError } from '../core/errors';
 import { positive } from '../core/range';
 import { criticalDischargeCraya1949, CRAYA_1949, SINK_POSITIONS, type SinkKind, type SinkPosition } from './two-layer';
@@ -7,7 +9,8 @@ import { withdrawalLayer, WITHDRAWAL_LINE_SINK, WITHDRAWAL_POINT_SINK } from './
 import { WITHDRAWAL_MEASURED_PROFILE } from './measured';
 import { WITHDRAWAL_VELOCITY, withdrawalVelocityProfile } from './outflow';
 import type { Profile } from '../profile/profile';
-import { optimiseRelease, RELEASE_BLEND, type Port } from './blend';
+import { checkPortCount, RELEASE_BLEND, type Port } from './blend';
+import { optimiseRelease, type OptimisedRelease } from './release-optimiser';
 import {
   groupFluxProfile,
   WITHDRAWAL_INTERFERENCE,
@@ -46,6 +49,7 @@ export function parsePorts(textValue: string): Port[] {
       'depth:capacity pairs, e.g. 5:40,30:40',
       'give at least one port as depth:capacity',
     );
+  checkPortCount(pairs.length);
   return pairs.map((pair) => {
     const m = /^([-+]?\d*\.?\d+(?:[eE][-+]?\d+)?)\s*:\s*([-+]?\d*\.?\d+(?:[eE][-+]?\d+)?)$/.exec(pair);
     if (!m)
@@ -133,6 +137,14 @@ export const withdrawalCalcMethods: CalcMethod[] = [
       SINK,
       {
         kind: 'number',
+        name: 'port_depth',
+        unit: 'm',
+        description: 'depth of the port below the surface, to place the layer in the section (optional)',
+        optional: true,
+        range: { min: 0, max: 11000 },
+      },
+      {
+        kind: 'number',
         name: 'reservoir_length',
         unit: 'm',
         description: 'reservoir length at the intake level, for the regime (default: inertial assumed)',
@@ -159,8 +171,20 @@ export const withdrawalCalcMethods: CalcMethod[] = [
         length: arg.optNum(a, 'reservoir_length'),
       });
       const regime = r.regimeAssumed ? 'inertial (assumed: no reservoir length)' : r.regime;
+      const portDepth = arg.optNum(a, 'port_depth');
       return {
         results: { thickness: num(r.totalThickness, 'm'), regime: text(regime) },
+        // the layer drawn around the port; it cannot rise above the surface (the bed is not known here)
+        ...(portDepth === undefined
+          ? {}
+          : {
+              model: {
+                kind: 'withdrawal-layer' as const,
+                portDepth,
+                top: Math.max(0, portDepth - r.halfThickness),
+                bottom: portDepth + r.halfThickness,
+              },
+            }),
         warnings: r.warnings,
         sources: [(sink === 'line' ? WITHDRAWAL_LINE_SINK : WITHDRAWAL_POINT_SINK).source],
       };
@@ -217,16 +241,22 @@ export const withdrawalCalcMethods: CalcMethod[] = [
       );
       const flows = ports.map((port, i) => `${formatShort(port.depth)} m: ${r.flows[i].toFixed(2)} m3/s`).join('; ');
       const warnings = [
-        `Ports are treated as orifices (point sinks); ${interference === 'combined' ? 'ports whose withdrawal layers overlap are combined (from memory, see the sources)' : 'interference between their withdrawal layers is ignored'}.`,
+        note(
+          'ports-as-point-sinks',
+          `Ports are treated as orifices (point sinks); ${interference === 'combined' ? 'ports whose withdrawal layers overlap are combined (from memory, see the sources)' : 'interference between their withdrawal layers is ignored'}.`,
+          'interference',
+        ),
         ...r.warnings,
       ];
+      const groups = interference === 'combined' ? r.groups : [];
       return {
         results: {
           temperature: num(r.temperature, 'degC'),
           port_flows: text(flows),
           feasible: text(r.feasible ? 'yes' : 'no'),
         },
-        series: releaseSeries(p, ports, r.flows, interference === 'combined' ? r.groups : []),
+        series: releaseSeries(p, ports, r.flows, groups),
+        model: { kind: 'withdrawal-zones', zones: withdrawalZones(ports, r, groups) },
         warnings,
         sources: [
           RELEASE_BLEND.source,
@@ -252,6 +282,7 @@ export function releaseSeries(
 ): Series[] {
   const out: Series[] = [
     {
+      kind: 'port-flows',
       title: 'Port flows',
       x: { label: 'Port depth', unit: 'm', values: ports.map((q) => q.depth) },
       y: [
@@ -264,10 +295,12 @@ export function releaseSeries(
   ];
   const depths = ports.map((q) => q.depth);
   const combined = groups.filter((g) => g.ports.length > 1);
+  const inGroup = new Set(combined.flatMap((g) => g.ports));
   ports.forEach((port, i) => {
-    if (!(flows[i] > 0) || combined.some((g) => g.ports.includes(i))) return;
+    if (!(flows[i] > 0) || inGroup.has(i)) return;
     const v = withdrawalVelocityProfile(p, port.depth, flows[i], { sink: 'point' });
     out.push({
+      kind: 'withdrawal-outflow',
       title: `Withdrawal at the port at ${formatShort(port.depth)} m`,
       x: { label: 'Depth', unit: 'm', values: v.depth },
       y: [{ label: 'Outflow per metre of depth', unit: 'm2/s', values: v.fluxPerDepth }],
@@ -279,6 +312,7 @@ export function releaseSeries(
     const v = groupFluxProfile(p, depths, flows, g, { sink: 'point' });
     const names = g.ports.map((i) => `${formatShort(depths[i])} m`).join(', ');
     out.push({
+      kind: 'withdrawal-outflow',
       title: `Combined withdrawal of the ports at ${names}`,
       x: { label: 'Depth', unit: 'm', values: v.depth },
       y: [{ label: 'Outflow per metre of depth', unit: 'm2/s', values: v.fluxPerDepth }],
@@ -287,4 +321,34 @@ export function releaseSeries(
     });
   }
   return out;
+}
+
+/**
+ * The zones a release draws from, in port order: each open port alone (its layer at its own flow), or, for ports that
+ * interfere (`groups`: the combined withdrawals), one zone per group, indexed by its shallowest port.
+ */
+export function withdrawalZones(
+  ports: readonly Port[],
+  r: OptimisedRelease,
+  groups: readonly InterferenceGroup[],
+): WithdrawalZone[] {
+  const at = (i: number) => `${formatShort(ports[i].depth)} m`;
+  const combined = groups.filter((g) => g.ports.length > 1);
+  const inGroup = new Set(combined.flatMap((g) => g.ports));
+  const alone = ports
+    .map((_, i) => i)
+    .filter((i) => r.flows[i] > 0 && !inGroup.has(i))
+    .map((i) => ({
+      label: `port at ${at(i)}`,
+      port: i,
+      top: r.ports[i].limits.topDepth,
+      bottom: r.ports[i].limits.bottomDepth,
+    }));
+  const joined = combined.map((g) => ({
+    label: `combined: ports at ${g.ports.map(at).join(', ')}`,
+    port: g.ports[0],
+    top: g.topDepth,
+    bottom: g.bottomDepth,
+  }));
+  return [...alone, ...joined].sort((x, y) => x.port - y.port);
 }

@@ -1,5 +1,6 @@
 import type { MethodInfo } from '../core/method';
-import { interpolateAt, type Profile } from '../profile/profile';
+import type { Profile } from '../profile/profile';
+import { DepthCursor, firstIndex } from './depth-cursor';
 import { portOutflow, withdrawalVelocityProfile, type PortOutflow } from './outflow';
 import type { ProfileWithdrawalOptions } from './measured';
 
@@ -43,15 +44,19 @@ export const directOutflow =
   (depth, flow) =>
     portOutflow(p, depth, flow, o);
 
-/** A memoised outflow function for one profile and set of options. */
+/**
+ * A memoised outflow function for one profile and set of options (keyed by depth, then flow). The optimiser evaluates
+ * many splits in which most ports keep their flow; their outflows are then looked up, not recomputed.
+ */
 export function memoisedOutflow(p: Profile, o: ProfileWithdrawalOptions): OutflowFunction {
-  const memo = new Map<string, PortOutflow>();
+  const byDepth = new Map<number, Map<number, PortOutflow>>();
   return (depth, flow) => {
-    const key = `${depth}|${flow}`;
-    let out = memo.get(key);
+    let memo = byDepth.get(depth);
+    if (!memo) byDepth.set(depth, (memo = new Map()));
+    let out = memo.get(flow);
     if (!out) {
       out = portOutflow(p, depth, flow, o);
-      memo.set(key, out);
+      memo.set(flow, out);
     }
     return out;
   };
@@ -146,9 +151,15 @@ export function groupFluxProfile(
     v: withdrawalVelocityProfile(p, depths[i], g.flow, o),
   }));
   const depth = [...new Set(members.flatMap((m) => m.v.depth))].sort((a, b) => a - b);
-  const at = (v: { depth: number[]; fluxPerDepth: number[] }, d: number) =>
-    d < v.depth[0] || d > v.depth[v.depth.length - 1] || v.depth.length < 2
-      ? 0
-      : interpolateAt(v.depth, v.fluxPerDepth, d);
-  return { depth, fluxPerDepth: depth.map((d) => members.reduce((s, m) => s + m.share * at(m.v, d), 0)) };
+  const fluxPerDepth = depth.map(() => 0);
+  // each member adds its piecewise-linear curve over its own span only (it is zero outside it)
+  for (const m of members) {
+    const v = m.v;
+    if (v.depth.length < 2) continue;
+    const cursor = new DepthCursor(v.depth);
+    const last = v.depth[v.depth.length - 1];
+    for (let k = firstIndex(depth, (d) => d >= v.depth[0]); k < depth.length && depth[k] <= last; k++)
+      fluxPerDepth[k] += m.share * cursor.seek(depth[k]).value(v.fluxPerDepth);
+  }
+  return { depth, fluxPerDepth };
 }

@@ -1,6 +1,7 @@
 import { InputError } from '../core/errors';
 import { positive, requireInRange } from '../core/range';
 import { validityWarnings, type MethodInfo } from '../core/method';
+import { caution, note, outsideValidity, type Warning } from '../core/warning';
 import type { SinkKind } from './two-layer';
 
 /** Flow regime of a withdrawal layer, in plain words: inertia or viscosity balances buoyancy. */
@@ -64,7 +65,7 @@ export interface LayerResult {
   /** true when the regime was assumed inertial for want of a reservoir length */
   regimeAssumed: boolean;
   method: string;
-  warnings: string[];
+  warnings: Warning[];
 }
 
 /**
@@ -131,13 +132,26 @@ export function withdrawalLayer(input: LayerInput): LayerResult {
   const warnings = core.r === undefined ? [] : validityWarnings(info, { R: core.r });
   if (core.regimeAssumed)
     warnings.push(
-      'No reservoir length given: the inertial regime is assumed (it applies when R = F Gr^⅓ > 1, usual for reservoir outlets).',
+      note(
+        'regime-assumed-inertial',
+        'No reservoir length given: the inertial regime is assumed (it applies when R = F Gr^⅓ > 1, usual for reservoir outlets).',
+        'reservoir_length',
+      ),
     );
   else if (core.r !== undefined && core.r > 0.5 && core.r < 2)
-    warnings.push(`R = ${core.r.toFixed(2)} is near 1: the layer is between the inertial and viscous regimes.`);
+    warnings.push(
+      caution(
+        'regime-transition',
+        `R = ${core.r.toFixed(2)} is near 1: the layer is between the inertial and viscous regimes.`,
+      ),
+    );
   if (length !== undefined && core.halfThickness > length)
     warnings.push(
-      'The withdrawal layer is thicker than the reservoir is long: the steady-layer formulas do not apply.',
+      outsideValidity(
+        'layer-thicker-than-reservoir',
+        'The withdrawal layer is thicker than the reservoir is long: the steady-layer formulas do not apply.',
+        'reservoir_length',
+      ),
     );
   return { ...core, method: info.id, warnings };
 }

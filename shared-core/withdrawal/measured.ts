@@ -3,7 +3,9 @@ import { nonNegative, positive, requireInRange } from '../core/range';
 import type { MethodInfo } from '../core/method';
 import { GRAVITY } from '../quantities';
 import { brentRoot } from '../numerics/roots';
-import { interpolateAt, profileBottom, type Profile } from '../profile/profile';
+import { asWarning, caution, type Warning } from '../core/warning';
+import { profileBottom, type Profile } from '../profile/profile';
+import { DepthCursor } from './depth-cursor';
 import {
   halfThicknessLineSinkImberger1976,
   halfThicknessPointSinkImbergerPatterson1990,
@@ -62,7 +64,7 @@ export interface ProfileWithdrawal {
   upper: SideLimit;
   lower: SideLimit;
   method: string;
-  warnings: string[];
+  warnings: Warning[];
 }
 
 /** Validated options shared by the profile methods. */
@@ -106,8 +108,10 @@ function sideLimit(
   sign: -1 | 1,
   maxDistance: number,
 ): SideLimit {
-  const rhoPort = interpolateAt(p.depth, p.density, portDepth);
-  const drho = (a: number) => sign * (interpolateAt(p.depth, p.density, portDepth + sign * a) - rhoPort);
+  const cursor = new DepthCursor(p.depth);
+  const rhoPort = cursor.seek(portDepth).value(p.density);
+  // the scan walks away from the port and the root search stays in one step of it: the cursor moves a little each time
+  const drho = (a: number) => sign * (cursor.seek(portDepth + sign * a).value(p.density) - rhoPort);
   const nAt = (a: number) => {
     const n2 = (GRAVITY * drho(a)) / (rhoPort * a);
     return n2 > 0 ? Math.sqrt(n2) : 0;
@@ -167,18 +171,27 @@ export function withdrawalLimitsBohanGrace1973(
   const { bed } = checkProfileOptions(p, portDepth, discharge, o);
   const upper = sideLimit(p, portDepth, discharge, o, -1, portDepth);
   const lower = sideLimit(p, portDepth, discharge, o, 1, bed - portDepth);
-  const warnings: string[] = [];
+  const warnings: Warning[] = [];
   if (upper.cutByBoundary && portDepth > 0 && discharge > 0)
     warnings.push(
-      `The withdrawal layer of the port at ${formatShort(portDepth)} m reaches the surface: water is drawn from the surface down.`,
+      caution(
+        'layer-reaches-surface',
+        `The withdrawal layer of the port at ${formatShort(portDepth)} m reaches the surface: water is drawn from the surface down.`,
+      ),
     );
   if (lower.cutByBoundary && bed > portDepth && discharge > 0)
     warnings.push(
-      `The withdrawal layer of the port at ${formatShort(portDepth)} m reaches the bed at ${formatShort(bed)} m.`,
+      caution(
+        'layer-reaches-bed',
+        `The withdrawal layer of the port at ${formatShort(portDepth)} m reaches the bed at ${formatShort(bed)} m.`,
+      ),
     );
   if (p.depth[0] > 0 && portDepth - upper.distance < p.depth[0])
     warnings.push(
-      `The layer reaches above the shallowest sample (${p.depth[0]} m); the shallowest values are used up to the surface.`,
+      caution(
+        'layer-above-shallowest-sample',
+        `The layer reaches above the shallowest sample (${p.depth[0]} m); the shallowest values are used up to the surface.`,
+      ),
     );
   return {
     portDepth,
@@ -188,6 +201,6 @@ export function withdrawalLimitsBohanGrace1973(
     upper,
     lower,
     method: WITHDRAWAL_MEASURED_PROFILE.id,
-    warnings: [...p.warnings, ...warnings],
+    warnings: [...p.warnings.map(asWarning), ...warnings],
   };
 }

@@ -1,11 +1,9 @@
 import type { MethodInfo } from '../core/method';
-import { interpolateAt, profileColumns, type Profile } from '../profile/profile';
-import {
-  withdrawalLimitsBohanGrace1973,
-  type ProfileWithdrawal,
-  type ProfileWithdrawalOptions,
-  type SideLimit,
-} from './measured';
+import type { Warning } from '../core/warning';
+import { interpolateAt, type Profile } from '../profile/profile';
+import { DepthCursor } from './depth-cursor';
+import { LayerShape, layerNodes } from './layer-shape';
+import { withdrawalLimitsBohanGrace1973, type ProfileWithdrawal, type ProfileWithdrawalOptions } from './measured';
 
 export const WITHDRAWAL_VELOCITY: MethodInfo = {
   id: 'withdrawal-velocity-bohan-grace1973',
@@ -19,29 +17,9 @@ export const WITHDRAWAL_VELOCITY: MethodInfo = {
   validity: {},
 };
 
-/**
- * Normalised velocity v/v_max in [0, 1] at depth d for a port's withdrawal layer:
- * 1 − max((Δρ/Δρ_limit)², (a/a_limit)²). In linear stratification both terms are the same parabola (Bohan & Grace 1973);
- * in neutral (mixed) water the distance term keeps the velocity falling away from the port, so a port drawing from a
- * mixed layer does not draw its far end as strongly as its own level. A side stopped by the surface or the bed falls off
- * over its unbounded half-thickness, but at most over the longer of the two sides (so neutral water, whose unbounded
- * half-thickness is infinite, is weighted like the layer on the other side; continuous as N → 0).
- */
+/** v/v_max in [0, 1] at depth d [m] of a port's withdrawal layer (the shape of LayerShape). */
 export function relativeVelocity(p: Profile, w: ProfileWithdrawal, d: number): number {
-  if (d < w.topDepth || d > w.bottomDepth) return 0;
-  const [side, other]: SideLimit[] = d < w.portDepth ? [w.upper, w.lower] : [w.lower, w.upper];
-  const a = Math.abs(d - w.portDepth);
-  if (side.distance === 0) return 1;
-  const reach = side.cutByBoundary
-    ? Math.min(side.unboundedHalfThickness, Math.max(side.distance, other.distance))
-    : side.distance;
-  let s = 1 - (a / reach) ** 2;
-  if (!side.cutByBoundary && side.densityDifference > 0) {
-    const rhoPort = interpolateAt(p.depth, p.density, w.portDepth);
-    const drho = Math.abs(interpolateAt(p.depth, p.density, d) - rhoPort);
-    s = Math.min(s, 1 - (drho / side.densityDifference) ** 2);
-  }
-  return Math.min(1, Math.max(0, s));
+  return new LayerShape(w, interpolateAt(p.depth, p.density, w.portDepth)).at(d, interpolateAt(p.depth, p.density, d));
 }
 
 /** Chart data of one port's withdrawal: velocity shape and flux per unit depth against depth. */
@@ -55,7 +33,15 @@ export interface WithdrawalVelocityProfile {
   limits: ProfileWithdrawal;
 }
 
-const GRID = 401;
+/** The nodes of a layer and v/v_max there, with the density read by one cursor walk. */
+function shapeOnNodes(p: Profile, w: ProfileWithdrawal): { depth: number[]; rel: number[] } {
+  const depth = layerNodes(p, w);
+  const cursor = new DepthCursor(p.depth);
+  const shape = new LayerShape(w, cursor.seek(w.portDepth).value(p.density));
+  const rel = new Array<number>(depth.length);
+  for (let k = 0; k < depth.length; k++) rel[k] = shape.at(depth[k], cursor.seek(depth[k]).value(p.density));
+  return { depth, rel };
+}
 
 /**
  * Velocity distribution of one port's withdrawal layer on a measured profile, for charts and for the outflow quality.
@@ -69,16 +55,9 @@ export function withdrawalVelocityProfile(
   o: ProfileWithdrawalOptions,
 ): WithdrawalVelocityProfile {
   const limits = withdrawalLimitsBohanGrace1973(p, portDepth, discharge, o);
-  const span = limits.bottomDepth - limits.topDepth;
-  if (!(span > 0)) return { depth: [portDepth], relativeVelocity: [1], fluxPerDepth: [0], limits };
-  // uniform grid plus the profile samples and the port, so the trapezoid rule never straddles a kink of the profile
-  const nodes = [
-    ...Array.from({ length: GRID }, (_, i) => limits.topDepth + (span * i) / (GRID - 1)),
-    portDepth,
-    ...p.depth.filter((d) => d > limits.topDepth && d < limits.bottomDepth),
-  ];
-  const depth = [...new Set(nodes.sort((a, b) => a - b))];
-  const rel = depth.map((d) => relativeVelocity(p, limits, d));
+  if (!(limits.bottomDepth - limits.topDepth > 0))
+    return { depth: [portDepth], relativeVelocity: [1], fluxPerDepth: [0], limits };
+  const { depth, rel } = shapeOnNodes(p, limits);
   const area = trapezoid(depth, rel);
   const fluxPerDepth = rel.map((s) => (area > 0 ? (discharge * s) / area : 0));
   return { depth, relativeVelocity: rel, fluxPerDepth, limits };
@@ -106,12 +85,23 @@ export interface PortOutflow {
   /** every profile column (temperature, salinity, sediment, density and the extras), flow-weighted */
   columns: OutflowColumn[];
   limits: ProfileWithdrawal;
-  warnings: string[];
+  warnings: Warning[];
+}
+
+/** The profile's columns by name, read in place (profileColumns() copies them). */
+function columnsOf(p: Profile): { name: string; unit: string; values: readonly number[] }[] {
+  return [
+    { name: 'temperature', unit: 'degC', values: p.temperature },
+    { name: 'salinity', unit: 'PSU', values: p.salinity },
+    { name: 'sediment', unit: 'kg/m3', values: p.sediment },
+    { name: 'density', unit: 'kg/m3', values: p.density },
+    ...p.extra,
+  ];
 }
 
 /**
- * Flow-weighted quality of one port's outflow: c̄ = ∫ v c dd / ∫ v dd for every column of the profile.
- * A closed port (discharge 0) reports the values at the port depth.
+ * Flow-weighted quality of one port's outflow: c̄ = ∫ v c dd / ∫ v dd for every column of the profile (trapezoid rule
+ * on the layer's nodes, one cursor walk). A closed port (discharge 0) reports the values at the port depth.
  */
 export function portOutflow(
   p: Profile,
@@ -119,27 +109,37 @@ export function portOutflow(
   discharge: number,
   o: ProfileWithdrawalOptions,
 ): PortOutflow {
-  const v = withdrawalVelocityProfile(p, portDepth, discharge, o);
-  const weight = trapezoid(v.depth, v.relativeVelocity);
-  const columns = profileColumns(p).map((c) => {
-    const at = (d: number) => interpolateAt(p.depth, c.values, d);
-    const value =
-      weight > 0
-        ? trapezoid(
-            v.depth,
-            v.depth.map((d, i) => v.relativeVelocity[i] * at(d)),
-          ) / weight
-        : at(portDepth);
-    return { name: c.name, unit: c.unit, value };
-  });
-  const get = (name: string) => columns.find((c) => c.name === name)!.value;
+  const limits = withdrawalLimitsBohanGrace1973(p, portDepth, discharge, o);
+  const named = columnsOf(p);
+  const sums = new Array<number>(named.length).fill(0);
+  let weight = 0;
+  if (limits.bottomDepth - limits.topDepth > 0) {
+    const { depth, rel } = shapeOnNodes(p, limits);
+    weight = trapezoid(depth, rel);
+    const cursor = new DepthCursor(p.depth);
+    const prev = new Array<number>(named.length).fill(0);
+    for (let i = 0; i < depth.length; i++) {
+      cursor.seek(depth[i]);
+      for (let k = 0; k < named.length; k++) {
+        const y = rel[i] * cursor.value(named[k].values);
+        if (i > 0) sums[k] += 0.5 * (y + prev[k]) * (depth[i] - depth[i - 1]);
+        prev[k] = y;
+      }
+    }
+  }
+  const atPort = new DepthCursor(p.depth).seek(portDepth);
+  const columns = named.map((c, k) => ({
+    name: c.name,
+    unit: c.unit,
+    value: weight > 0 ? sums[k] / weight : atPort.value(c.values),
+  }));
   return {
     portDepth,
     discharge,
-    temperature: get('temperature'),
-    density: get('density'),
+    temperature: columns[0].value,
+    density: columns[3].value,
     columns,
-    limits: v.limits,
-    warnings: v.limits.warnings,
+    limits,
+    warnings: limits.warnings,
   };
 }

@@ -1,6 +1,7 @@
 import { InputError } from '../core/errors';
 import { positive, requireInRange } from '../core/range';
 import { scalar, type MethodInfo, type Scalar } from '../core/method';
+import { outsideValidity } from '../core/warning';
 
 /** Sink shape: a slot across the whole width (line) or an orifice (point). */
 export type SinkKind = 'line' | 'point';
@@ -75,7 +76,11 @@ export function criticalDischargeCraya1949(
   const extra =
     b < 2 * h
       ? [
-          `The slot width ${b} m is less than twice the interface distance: the flow is three-dimensional and a point-sink estimate may be closer.`,
+          outsideValidity(
+            'slot-narrower-than-interface-distance',
+            `The slot width ${b} m is less than twice the interface distance: the flow is three-dimensional and a point-sink estimate may be closer.`,
+            'width',
+          ),
         ]
       : [];
   return scalar(CRAYA_1949, c * Math.sqrt(g * h ** 3) * b, 'm3/s', inputs, extra);

@@ -11,7 +11,8 @@ import {
 } from '../../../shared-core/withdrawal/layer';
 import { withdrawalLimitsBohanGrace1973 } from '../../../shared-core/withdrawal/measured';
 import { portOutflow, withdrawalVelocityProfile } from '../../../shared-core/withdrawal/outflow';
-import { blendRelease, optimiseRelease } from '../../../shared-core/withdrawal/blend';
+import { blendRelease } from '../../../shared-core/withdrawal/blend';
+import { optimiseRelease } from '../../../shared-core/withdrawal/release-optimiser';
 
 /** 10 °C, practical salinity 30 → 32 PSU linear over 0–40 m (TEOS-10, as in the generator). */
 const saltProfile = (temperature: (d: number) => number = () => 10) => {

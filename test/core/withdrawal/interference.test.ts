@@ -1,11 +1,13 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
 import { makeProfile, type Profile } from '../../../shared-core/profile/profile';
-import { blendRelease, optimiseRelease, type BlendOptions, type Port } from '../../../shared-core/withdrawal/blend';
+import { blendRelease, type BlendOptions, type Port } from '../../../shared-core/withdrawal/blend';
+import { optimiseRelease } from '../../../shared-core/withdrawal/release-optimiser';
 import { directOutflow, groupFluxProfile, interferenceGroups } from '../../../shared-core/withdrawal/interference';
 import { findCalcMethod } from '../../../shared-core/calc/registry';
 import { runCalc } from '../../../shared-core/calc/resolve';
 import { runCheckValues } from '../../helpers/check-values';
+import { parsePorts } from '../../../shared-core/withdrawal/calc';
 import { stableProfile } from './arbitraries';
 
 /** Linear density 1000 + 0.05 d kg/m³ and a tracer (d − 30)² on a 0.02 m grid over 0–60 m (as the generator). */
@@ -136,7 +138,10 @@ describe('combined interference invariants', () => {
     // temperature steps from about 6.71 to 6.75 °C: 6.74 °C cannot be reached with two ports
     const r = optimiseRelease(p, two, 100, { temperature: 6.74 }, combined);
     expect(r.feasible).toBe(false);
-    expect(r.warnings.join(' ')).toMatch(/jump/);
+    expect(r.warnings.find((w) => w.code === 'target-in-jump')).toMatchObject({
+      severity: 'caution',
+      input: 'target_temperature',
+    });
     expect(Math.abs(r.temperature - 6.74)).toBeLessThan(0.03);
     const three = optimiseRelease(p, [...two, { depth: 36, capacity: 20 }], 100, { temperature: 6.74 }, combined);
     expect(three.feasible).toBe(true);
@@ -158,8 +163,9 @@ describe('combined interference invariants', () => {
       { depth: 16, capacity: 20 },
     ];
     const c = blendRelease(p, close, [10, 10], combined);
-    expect(c.warnings.join(' ')).toMatch(/ports at 12 m and 16 m interfere/);
-    expect(blendRelease(p, close, [10, 10], { sink: 'point' }).warnings.join(' ')).toMatch(
+    expect(c.warnings.find((w) => w.code === 'ports-interfere')?.message).toMatch(/ports at 12 m and 16 m interfere/);
+    const alone = blendRelease(p, close, [10, 10], { sink: 'point' });
+    expect(alone.warnings.find((w) => w.code === 'interference-ignored')?.message).toMatch(
       /12 m and 16 m overlap, but each is computed as if/,
     );
     expect(interferenceGroups([12, 16], [10, 0], directOutflow(p, combined))).toHaveLength(1);
@@ -172,8 +178,17 @@ describe('combined interference invariants', () => {
       temperature: [22, 21.8, 19, 15, 12, 10.5, 9.8, 9.2],
     });
     const out = runCalc(method, { file, ports: '8:20,11:20', release: 20, target_temperature: 13 });
-    expect(out.warnings.join(' ')).toMatch(/interfere/);
-    expect(out.series!.some((s) => s.title.startsWith('Combined withdrawal'))).toBe(true);
+    expect(out.warnings.map((w) => w.code)).toContain('ports-interfere');
+    expect(out.series!.filter((s) => s.kind === 'withdrawal-outflow').map((s) => s.title)).toEqual([
+      'Combined withdrawal of the ports at 8 m, 11 m',
+    ]);
+    // the model's zone is the group's: from the upper limit of the 8 m port to the lower limit of the 11 m port
+    const direct = optimiseRelease(file, parsePorts('8:20,11:20'), 20, { temperature: 13 }, combined);
+    const group = direct.groups.find((g) => g.ports.length === 2)!;
+    expect(out.model).toEqual({
+      kind: 'withdrawal-zones',
+      zones: [{ label: 'combined: ports at 8 m, 11 m', port: 0, top: group.topDepth, bottom: group.bottomDepth }],
+    });
     const alone = runCalc(method, {
       file,
       ports: '8:20,11:20',
@@ -181,8 +196,19 @@ describe('combined interference invariants', () => {
       target_temperature: 13,
       interference: 'independent',
     });
-    expect(alone.warnings.join(' ')).toMatch(
-      /interference ignored|interference between their withdrawal layers is ignored/,
+    expect(alone.warnings.find((w) => w.code === 'ports-as-point-sinks')?.message).toMatch(
+      /interference between their withdrawal layers is ignored/,
     );
+    // each open port draws its own zone, its layer limits at its own flow
+    const apart = optimiseRelease(file, parsePorts('8:20,11:20'), 20, { temperature: 13 }, { sink: 'point' });
+    const zones = apart.ports
+      .map((o, i) => ({
+        label: `port at ${o.portDepth} m`,
+        port: i,
+        top: o.limits.topDepth,
+        bottom: o.limits.bottomDepth,
+      }))
+      .filter((_, i) => apart.flows[i] > 0);
+    expect(alone.model).toEqual({ kind: 'withdrawal-zones', zones });
   });
 });

@@ -1,11 +1,15 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
 import { InputError } from '../../../shared-core/core/errors';
+import { LIMITS } from '../../../shared-core/core/limits';
+import { findCalcMethod } from '../../../shared-core/calc/registry';
+import { runCalc } from '../../../shared-core/calc/resolve';
 import { makeProfile } from '../../../shared-core/profile/profile';
 import { criticalDischargeCraya1949 } from '../../../shared-core/withdrawal/two-layer';
 import { withdrawalLayer } from '../../../shared-core/withdrawal/layer';
 import { portOutflow } from '../../../shared-core/withdrawal/outflow';
-import { blendRelease, optimiseRelease } from '../../../shared-core/withdrawal/blend';
+import { blendRelease } from '../../../shared-core/withdrawal/blend';
+import { optimiseRelease } from '../../../shared-core/withdrawal/release-optimiser';
 import { parsePorts } from '../../../shared-core/withdrawal/calc';
 import { stableProfile } from './arbitraries';
 
@@ -80,7 +84,7 @@ describe('withdrawal invariants', () => {
             expect(r.flows.reduce((a, b) => a + b, 0)).toBeCloseTo(release, 6);
             if (r.feasible) expect(Math.abs(r.temperature - target)).toBeLessThan(2e-3);
             else if (target > r.achievable.min && target < r.achievable.max)
-              expect(r.warnings.join(' ')).toMatch(/jump/);
+              expect(r.warnings.map((w) => w.code)).toContain('target-in-jump');
             expect(Number.isFinite(r.temperature)).toBe(true);
           },
         ),
@@ -105,7 +109,7 @@ describe('withdrawal invariants', () => {
     expect(r.feasible).toBe(false);
     expect(5.7).toBeGreaterThan(r.achievable.min);
     expect(5.7).toBeLessThan(r.achievable.max);
-    expect(r.warnings.join(' ')).toMatch(/jump of the release temperature/);
+    expect(r.warnings.find((w) => w.code === 'target-in-jump')?.message).toMatch(/jump of the release temperature/);
   });
 
   it('a band target is met anywhere inside the band', () => {
@@ -181,5 +185,41 @@ describe('withdrawal bad input', () => {
         }
       }),
     );
+  });
+});
+
+describe('withdrawal limits and models', () => {
+  it('a port list longer than LIMITS.intakePorts is refused, naming the field, the count and the limit', () => {
+    const many = Array.from({ length: LIMITS.intakePorts + 1 }, (_, i) => `${i * 0.1}:1`).join(',');
+    expect(() => parsePorts(many)).toThrow(InputError);
+    expect(() => parsePorts(many)).toThrow(/ports = 201 .*limit of 200 ports/);
+    expect(parsePorts(many.split(',').slice(0, LIMITS.intakePorts).join(','))).toHaveLength(LIMITS.intakePorts);
+  });
+
+  it('withdrawal-layer places the layer around the port when its depth is given (δ = (Q/N)^⅓ each side)', () => {
+    // inertial point sink, Imberger & Patterson (1990), from memory: δ = (Q/N)^⅓ = (8/0.02)^⅓ ≈ 7.368 m
+    const method = findCalcMethod('withdrawal-layer')!;
+    const out = runCalc(method, { buoyancy_frequency: 0.02, discharge: 8, sink: 'point', port_depth: 20 });
+    const half = Math.cbrt(8 / 0.02);
+    expect(out.model).toEqual({ kind: 'withdrawal-layer', portDepth: 20, top: 20 - half, bottom: 20 + half });
+    // the layer is cut at the surface
+    const shallow = runCalc(method, { buoyancy_frequency: 0.02, discharge: 8, sink: 'point', port_depth: 3 });
+    expect(shallow.model).toMatchObject({ top: 0, bottom: 3 + half });
+    expect(runCalc(method, { buoyancy_frequency: 0.02, discharge: 8, sink: 'point' }).model).toBeUndefined();
+  });
+
+  it('release-blend returns one outflow curve per zone and a port-flow curve, each with its kind', () => {
+    const file = makeProfile({ depth: [0, 5, 10, 20, 40], temperature: [24, 23, 15, 10, 8] });
+    const out = runCalc(findCalcMethod('release-blend')!, {
+      file,
+      ports: '3:20,30:20',
+      release: 20,
+      target_temperature: 15,
+    });
+    expect(out.series!.map((s) => s.kind)).toEqual(['port-flows', 'withdrawal-outflow', 'withdrawal-outflow']);
+    expect(out.model?.kind === 'withdrawal-zones' && out.model.zones.map((z) => z.label)).toEqual([
+      'port at 3 m',
+      'port at 30 m',
+    ]);
   });
 });
