@@ -3,7 +3,7 @@ import { InputError } from '../core/errors';
 import { positive, requireInRange } from '../core/range';
 import type { MethodInfo } from '../core/method';
 import { caution, type Warning } from '../core/warning';
-import { interpolateAt, type Profile } from '../profile/profile';
+import { interpolateSorted, largestFinite, type Profile } from '../profile/profile';
 import { lowestEigenpairs, type TridiagonalPencil } from '../numerics/tridiagonal-eigen';
 
 export const VERTICAL_MODES: MethodInfo = {
@@ -86,7 +86,7 @@ export function verticalModesFromN2(column: N2Column, bottom: number, options: M
   const dz = H / cells;
   const depth = Array.from({ length: cells + 1 }, (_, j) => j * dz);
   const warnings: Warning[] = [];
-  const raw = depth.map((d) => interpolateAt(column.depth, column.n2, d));
+  const raw = interpolateSorted(column.depth, column.n2, depth);
   if (raw.some((v) => v < 0))
     warnings.push(
       caution(
@@ -97,19 +97,20 @@ export function verticalModesFromN2(column: N2Column, bottom: number, options: M
   const n2 = raw.map((v) => Math.max(0, v));
   const first = surface === 'free-surface' ? 0 : 1; // rigid lid: w(0) = 0 removes the surface node
   const nodes = cells - first; // bottom node (w = 0) excluded
-  const pencil: TridiagonalPencil = {
-    diag: Array.from({ length: nodes }, (_, i) => (first + i === 0 ? 1 : 2) / dz),
-    off: new Array<number>(nodes - 1).fill(-1 / dz),
-    weight: Array.from({ length: nodes }, (_, i) =>
-      first + i === 0 ? (n2[0] * dz) / 2 + GRAVITY : n2[first + i] * dz,
-    ),
-  };
-  const positiveWeights = pencil.weight!.filter((w) => w > 0).length;
+  const weight = new Float64Array(nodes);
+  let positiveWeights = 0;
+  for (let i = 0; i < nodes; i++) {
+    weight[i] = first + i === 0 ? (n2[0] * dz) / 2 + GRAVITY : n2[first + i] * dz;
+    if (weight[i] > 0) positiveWeights++;
+  }
+  const diag = new Float64Array(nodes).fill(2 / dz);
+  if (first === 0) diag[0] = 1 / dz;
+  const pencil: TridiagonalPencil = { diag, off: new Float64Array(nodes - 1).fill(-1 / dz), weight };
   const extra = surface === 'free-surface' ? 1 : 0;
   if (positiveWeights < wanted + extra) {
     throw new InputError(
       'n2',
-      Math.max(...n2),
+      largestFinite(n2),
       '1/s2',
       'a stable stratification (N² > 0 over part of the column)',
       `the column has too little stratification for ${wanted} internal modes`,
@@ -148,12 +149,13 @@ export function verticalModesFromProfile(p: Profile, options: ModeOptions = {}):
   const cells = options.cells ?? 800;
   const dz = H / cells;
   const depth = Array.from({ length: cells + 1 }, (_, j) => j * dz);
-  const n2 = depth.map((d) => {
-    const a = Math.max(0, d - dz / 2),
-      b = Math.min(H, d + dz / 2);
-    const ra = interpolateAt(p.depth, p.density, a),
-      rb = interpolateAt(p.depth, p.density, b);
-    return (GRAVITY * (rb - ra)) / (((ra + rb) / 2) * (b - a));
+  // density at the cell edges 0, dz/2, 3dz/2, …, H − dz/2, H; node j takes N² between edges j and j + 1
+  const edges = [0, ...Array.from({ length: cells }, (_, j) => (j + 0.5) * dz), H];
+  const rho = interpolateSorted(p.depth, p.density, edges);
+  const n2 = depth.map((_, j) => {
+    const ra = rho[j],
+      rb = rho[j + 1];
+    return (GRAVITY * (rb - ra)) / (((ra + rb) / 2) * (edges[j + 1] - edges[j]));
   });
   const out = verticalModesFromN2({ depth, n2 }, H, { ...options, cells });
   return { ...out, warnings: [...p.warnings, ...out.warnings] };

@@ -175,6 +175,26 @@ export function interpolateAt(depths: readonly number[], values: readonly number
   return values[lo] + f * (values[hi] - values[lo]);
 }
 
+/**
+ * A column linearly interpolated at increasing depths `at` (clamped like interpolateAt), in one walk down
+ * the column: O(n + m) instead of a search per depth.
+ */
+export function interpolateSorted(
+  depths: readonly number[],
+  values: readonly number[],
+  at: readonly number[],
+): number[] {
+  const n = depths.length;
+  let lo = 0;
+  return at.map((d) => {
+    if (d <= depths[0]) return values[0];
+    if (d >= depths[n - 1]) return values[n - 1];
+    while (depths[lo + 1] <= d) lo++;
+    const f = (d - depths[lo]) / (depths[lo + 1] - depths[lo]);
+    return values[lo] + f * (values[lo + 1] - values[lo]);
+  });
+}
+
 /** Every column of a profile by name (temperature, salinity, sediment, density and the extras). */
 export function profileColumns(p: Profile): ProfileColumn[] {
   return [

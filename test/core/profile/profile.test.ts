@@ -12,6 +12,7 @@ import {
   thermoclineDepth,
   twoLayerFit,
   interpolateAt,
+  interpolateSorted,
   ProfileError,
   NEUTRAL_N2,
   parseHeader,
@@ -154,6 +155,21 @@ describe('stratification', () => {
     const mixed = makeProfile({ depth: [0, 10], temperature: [12, 12] });
     expect(summariseProfile(mixed).warnings.map((x) => x.code)).toEqual(
       expect.arrayContaining(['mixed-to-bottom', 'no-thermocline', 'nearly-mixed']),
+    );
+  });
+
+  it('interpolating at increasing depths in one walk equals interpolateAt at each (property)', () => {
+    fc.assert(
+      fc.property(
+        fc.uniqueArray(fc.double({ min: 0, max: 100, noNaN: true }), { minLength: 2, maxLength: 12 }),
+        fc.array(fc.double({ min: -10, max: 110, noNaN: true }), { minLength: 1, maxLength: 30 }),
+        (depths, at) => {
+          const d = [...depths].sort((a, b) => a - b);
+          const v = d.map((x) => Math.sin(x));
+          const targets = [...at].sort((a, b) => a - b);
+          expect(interpolateSorted(d, v, targets)).toEqual(targets.map((t) => interpolateAt(d, v, t)));
+        },
+      ),
     );
   });
 
