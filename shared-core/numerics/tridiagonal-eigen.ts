@@ -169,7 +169,7 @@ function smallestEigenvalues(q: Packed, k: number): number[] {
       // no more digits); the two counts around the estimate certify it, else bisection takes over
       const done = step <= 4 * Number.EPSILON * Math.abs(x) || (step <= 1e-6 * Math.abs(x) && step > 0.5 * previous);
       if (inside && done) {
-        const margin = Math.max(2 * step, 64 * Number.EPSILON * Math.abs(next));
+        const margin = Math.max(32 * step, 64 * Number.EPSILON * Math.abs(next));
         if (countAt(next - margin) === j && countAt(next + margin) === j + 1) return next;
         newton = false;
       }
