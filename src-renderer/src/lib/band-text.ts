@@ -40,7 +40,7 @@ export function bandTableRows(r: UncertaintyResult, system: UnitSystem, inputUni
     head,
     ...rows,
     ...inputs,
-    ...r.warnings.map((w) => ['band warning', w.replace(/[\t\r\n]+/g, ' ')].join('\t')),
+    ...r.warnings.map((w) => ['band warning', w.message.replace(/[\t\r\n]+/g, ' ')].join('\t')),
   ];
 }
 
