@@ -98,6 +98,8 @@ function describeInputs(
 /** `bands: false` skips the Monte Carlo bands (the live workspace computes them apart, off the main thread). */
 export interface AssessOptions {
   bands?: boolean;
+  /** told how many Monte Carlo draws of a band are done (the workspace shows progress) */
+  bandProgress?: (done: number, total: number) => void;
 }
 
 /** The message of an error raised inside one estimate; an unexpected one is named as an internal error. */
@@ -168,7 +170,9 @@ export function runEstimate(
     const inputs = describeInputs(method, resolveArgs(method, raw), ctx.condition?.name);
     const warnings = uniqueWarnings([...(ctx.profile?.warnings ?? []).map(asWarning), ...out.warnings]);
     const wantsBand = options.bands !== false && e.uncertainty && Object.keys(e.uncertainty).length > 0;
-    const uncertainty = wantsBand ? bandsFromTyped(method, raw, e.uncertainty!) : undefined;
+    const uncertainty = wantsBand
+      ? bandsFromTyped(method, raw, e.uncertainty!, { progress: options.bandProgress })
+      : undefined;
     return {
       ...base,
       ...where,

@@ -1,4 +1,4 @@
-import { InputError, formatNumber } from '../core/errors';
+import { ComputationError, InputError, formatNumber } from '../core/errors';
 import { describeRange, inRange } from '../core/range';
 import type { MethodInfo } from '../core/method';
 import { LIMITS } from '../core/limits';
@@ -55,6 +55,8 @@ export interface PropagationOptions {
   seed?: number;
   /** coverage probability of the band, e.g. 0.9 for the 5 %–95 % band */
   coverage?: number;
+  /** told how many draws are done, about twenty times per band (the workspace shows it as progress) */
+  progress?: (done: number, total: number) => void;
 }
 
 /** The kind of a warning: its code and the input it concerns (draws that only change the numbers raise the same kind). */
@@ -135,7 +137,9 @@ export function propagateMonteCarloJcgm101(
   const warningCounts = new Map<string, { count: number; example: Warning }>();
   let failed = 0,
     firstFailure = '';
-  for (const row of rows) {
+  const every = Math.max(1, Math.floor(samples / 20));
+  for (const [k, row] of rows.entries()) {
+    if (options.progress && k % every === 0) options.progress(k, samples);
     const args: CalcArgs = { ...base };
     let skip = false;
     inputs.forEach((input, d) => {
@@ -152,7 +156,8 @@ export function propagateMonteCarloJcgm101(
     try {
       out = runCalc(method, args);
     } catch (e) {
-      if (!(e instanceof InputError)) throw e;
+      // a draw the method refuses, or one it cannot compute, is left out and counted
+      if (!(e instanceof InputError || e instanceof ComputationError)) throw e;
       failed++;
       firstFailure ||= e.message;
       continue;

@@ -166,4 +166,24 @@ describe('uncertainty bands in the workspace', () => {
     await page.getByLabel(/^± release \(/).fill('');
     await expect.poll(() => bandLine('release-summer').count()).toBe(0);
   });
+
+  it('an edit undone at once finds its band again, never stuck computing', async () => {
+    await page.getByRole('button', { name: /^ammonia-dilution/ }).click();
+    const criterion = page.getByLabel('± criterion', { exact: true });
+    await expect.poll(() => bandLine('ammonia-dilution').textContent(), { timeout: 20_000 }).toMatch(/% band/);
+    const before = await bandLine('ammonia-dilution').textContent();
+    await criterion.fill('0.2');
+    await page.keyboard.press('Control+z');
+    await expect.poll(() => bandLine('ammonia-dilution').textContent(), { timeout: 10_000 }).toBe(before);
+  });
+
+  it('a band can be stopped and computed again on request', async () => {
+    await page.getByRole('button', { name: /^ammonia-dilution/ }).click();
+    await page.getByLabel('± criterion', { exact: true }).fill('0.15');
+    const line = bandLine('ammonia-dilution');
+    await line.getByRole('button', { name: 'stop computing the band' }).click();
+    await expect.poll(() => line.textContent()).toContain('band stopped');
+    await line.getByRole('button', { name: 'Compute band' }).click();
+    await expect.poll(() => line.textContent(), { timeout: 20_000 }).toMatch(/% band/);
+  });
 });

@@ -9,4 +9,6 @@ export interface BandRequest {
 
 /** Band worker → main thread: the band, or the reason it cannot be computed (an InputError names the field). */
 export type BandReply =
-  { seq: number; ok: true; uncertainty: UncertaintyResult } | { seq: number; ok: false; error: string };
+  | { seq: number; ok: true; uncertainty: UncertaintyResult }
+  | { seq: number; ok: false; error: string }
+  | { seq: number; progress: number };

@@ -55,7 +55,14 @@ function modelMarks(o: EstimateOutcome): SectionMark[] {
       // the governing centreline, no width (a row of plumes) and no end label (the single-port path carries one)
       return [jetPath(o, m.diffuser.governing === 'merged' ? m.diffuser.merged : m.diffuser.isolated, false)];
     case 'withdrawal-zones':
-      return m.zones.map((z) => ({ kind: 'band', featureId, port: z.port, top: z.top, bottom: z.bottom, label: z.label }));
+      return m.zones.map((z) => ({
+        kind: 'band',
+        featureId,
+        port: z.port,
+        top: z.top,
+        bottom: z.bottom,
+        label: z.label,
+      }));
     case 'withdrawal-layer':
       return [{ kind: 'band', featureId, port: 0, top: m.top, bottom: m.bottom, label: 'withdrawal layer' }];
     default:

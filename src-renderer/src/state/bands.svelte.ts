@@ -4,7 +4,10 @@ import type { UncertaintyResult } from '../../../shared-core/uncertainty';
 import type { BandReply, BandRequest } from '../lib/band-messages';
 
 export type BandState =
-  { status: 'computing' } | { status: 'done'; result: UncertaintyResult } | { status: 'error'; message: string };
+  | { status: 'computing'; progress?: number }
+  | { status: 'done'; result: UncertaintyResult }
+  | { status: 'error'; message: string }
+  | { status: 'cancelled' };
 
 /** Wait after the last edit before a band is recomputed (typing a value is one request). */
 const DEBOUNCE_MS = 400;
@@ -26,7 +29,8 @@ const hasUncertainty = (e: Site['estimates'][number]) => !!e.uncertainty && Obje
 export class BandStore {
   states = $state.raw<Record<string, BandState>>({});
   private wanted = new Map<string, string>();
-  private done = new Map<string, string>();
+  /** the finished state of each band and the fingerprint it was computed for (an undo finds it again) */
+  private done = new Map<string, { print: string; state: BandState }>();
   private queue: string[] = [];
   /** estimates changed most recently first: their bands are computed first */
   private recent: string[] = [];
@@ -49,8 +53,8 @@ export class BandStore {
     });
     const states: Record<string, BandState> = {};
     for (const [id, print] of next) {
-      const old = this.states[id];
-      states[id] = this.done.get(id) === print && old ? old : { status: 'computing' };
+      const finished = this.done.get(id);
+      states[id] = finished?.print === print ? finished.state : { status: 'computing' };
     }
     for (const id of this.done.keys()) if (!next.has(id)) this.done.delete(id);
     const changed = [...next].filter(([id, print]) => this.wanted.get(id) !== print).map(([id]) => id);
@@ -68,13 +72,33 @@ export class BandStore {
     return this.states[id];
   }
 
+  /** Stops an estimate's band; it stays cancelled until the estimate is edited or computed on request. */
+  cancel(id: string): void {
+    const print = this.wanted.get(id);
+    if (print === undefined) return;
+    if (this.running?.id === id) this.stopWorker();
+    this.queue = this.queue.filter((q) => q !== id);
+    this.done.set(id, { print, state: { status: 'cancelled' } });
+    this.states = { ...this.states, [id]: { status: 'cancelled' } };
+    this.next();
+  }
+
+  /** Computes a cancelled band after all. */
+  resume(id: string): void {
+    if (this.states[id]?.status !== 'cancelled') return;
+    this.done.delete(id);
+    this.states = { ...this.states, [id]: { status: 'computing' } };
+    this.queue = [id, ...this.queue];
+    this.next();
+  }
+
   dispose(): void {
     clearTimeout(this.timer);
     this.stopWorker();
   }
 
   private schedule(): void {
-    const stale = [...this.wanted].filter(([id, print]) => this.done.get(id) !== print).map(([id]) => id);
+    const stale = [...this.wanted].filter(([id, print]) => this.done.get(id)?.print !== print).map(([id]) => id);
     this.queue = [
       ...this.recent.filter((id) => stale.includes(id)),
       ...stale.filter((id) => !this.recent.includes(id)),
@@ -90,7 +114,7 @@ export class BandStore {
     if (id === undefined) return;
     const index = site.estimates.findIndex((e) => e.id === id);
     const print = this.wanted.get(id);
-    if (index < 0 || print === undefined || this.done.get(id) === print) return this.next();
+    if (index < 0 || print === undefined || this.done.get(id)?.print === print) return this.next();
     const seq = ++this.seq;
     this.running = { id, print, seq };
     const request: BandRequest = { seq, site: $state.snapshot(site), index };
@@ -117,14 +141,17 @@ export class BandStore {
   private receive(reply: BandReply): void {
     const job = this.running;
     if (!job || reply.seq !== job.seq) return; // a stale reply
-    this.running = null;
-    if (this.wanted.get(job.id) === job.print) {
-      this.done.set(job.id, job.print);
-      const state: BandState = reply.ok
-        ? { status: 'done', result: reply.uncertainty }
-        : { status: 'error', message: reply.error };
-      this.states = { ...this.states, [job.id]: state };
+    if ('progress' in reply) {
+      if (this.wanted.get(job.id) === job.print)
+        this.states = { ...this.states, [job.id]: { status: 'computing', progress: reply.progress } };
+      return;
     }
+    this.running = null;
+    const state: BandState = reply.ok
+      ? { status: 'done', result: reply.uncertainty }
+      : { status: 'error', message: reply.error };
+    this.done.set(job.id, { print: job.print, state });
+    if (this.wanted.get(job.id) === job.print) this.states = { ...this.states, [job.id]: state };
     this.next();
   }
 

@@ -38,9 +38,7 @@ export class Workspace {
   /** the live assessment, computed in a worker; views read only this */
   live = new AssessmentStore();
   assessment: Assessment = $derived(this.live.current ?? emptyAssessment(this.doc.site));
-  drawings = $derived(
-    new Map<string, EstimateDrawing>(this.assessment.estimates.map((o) => [o.id, drawEstimate(o)])),
-  );
+  drawings = $derived(new Map<string, EstimateDrawing>(this.assessment.estimates.map((o) => [o.id, drawEstimate(o)])));
   /** how the profile of the condition shown reads */
   conditionOutcome = $derived(this.assessment.conditions.find((c) => c.id === this.conditionId));
   /** estimates shown for the current condition (those without a condition show under every condition) */

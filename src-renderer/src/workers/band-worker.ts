@@ -7,7 +7,10 @@ self.onmessage = (event: MessageEvent<BandRequest>) => {
   let reply: BandReply;
   try {
     const s = site as Site;
-    const outcome = runEstimate(s, s.estimates[index], index);
+    const post = (m: BandReply) => (self as unknown as Worker).postMessage(m);
+    const outcome = runEstimate(s, s.estimates[index], index, {
+      bandProgress: (done, total) => post({ seq, progress: done / total }),
+    });
     if (outcome.status === 'error')
       reply = { seq, ok: false, error: outcome.error ?? 'the estimate cannot be computed' };
     else if (!outcome.uncertainty) reply = { seq, ok: false, error: 'no input uncertainty is stated' };
