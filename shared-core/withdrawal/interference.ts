@@ -1,7 +1,7 @@
 import type { MethodInfo } from '../core/method';
 import type { Profile } from '../profile/profile';
 import { DepthCursor, firstIndex } from './depth-cursor';
-import { portOutflow, withdrawalVelocityProfile, type PortOutflow } from './outflow';
+import { portOutflow, withdrawalVelocityProfile, type OutflowColumns, type PortOutflow } from './outflow';
 import type { ProfileWithdrawalOptions } from './measured';
 
 export const WITHDRAWAL_INTERFERENCE: MethodInfo = {
@@ -48,14 +48,18 @@ export const directOutflow =
  * A memoised outflow function for one profile and set of options (keyed by depth, then flow). The optimiser evaluates
  * many splits in which most ports keep their flow; their outflows are then looked up, not recomputed.
  */
-export function memoisedOutflow(p: Profile, o: ProfileWithdrawalOptions): OutflowFunction {
+export function memoisedOutflow(
+  p: Profile,
+  o: ProfileWithdrawalOptions,
+  which: OutflowColumns = 'all',
+): OutflowFunction {
   const byDepth = new Map<number, Map<number, PortOutflow>>();
   return (depth, flow) => {
     let memo = byDepth.get(depth);
     if (!memo) byDepth.set(depth, (memo = new Map()));
     let out = memo.get(flow);
     if (!out) {
-      out = portOutflow(p, depth, flow, o);
+      out = portOutflow(p, depth, flow, o, which);
       memo.set(flow, out);
     }
     return out;

@@ -82,14 +82,23 @@ export interface PortOutflow {
   /** flow-weighted temperature [degC] and density [kg/m3] */
   temperature: number;
   density: number;
-  /** every profile column (temperature, salinity, sediment, density and the extras), flow-weighted */
+  /** every profile column (temperature, salinity, sediment, density and the extras), flow-weighted; only temperature
+   * and density when asked for those alone */
   columns: OutflowColumn[];
   limits: ProfileWithdrawal;
   warnings: Warning[];
 }
 
+/** Which columns an outflow averages: every one, or temperature and density alone (what the optimiser needs). */
+export type OutflowColumns = 'all' | 'temperature-density';
+
 /** The profile's columns by name, read in place (profileColumns() copies them). */
-function columnsOf(p: Profile): { name: string; unit: string; values: readonly number[] }[] {
+function columnsOf(p: Profile, which: OutflowColumns): { name: string; unit: string; values: readonly number[] }[] {
+  if (which === 'temperature-density')
+    return [
+      { name: 'temperature', unit: 'degC', values: p.temperature },
+      { name: 'density', unit: 'kg/m3', values: p.density },
+    ];
   return [
     { name: 'temperature', unit: 'degC', values: p.temperature },
     { name: 'salinity', unit: 'PSU', values: p.salinity },
@@ -108,9 +117,10 @@ export function portOutflow(
   portDepth: number,
   discharge: number,
   o: ProfileWithdrawalOptions,
+  which: OutflowColumns = 'all',
 ): PortOutflow {
   const limits = withdrawalLimitsBohanGrace1973(p, portDepth, discharge, o);
-  const named = columnsOf(p);
+  const named = columnsOf(p, which);
   const sums = new Array<number>(named.length).fill(0);
   let weight = 0;
   if (limits.bottomDepth - limits.topDepth > 0) {
@@ -137,7 +147,7 @@ export function portOutflow(
     portDepth,
     discharge,
     temperature: columns[0].value,
-    density: columns[3].value,
+    density: columns.find((c) => c.name === 'density')!.value,
     columns,
     limits,
     warnings: limits.warnings,

@@ -180,7 +180,7 @@ export function optimiseRelease(
   const capacity = ports.reduce((s, port) => s + port.capacity, 0);
   requireInRange('release', release, 'm3/s', { ...positive, max: capacity });
   const band = targetBand(target);
-  const outflow = memoisedOutflow(p, o);
+  const outflow = memoisedOutflow(p, o, 'temperature-density');
   const temperatureOf = releaseTemperature(ports, release, o, outflow);
   const cold = extremeSplit(ports, release, temperatureOf, outflow, -1),
     warm = extremeSplit(ports, release, temperatureOf, outflow, 1);
@@ -203,7 +203,7 @@ export function optimiseRelease(
       jump = other === undefined;
     }
   }
-  const blend = blendRelease(p, ports, flows, o, outflow);
+  const blend = blendRelease(p, ports, flows, o, memoisedOutflow(p, o));
   const feasible = blend.temperature >= band.min - tol && blend.temperature <= band.max + tol;
   const warnings = [...blend.warnings];
   if (!feasible) {
