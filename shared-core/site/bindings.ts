@@ -120,6 +120,7 @@ const BINDINGS: Record<string, Binding> = {
     if (!i || !ctx.profile) return {};
     const depth = si(`${at(ctx)}.ports[0].depth`, i.ports[0].depth, 'm');
     return {
+      port_depth: depth,
       buoyancy_frequency: buoyancyFrequencyAt(ctx.profile, depth),
       discharge: si(`${at(ctx)}.ports[0].capacity`, i.ports[0].capacity, 'm3/s'),
       sink: i.sink,
