@@ -1,20 +1,30 @@
 /**
  * Brent's method for a root of f on [a, b] where f(a) and f(b) differ in sign.
  * Source: Brent, R.P. (1973). Algorithms for Minimization without Derivatives, Ch. 4 (zeroin).
- * Returns undefined when the bracket does not hold a sign change.
  */
-export function brentRoot(
-  f: (x: number) => number,
-  a: number,
-  b: number,
-  tol = 1e-12,
-  maxIter = 200,
-): number | undefined {
+
+export type RootStatus = 'converged' | 'not-bracketed' | 'max-iterations' | 'not-a-number';
+
+export interface RootResult {
+  status: RootStatus;
+  /** the root when converged; otherwise the last iterate (undefined when the bracket failed) */
+  x?: number;
+  /** function evaluations */
+  evaluations: number;
+}
+
+/**
+ * Brent's zeroin with its failure modes named: 'not-bracketed' when f(a) and f(b) do not differ in sign (or either
+ * is NaN), 'not-a-number' when f gives NaN inside the bracket, 'max-iterations' when the bracket is still wider than
+ * the tolerance after maxIter steps. Converged means the bracket around x is narrower than 2(2ε|x| + tol/2), or f(x) = 0.
+ */
+export function brentSolve(f: (x: number) => number, a: number, b: number, tol = 1e-12, maxIter = 200): RootResult {
   let fa = f(a),
-    fb = f(b);
-  if (fa === 0) return a;
-  if (fb === 0) return b;
-  if (!(fa * fb < 0)) return undefined;
+    fb = f(b),
+    evaluations = 2;
+  if (fa === 0) return { status: 'converged', x: a, evaluations };
+  if (fb === 0) return { status: 'converged', x: b, evaluations };
+  if (!(fa * fb < 0)) return { status: 'not-bracketed', evaluations };
   let c = a,
     fc = fa,
     d = b - a,
@@ -36,7 +46,7 @@ export function brentRoot(
     }
     const tol1 = 2 * Number.EPSILON * Math.abs(b) + 0.5 * tol;
     const m = 0.5 * (c - b);
-    if (Math.abs(m) <= tol1 || fb === 0) return b;
+    if (Math.abs(m) <= tol1 || fb === 0) return { status: 'converged', x: b, evaluations };
     if (Math.abs(e) >= tol1 && Math.abs(fa) > Math.abs(fb)) {
       const s = fb / fa;
       let p: number, q: number;
@@ -66,24 +76,20 @@ export function brentRoot(
     fa = fb;
     b += Math.abs(d) > tol1 ? d : m > 0 ? tol1 : -tol1;
     fb = f(b);
+    evaluations++;
+    if (Number.isNaN(fb)) return { status: 'not-a-number', x: b, evaluations };
   }
-  return b;
+  return { status: 'max-iterations', x: b, evaluations };
 }
 
-/** Expands [a, b] geometrically (upwards in b) until f changes sign; returns the bracket or undefined. */
-export function bracketUpwards(
+/** The root of f on [a, b] by brentSolve, or undefined when it did not converge (see brentSolve for why). */
+export function brentRoot(
   f: (x: number) => number,
   a: number,
   b: number,
-  maxB: number,
-): [number, number] | undefined {
-  const fa = f(a);
-  let lo = a,
-    hi = b;
-  while (hi <= maxB) {
-    if (fa * f(hi) <= 0) return [lo, hi];
-    lo = hi;
-    hi *= 2;
-  }
-  return undefined;
+  tol = 1e-12,
+  maxIter = 200,
+): number | undefined {
+  const r = brentSolve(f, a, b, tol, maxIter);
+  return r.status === 'converged' ? r.x : undefined;
 }
