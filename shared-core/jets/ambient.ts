@@ -1,6 +1,7 @@
 import { InputError } from '../core/errors';
 import { requireInRange, positive } from '../core/range';
-import { interpolateAt, type Profile } from '../profile/profile';
+import { asWarning, type Warning } from '../core/warning';
+import type { Profile } from '../profile/profile';
 
 /** Ambient water around a discharge: uniform or a measured profile, with a uniform or depth-varying current. */
 export type AmbientWater =
@@ -12,22 +13,25 @@ export type AmbientWater =
 /** Current speed along +x: one value [m/s] or a table of depths [m] and speeds [m/s] (linear between). */
 export type Current = number | { depths: readonly number[]; speeds: readonly number[] };
 
-/** The ambient seen by the jet, as functions of depth d [m] (positive down). */
-export interface AmbientFunctions {
-  density(d: number): number;
-  /** undefined when the ambient temperature is not known */
-  temperature?(d: number): number;
-  current(d: number): number;
-  /** water depth where the surface is reached is 0; the bed depth when known [m] */
+/**
+ * The ambient seen by the jet as plain tables by depth d [m] (positive down), linear between rows and constant
+ * beyond the ends (interpolateAt); a uniform value is a table of one row.
+ */
+export interface AmbientTables {
+  depth: readonly number[];
+  density: readonly number[];
+  /** absent when the ambient temperature is not known */
+  temperature?: readonly number[];
+  currentDepth: readonly number[];
+  currentSpeed: readonly number[];
+  /** the bed depth when known [m] */
   bedDepth?: number;
-  warnings: string[];
+  warnings: Warning[];
 }
 
-function currentFunction(c: Current): (d: number) => number {
-  if (typeof c === 'number') {
-    const u = requireInRange('current', c, 'm/s', { min: 0, max: 10 });
-    return () => u;
-  }
+function currentTable(c: Current): { currentDepth: readonly number[]; currentSpeed: readonly number[] } {
+  if (typeof c === 'number')
+    return { currentDepth: [0], currentSpeed: [requireInRange('current', c, 'm/s', { min: 0, max: 10 })] };
   if (c.depths.length < 1 || c.depths.length !== c.speeds.length) {
     throw new InputError(
       'current',
@@ -49,15 +53,13 @@ function currentFunction(c: Current): (d: number) => number {
         'current depths must increase',
       );
   });
-  const depths = [...c.depths],
-    speeds = [...c.speeds];
-  return depths.length === 1 ? () => speeds[0] : (d) => interpolateAt(depths, speeds, d);
+  return { currentDepth: [...c.depths], currentSpeed: [...c.speeds] };
 }
 
-/** Builds depth functions of the ambient; a profile is extrapolated with its end values. */
-export function ambientFunctions(a: AmbientWater, current: Current = 0, bedDepth?: number): AmbientFunctions {
-  const warnings: string[] = [];
-  const u = currentFunction(current);
+/** Builds the depth tables of the ambient; a profile is extrapolated with its end values. */
+export function ambientTables(a: AmbientWater, current: Current = 0, bedDepth?: number): AmbientTables {
+  const warnings: Warning[] = [];
+  const u = currentTable(current);
   if (a.kind === 'uniform') {
     const rho = requireInRange('ambient_density', a.density, 'kg/m3', { min: 900, max: 1300 });
     const t =
@@ -65,29 +67,28 @@ export function ambientFunctions(a: AmbientWater, current: Current = 0, bedDepth
         ? undefined
         : requireInRange('ambient_temperature', a.temperature, 'degC', { min: -3, max: 60 });
     return {
-      density: () => rho,
-      temperature: t === undefined ? undefined : () => t,
-      current: u,
+      depth: [0],
+      density: [rho],
+      ...(t === undefined ? {} : { temperature: [t] }),
+      ...u,
       bedDepth: bedDepth ?? a.waterDepth,
       warnings,
     };
   }
-  if (a.kind === 'table') return tableFunctions(a, u, bedDepth, warnings);
+  if (a.kind === 'table') return tableOf(a, u, bedDepth, warnings);
   const p = a.profile;
-  warnings.push(...p.warnings);
-  const density = (d: number) => interpolateAt(p.depth, p.density, d);
-  const temperature = (d: number) => interpolateAt(p.depth, p.temperature, d);
+  warnings.push(...p.warnings.map(asWarning));
   const bed = bedDepth ?? p.depth[p.depth.length - 1];
   if (bedDepth !== undefined) requireInRange('bed_depth', bedDepth, 'm', positive);
-  return { density, temperature, current: u, bedDepth: bed, warnings };
+  return { depth: p.depth, density: p.density, temperature: p.temperature, ...u, bedDepth: bed, warnings };
 }
 
-function tableFunctions(
+function tableOf(
   a: Extract<AmbientWater, { kind: 'table' }>,
-  u: (d: number) => number,
+  u: { currentDepth: readonly number[]; currentSpeed: readonly number[] },
   bedDepth: number | undefined,
-  warnings: string[],
-): AmbientFunctions {
+  warnings: Warning[],
+): AmbientTables {
   const n = a.depth.length;
   if (n < 2 || a.density.length !== n || (a.temperature && a.temperature.length !== n)) {
     throw new InputError(
@@ -105,14 +106,12 @@ function tableFunctions(
     if (i > 0 && d <= a.depth[i - 1])
       throw new InputError(`ambient depth ${i + 1}`, d, 'm', 'strictly increasing depths', 'depths must increase');
   });
-  const depth = [...a.depth],
-    rho = [...a.density],
-    temp = a.temperature ? [...a.temperature] : undefined;
   return {
-    density: (d) => interpolateAt(depth, rho, d),
-    temperature: temp ? (d) => interpolateAt(depth, temp, d) : undefined,
-    current: u,
-    bedDepth: bedDepth ?? depth[n - 1],
+    depth: [...a.depth],
+    density: [...a.density],
+    ...(a.temperature ? { temperature: [...a.temperature] } : {}),
+    ...u,
+    bedDepth: bedDepth ?? a.depth[n - 1],
     warnings,
   };
 }

@@ -1,6 +1,9 @@
+import type { Warning } from '../core/warning';
 import type { OdeStatus } from '../numerics/ode';
+import { interpolateAt } from '../profile/profile';
 import type { AmbientWater, Current } from './ambient';
-import { localJet, CENTRELINE_TO_AVERAGE, type JetState } from './closure';
+import { CENTRELINE_TO_AVERAGE } from './closure';
+import { jetLocalInto, newJetLocal } from './equations';
 import type { JetLengthScales } from './length-scales';
 import { describeOutcome, pathWarnings, type JetOutcome } from './outcome';
 import { prepareJetRun, traceStretch, type JetRun, type Stretch } from './trace';
@@ -29,6 +32,8 @@ export interface BuoyantJetInput {
   portSpacing?: number;
   /** longest path to follow [m] (default max(100 D, 50 port depth)) */
   maxPath?: number;
+  /** step attempts allowed per integrated segment (default JET_MAX_STEPS); beyond it the status is 'max-steps' */
+  maxSteps?: number;
 }
 
 /** Named columns of the path, each in SI; `JET_PATH_COLUMNS` gives label and unit. */
@@ -108,7 +113,7 @@ export interface JetTrajectory {
   /** the highest centreline point [m above the port] */
   maxRise: number;
   scales: JetLengthScales;
-  warnings: string[];
+  warnings: Warning[];
 }
 
 /**
@@ -134,54 +139,76 @@ export function buoyantJetTrajectory(input: BuoyantJetInput): JetTrajectory {
  * continuous where plumes merge. After merging the round-plume centreline/average ratio is kept (see DIFFUSER_PLUME).
  */
 export function assembleTrajectory(run: JetRun, stretches: readonly Stretch[], ambient: AmbientWater): JetTrajectory {
-  const { H, tE, tRef, amb } = run;
-  const pointAt = (st: Stretch, state: JetState, s: number) => {
-    const L = localJet(state, st.ctx),
-      Sa = state.Q / st.qRef;
+  const { H, tE, tRef } = run;
+  const L = newJetLocal();
+  const temperature = run.ambient.temperature;
+  const withTemperature = tE !== undefined && temperature !== undefined;
+  const path: JetPath = {
+    s: [],
+    x: [],
+    y: [],
+    z: [],
+    depth: [],
+    horizontalDistance: [],
+    radius: [],
+    dilutionCentreline: [],
+    dilutionAverage: [],
+    densityExcess: [],
+    ...(withTemperature ? { temperatureExcess: [] } : {}),
+  };
+  const pointAt = (st: Stretch, v: readonly number[], s: number) => {
+    const eq = st.equations,
+      sc = eq.scale;
+    jetLocalInto(v, eq, L);
+    const x = v[0] * sc[0],
+      y = v[1] * sc[1],
+      z = v[2] * sc[2],
+      Sa = (v[3] * sc[3]) / st.qRef;
     return {
       s,
-      x: state.x,
-      y: state.y,
-      z: state.z,
-      depth: H - state.z,
-      horizontalDistance: Math.hypot(state.x, state.y),
+      x,
+      y,
+      z,
+      depth: H - z,
+      horizontalDistance: Math.hypot(x, y),
       radius: L.b,
       dilutionCentreline: Math.max(1, Sa * CENTRELINE_TO_AVERAGE),
       dilutionAverage: Sa,
-      L,
-      state,
     };
   };
-  const pts = stretches.flatMap((st, k) => st.states.map((v, i) => pointAt(st, v, st.s[i])).slice(k > 0 ? 1 : 0));
-  const path: JetPath = {
-    s: pts.map((p) => p.s),
-    x: pts.map((p) => p.x),
-    y: pts.map((p) => p.y),
-    z: pts.map((p) => p.z),
-    depth: pts.map((p) => p.depth),
-    horizontalDistance: pts.map((p) => p.horizontalDistance),
-    radius: pts.map((p) => p.radius),
-    dilutionCentreline: pts.map((p) => p.dilutionCentreline),
-    dilutionAverage: pts.map((p) => p.dilutionAverage),
-    densityExcess: pts.map((p) => p.L.densityExcess),
-    ...(tE !== undefined && amb.temperature
-      ? { temperatureExcess: pts.map((p) => tRef + p.state.Th / p.state.Q - amb.temperature!(p.depth)) }
-      : {}),
-  };
+  stretches.forEach((st, k) => {
+    const sc = st.equations.scale;
+    for (let i = k > 0 ? 1 : 0; i < st.s.length; i++) {
+      const v = st.y[i],
+        p = pointAt(st, v, st.s[i]);
+      path.s.push(p.s);
+      path.x.push(p.x);
+      path.y.push(p.y);
+      path.z.push(p.z);
+      path.depth.push(p.depth);
+      path.horizontalDistance.push(p.horizontalDistance);
+      path.radius.push(p.radius);
+      path.dilutionCentreline.push(p.dilutionCentreline);
+      path.dilutionAverage.push(p.dilutionAverage);
+      path.densityExcess.push(L.densityExcess);
+      if (withTemperature)
+        path.temperatureExcess!.push(
+          tRef + (v[8] * sc[8]) / (v[3] * sc[3]) - interpolateAt(run.ambient.depth, temperature, p.depth),
+        );
+    }
+  });
   const events: JetEvent[] = stretches.flatMap((st) =>
-    st.fired.map((e) => {
-      const { L: _l, state: _s, ...p } = pointAt(st, e.state, e.s);
-      return { kind: e.name as JetEventKind, ...p };
-    }),
+    st.fired.map((e) => ({ kind: e.name as JetEventKind, ...pointAt(st, e.y, e.s) })),
   );
   const last = stretches[stretches.length - 1];
   const status = last.status,
     message = last.message;
   if (status === 'terminal-event') events.push({ ...events[events.length - 1], kind: 'end of near field' });
-  const maxRise = Math.max(...path.z);
+  let maxRise = -Infinity;
+  for (const z of path.z) maxRise = Math.max(maxRise, z);
   const outcome = describeOutcome(events, status, maxRise, path);
   const warnings = [
-    ...amb.warnings,
+    ...run.ambient.warnings,
     ...run.scales.warnings,
     ...pathWarnings({
       events,
@@ -190,7 +217,7 @@ export function assembleTrajectory(run: JetRun, stretches: readonly Stretch[], a
       scales: run.scales,
       angleDeg: run.angleDeg,
       dense: run.rhoE > run.rhoRef,
-      current: amb.current(H),
+      current: run.portCurrent,
       velocity: run.U,
       profileBottom: profileBottom(ambient),
       portDepth: H,

@@ -74,6 +74,7 @@ export function jetPathSeries(t: JetTrajectory): Series[] {
   const col = (k: keyof JetPath) => ({ ...JET_PATH_COLUMNS[k], values: [...(t.path[k] ?? [])] });
   return [
     {
+      kind: 'plume-centreline',
       title: 'Plume centreline',
       x: col('horizontalDistance'),
       y: [col('depth')],
@@ -81,6 +82,7 @@ export function jetPathSeries(t: JetTrajectory): Series[] {
       caption: `Centreline path in the vertical section (${t.outcomeText})`,
     },
     {
+      kind: 'dilution-along-path',
       title: 'Dilution along the path',
       x: col('horizontalDistance'),
       y: [col('dilutionCentreline'), col('dilutionAverage')],
@@ -153,7 +155,20 @@ function runBuoyantJet(a: CalcArgs): CalcOutput {
   const surf = ev('surface contact');
   if (t.outcome === 'surfaces' && surf) results.surface_dilution = num(surf.dilutionCentreline, '1');
   results.outcome = text(t.outcomeText);
-  return { results, warnings: t.warnings, sources: [BUOYANT_JET.source], series: jetPathSeries(t) };
+  return {
+    results,
+    warnings: t.warnings,
+    sources: [BUOYANT_JET.source],
+    series: jetPathSeries(t),
+    model: { kind: 'jet', trajectory: t },
+    ...incompleteOf(t),
+  };
+}
+
+/** `incomplete` for a CalcOutput when a path integration stopped early (step limit or failed step). */
+export function incompleteOf(...paths: JetTrajectory[]): { incomplete?: string } {
+  const stopped = paths.find((t) => t.status === 'max-steps' || t.status === 'step-failed');
+  return stopped ? { incomplete: stopped.message } : {};
 }
 
 /** Runs the merged-diffuser model for the CLI: regime, merging point, rise and governing dilution. */
@@ -180,13 +195,21 @@ function runDiffuserPlume(a: CalcArgs): CalcOutput {
   const series: Series[] = [
     ...jetPathSeries(r.merged),
     {
+      kind: 'single-port-dilution',
       title: 'Single-port dilution',
       x: { ...JET_PATH_COLUMNS.horizontalDistance, values: [...single.horizontalDistance] },
       y: [{ ...JET_PATH_COLUMNS.dilutionCentreline, values: [...single.dilutionCentreline] }],
       caption: 'Centreline dilution of one port without neighbours, for comparison',
     },
   ];
-  return { results, warnings: r.warnings, sources: [DIFFUSER_PLUME.source, BUOYANT_JET.source], series };
+  return {
+    results,
+    warnings: r.warnings,
+    sources: [DIFFUSER_PLUME.source, BUOYANT_JET.source],
+    series,
+    model: { kind: 'diffuser', diffuser: r },
+    ...incompleteOf(r.merged, r.isolated),
+  };
 }
 
 /** The jets and mixing-zone methods of `gprime calc`. */

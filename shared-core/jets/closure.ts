@@ -1,4 +1,3 @@
-import { GRAVITY } from '../quantities';
 import type { MethodInfo } from '../core/method';
 
 /**
@@ -76,74 +75,4 @@ export interface JetState {
   R: number;
   /** Q(T_jet − T_ref) [m3 K/s] */
   Th: number;
-}
-
-/** The ambient seen at one height, and the constants of a run. */
-export interface ClosureContext {
-  /** default 'round'; 'plane' takes the fluxes per unit length and entrains on both faces, without crossflow (forced) entrainment */
-  geometry?: JetGeometry;
-  portDepth: number;
-  rhoRef: number;
-  tRef: number;
-  density(d: number): number;
-  temperature?(d: number): number;
-  current(d: number): number;
-}
-
-/** Local jet properties derived from the state. */
-export interface JetLocal {
-  u: number;
-  ex: number;
-  ey: number;
-  ez: number;
-  b: number;
-  /** ρ_jet − ρ_ambient [kg/m3] */
-  densityExcess: number;
-  /** −g Δρ/ρ_ref [m/s2], positive upward */
-  gPrime: number;
-  ambientCurrent: number;
-  entrainment: number;
-}
-
-/** Derived local properties (velocity, direction, radius, buoyancy, entrainment) of a state. */
-export function localJet(s: JetState, c: ClosureContext): JetLocal {
-  const m = Math.hypot(s.Mx, s.My, s.Mz);
-  const u = m / s.Q;
-  const ex = s.Mx / m,
-    ey = s.My / m,
-    ez = s.Mz / m;
-  const plane = c.geometry === 'plane';
-  const b = plane ? s.Q / (2 * u) : Math.sqrt(s.Q / (Math.PI * u));
-  const d = c.portDepth - s.z;
-  const densityExcess = c.rhoRef + s.R / s.Q - c.density(d);
-  const gPrime = (-GRAVITY * densityExcess) / c.rhoRef;
-  const ua = c.current(d);
-  const shear = u - ua * ex;
-  const cross = ua * Math.sqrt(Math.max(0, 1 - ex * ex));
-  const ri = (gPrime * b * ez) / Math.max(shear * shear, 1e-30);
-  const k = plane ? PLANE_ENTRAINMENT : ENTRAINMENT;
-  const f = Math.min(1, Math.max(0, ri / (plane ? RICHARDSON_PLANE_PLUME : RICHARDSON_PLUME)));
-  const alpha = k.alphaJet + (k.alphaPlume - k.alphaJet) * f;
-  const entrainment = plane
-    ? 2 * alpha * Math.abs(shear)
-    : 2 * Math.PI * b * (alpha * Math.abs(shear) + ENTRAINMENT.betaCrossflow * cross);
-  return { u, ex, ey, ez, b, densityExcess, gPrime, ambientCurrent: ua, entrainment };
-}
-
-/** Right-hand side d(state)/ds of the model [SI]. */
-export function jetDerivative(s: JetState, c: ClosureContext): JetState {
-  const L = localJet(s, c);
-  const d = c.portDepth - s.z;
-  const E = L.entrainment;
-  return {
-    x: L.ex,
-    y: L.ey,
-    z: L.ez,
-    Q: E,
-    Mx: E * L.ambientCurrent,
-    My: 0,
-    Mz: (s.Q * L.gPrime) / L.u,
-    R: E * (c.density(d) - c.rhoRef),
-    Th: c.temperature ? E * (c.temperature(d) - c.tRef) : 0,
-  };
 }

@@ -1,6 +1,7 @@
 import { InputError, formatNumber } from '../core/errors';
 import { requireInRange } from '../core/range';
 import { validityWarnings, type MethodInfo } from '../core/method';
+import { caution, note, outsideValidity, uniqueWarnings, type Warning } from '../core/warning';
 import { GRAVITY } from '../quantities';
 import {
   assembleTrajectory,
@@ -9,6 +10,7 @@ import {
   type JetEvent,
   type JetTrajectory,
 } from './buoyant-jet';
+import { jetStateOf } from './equations';
 import { prepareJetRun, traceStretch, type Stretch } from './trace';
 
 export const DIFFUSER_PLUME: MethodInfo = {
@@ -70,7 +72,7 @@ export interface DiffuserPlume {
   length?: number;
   /** the regime in words */
   regimeText: string;
-  warnings: string[];
+  warnings: Warning[];
 }
 
 const m = (x: number) => formatNumber(Number(x.toPrecision(3)));
@@ -126,9 +128,10 @@ export function diffuserPlume(input: DiffuserInput): DiffuserPlume {
   const mergeEvent = round.fired.find((e) => e.name === 'plumes merge');
   const stretches: Stretch[] = [round];
   if (mergeEvent) {
-    const per = (k: 'Q' | 'Mx' | 'My' | 'Mz' | 'R' | 'Th') => mergeEvent.state[k] / s;
+    const state = jetStateOf(mergeEvent.y, round.equations);
+    const per = (k: 'Q' | 'Mx' | 'My' | 'Mz' | 'R' | 'Th') => state[k] / s;
     const start = {
-      ...mergeEvent.state,
+      ...state,
       Q: per('Q'),
       Mx: per('Mx'),
       My: per('My'),
@@ -152,7 +155,7 @@ export function diffuserPlume(input: DiffuserInput): DiffuserPlume {
   const g = governing === 'merged' ? merged : isolated;
   const length = ports === undefined ? undefined : (ports - 1) * s;
   const bPort = Math.abs((GRAVITY * (run.rhoRef - run.rhoE)) / run.rhoRef) * (run.Q0 / s);
-  const uPort = run.amb.current(run.H);
+  const uPort = run.portCurrent;
   const froudeCurrent = bPort > 0 ? uPort ** 3 / bPort : undefined;
 
   const regime: DiffuserRegime = merge ? 'merged line plume' : 'isolated round plumes';
@@ -166,19 +169,34 @@ export function diffuserPlume(input: DiffuserInput): DiffuserPlume {
     warnings.push(...validityWarnings(DIFFUSER_PLUME, { froude_current: froudeCurrent }));
   if (merge && uPort > 0) {
     warnings.push(
-      'After merging the line plume is followed as in still water; Roberts, Snyder & Baumgartner (1989) found that a current across the diffuser raises the dilution (for F = u³/b > 0.1) and lowers the rise, so the merged dilution errs low and the rise height high, and the merged plume is not carried downstream.',
+      caution(
+        'merged-plume-still-water',
+        'After merging the line plume is followed as in still water; Roberts, Snyder & Baumgartner (1989) found that a current across the diffuser raises the dilution (for F = u³/b > 0.1) and lowers the rise, so the merged dilution errs low and the rise height high, and the merged plume is not carried downstream.',
+        'current',
+      ),
     );
   }
   if (uPort > 0 && (currentAngle === undefined || currentAngle < 60)) {
     warnings.push(
       currentAngle === undefined
-        ? 'The current is taken across the diffuser (the ports’ plumes side by side); a current along the diffuser sweeps each plume onto the next, which this model does not describe.'
-        : `The current runs at ${m(currentAngle)}° to the diffuser: plumes are swept onto their downstream neighbours and merge sooner than modelled; the model describes a current across the diffuser (Roberts, Snyder & Baumgartner 1989 found lower dilutions for currents along the diffuser; from memory).`,
+        ? note(
+            'current-direction-assumed',
+            'The current is taken across the diffuser (the ports’ plumes side by side); a current along the diffuser sweeps each plume onto the next, which this model does not describe.',
+            'current_angle',
+          )
+        : outsideValidity(
+            'current-along-diffuser',
+            `The current runs at ${m(currentAngle)}° to the diffuser: plumes are swept onto their downstream neighbours and merge sooner than modelled; the model describes a current across the diffuser (Roberts, Snyder & Baumgartner 1989 found lower dilutions for currents along the diffuser; from memory).`,
+            'current_angle',
+          ),
     );
   }
   if (merge && length !== undefined && length < g.maxRise) {
     warnings.push(
-      `The diffuser (${m(length)} m long) is shorter than the rise (${m(g.maxRise)} m): water entrained at its ends makes the plume tend to one round plume of the total flow, so the line-plume continuation errs low (common practice, no source).`,
+      caution(
+        'diffuser-shorter-than-rise',
+        `The diffuser (${m(length)} m long) is shorter than the rise (${m(g.maxRise)} m): water entrained at its ends makes the plume tend to one round plume of the total flow, so the line-plume continuation errs low (common practice, no source).`,
+      ),
     );
   }
   return {
@@ -193,6 +211,6 @@ export function diffuserPlume(input: DiffuserInput): DiffuserPlume {
     froudeCurrent,
     length,
     regimeText,
-    warnings: [...new Set(warnings)],
+    warnings: uniqueWarnings(warnings),
   };
 }

@@ -1,5 +1,6 @@
 import { requireInRange, positive, nonNegative } from '../core/range';
 import { validityWarnings, type MethodInfo } from '../core/method';
+import type { Warning } from '../core/warning';
 
 export const JET_LENGTH_SCALES: MethodInfo = {
   id: 'jet-length-scales',
@@ -52,7 +53,7 @@ export interface JetLengthScales {
   lStratBuoyancy: number;
   /** plain-language statements of which process dominates where */
   regime: string[];
-  warnings: string[];
+  warnings: Warning[];
 }
 
 const fmt = (x: number) => (x >= 100 ? x.toFixed(0) : x >= 10 ? x.toFixed(1) : x.toPrecision(2));

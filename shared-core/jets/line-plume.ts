@@ -1,5 +1,6 @@
 import { requireInRange, positive, nonNegative } from '../core/range';
 import { validityWarnings, type MethodInfo } from '../core/method';
+import { caution, outsideValidity, type Warning } from '../core/warning';
 
 export const LINE_PLUME_RSB1989: MethodInfo = {
   id: 'line-plume',
@@ -29,7 +30,7 @@ export interface LinePlumeResult {
   thickness: number;
   /** minimum (centreline) dilution at the end of the near field [1] */
   dilution: number;
-  warnings: string[];
+  warnings: Warning[];
 }
 
 /**
@@ -53,11 +54,20 @@ export function linePlumeRobertsSnyderBaumgartner1989(q: number, gPrime: number,
   const warnings = validityWarnings(LINE_PLUME_RSB1989, { froude_current: F });
   if (F > 0.1)
     warnings.push(
-      'With a current (F > 0.1) the rise height is given for zero current; Roberts, Snyder & Baumgartner (1989) found the wastefield rises less in strong currents, so the value is an upper estimate.',
+      caution(
+        'rise-height-zero-current',
+        'With a current (F > 0.1) the rise height is given for zero current; Roberts, Snyder & Baumgartner (1989) found the wastefield rises less in strong currents, so the value is an upper estimate.',
+        'current',
+      ),
     );
   const dilution = Math.max(1, coeff * scaleS);
   if (coeff * scaleS < 1)
-    warnings.push('The formula gives a dilution below 1: the discharge is far outside the experiments; 1 is reported.');
+    warnings.push(
+      outsideValidity(
+        'dilution-below-one',
+        'The formula gives a dilution below 1: the discharge is far outside the experiments; 1 is reported.',
+      ),
+    );
   return {
     buoyancyFlux: b,
     lb,

@@ -1,3 +1,4 @@
+import { caution, note, outsideValidity, type Warning } from '../core/warning';
 import type { OdeStatus } from '../numerics/ode';
 import type { JetEvent, JetPath } from './buoyant-jet';
 import type { JetLengthScales } from './length-scales';
@@ -90,50 +91,82 @@ export interface WarningContext {
 }
 
 /** Warnings where the model leaves its validity along this path. */
-export function pathWarnings(c: WarningContext): string[] {
-  const w: string[] = [];
+export function pathWarnings(c: WarningContext): Warning[] {
+  const w: Warning[] = [];
   const find = (k: JetEvent['kind']) => c.events.find((e) => e.kind === k);
-  if (c.status === 'step-failed' || c.status === 'max-steps') w.push(`The integration did not finish: ${c.message}.`);
+  if (c.status === 'step-failed' || c.status === 'max-steps')
+    w.push(caution('integration-incomplete', `The integration did not finish: ${c.message}.`));
   if (c.scales.froude < 0.5)
     w.push(
-      `The port Froude number is very low (${c.scales.froude.toFixed(2)}): ambient water may enter the port and the jet starts as a lazy plume; the model is uncertain near the port.`,
+      outsideValidity(
+        'port-froude-very-low',
+        `The port Froude number is very low (${c.scales.froude.toFixed(2)}): ambient water may enter the port and the jet starts as a lazy plume; the model is uncertain near the port.`,
+      ),
     );
   const surf = find('edge reaches surface'),
     surfC = find('surface contact');
   if (surf && (!surfC || surf.s < surfC.s - 1e-9))
     w.push(
-      `The plume's edge touches the surface ${m(surf.horizontalDistance)} m from the port, before its centreline does: surface interaction is not modelled beyond that point.`,
+      caution(
+        'plume-edge-surfaces',
+        `The plume's edge touches the surface ${m(surf.horizontalDistance)} m from the port, before its centreline does: surface interaction is not modelled beyond that point.`,
+      ),
     );
   const bedEdge = find('edge reaches bed');
   if (bedEdge)
     w.push(
-      `The plume's lower edge touches the bed ${m(bedEdge.horizontalDistance)} m from the port: it may attach to the bed, which a free-jet model does not describe.`,
+      caution(
+        'near-field-bed-contact',
+        `The plume's lower edge touches the bed ${m(bedEdge.horizontalDistance)} m from the port: it may attach to the bed, which a free-jet model does not describe.`,
+      ),
     );
   if (c.dense && c.angleDeg < 15)
     w.push(
-      'A dense jet aimed less than 15° above horizontal close to the bed may attach to the bed (wall jet); the free-jet result may overstate its dilution.',
+      caution(
+        'dense-jet-bed-attachment',
+        'A dense jet aimed less than 15° above horizontal close to the bed may attach to the bed (wall jet); the free-jet result may overstate its dilution.',
+        'angle',
+      ),
     );
   const merge = find('plumes merge');
   if (merge && !c.merged)
     w.push(
-      `Neighbouring plumes merge ${m(merge.s)} m along the path (centreline dilution ${s(merge.dilutionCentreline)}): beyond it the single-port dilution is too high; use the merged-diffuser estimate.`,
+      caution(
+        'plumes-merge-single-port',
+        `Neighbouring plumes merge ${m(merge.s)} m along the path (centreline dilution ${s(merge.dilutionCentreline)}): beyond it the single-port dilution is too high; use the merged-diffuser estimate.`,
+      ),
     );
   if (merge && c.merged)
     w.push(
-      `Neighbouring plumes merge ${m(merge.s)} m along the path (centreline dilution ${s(merge.dilutionCentreline)}); beyond it the path is that of a line plume with the merged fluxes per unit diffuser length.`,
+      note(
+        'plumes-merge',
+        `Neighbouring plumes merge ${m(merge.s)} m along the path (centreline dilution ${s(merge.dilutionCentreline)}); beyond it the path is that of a line plume with the merged fluxes per unit diffuser length.`,
+      ),
     );
   if (c.current > c.velocity)
     w.push(
-      'The current is faster than the jet: the jet is swept downstream at once and the near-field result depends mostly on the crossflow entrainment coefficient.',
+      caution(
+        'current-exceeds-jet',
+        'The current is faster than the jet: the jet is swept downstream at once and the near-field result depends mostly on the crossflow entrainment coefficient.',
+        'current',
+      ),
     );
   if (c.dense && c.angleDeg > 15 && c.angleDeg < 80) {
     w.push(
-      'Integral models of this kind under-predict the dilution of inclined dense jets measured in the laboratory by tens of percent (Roberts, Ferrier & Daviero 1997; Kikkert, Davidson & Nokes 2007); the dilutions here err on the low side.',
+      caution(
+        'dense-jet-dilution-low',
+        'Integral models of this kind under-predict the dilution of inclined dense jets measured in the laboratory by tens of percent (Roberts, Ferrier & Daviero 1997; Kikkert, Davidson & Nokes 2007); the dilutions here err on the low side.',
+        'angle',
+      ),
     );
   }
   if (c.profileBottom !== undefined && c.portDepth > c.profileBottom)
     w.push(
-      `The port (depth ${m(c.portDepth)} m) lies below the deepest profile sample (${m(c.profileBottom)} m): the ambient there is extrapolated.`,
+      caution(
+        'port-below-profile',
+        `The port (depth ${m(c.portDepth)} m) lies below the deepest profile sample (${m(c.profileBottom)} m): the ambient there is extrapolated.`,
+        'port_depth',
+      ),
     );
   return w;
 }

@@ -1,9 +1,11 @@
 import { InputError } from '../core/errors';
 import { requireInRange, positive } from '../core/range';
-import { solveOde, type OdeEvent, type OdeStatus } from '../numerics/ode';
+import { integrateOde, type OdeEventSet, type OdeStatus } from '../numerics/ode';
+import { interpolateAt } from '../profile/profile';
 import { GRAVITY } from '../quantities';
-import { ambientFunctions, type AmbientFunctions, type AmbientWater, type Current } from './ambient';
-import { jetDerivative, localJet, type ClosureContext, type JetGeometry, type JetState } from './closure';
+import { ambientTables, type AmbientTables, type AmbientWater, type Current } from './ambient';
+import type { JetGeometry, JetState } from './closure';
+import { jetGaugesInto, jetRhsFor, newJetGauges, scaledState, type JetEquations, type JetGauges } from './equations';
 import { jetLengthScales, type JetLengthScales } from './length-scales';
 
 /** What a jet run needs from its caller (see BuoyantJetInput for the meaning of each field). */
@@ -20,6 +22,7 @@ export interface JetRunInput {
   bedDepth?: number;
   portSpacing?: number;
   maxPath?: number;
+  maxSteps?: number;
 }
 
 /** Validated input and the constants of one run, shared by the round-jet and the merged-diffuser models. */
@@ -32,11 +35,14 @@ export interface JetRun {
   spacing?: number;
   tE?: number;
   sMax: number;
+  /** step attempts allowed per integrated segment */
+  maxSteps: number;
   rhoE: number;
   rhoRef: number;
   tRef: number;
-  amb: AmbientFunctions;
-  ctx: ClosureContext;
+  ambient: AmbientTables;
+  /** current at the port [m/s] */
+  portCurrent: number;
   /** port volume flux [m3/s] and kinematic momentum flux [m4/s2] */
   Q0: number;
   M0: number;
@@ -49,24 +55,26 @@ export interface JetRun {
   returnTerminal: boolean;
 }
 
-/** One integrated stretch of path with a single geometry, states in SI. */
+/** One integrated stretch of path with a single geometry, states scaled as its equations say. */
 export interface Stretch {
   geometry: JetGeometry;
-  ctx: ClosureContext;
+  equations: JetEquations;
   /** volume flux that dilution 1 refers to: Q0 (round) or Q0/spacing (plane) */
   qRef: number;
   s: number[];
-  states: JetState[];
-  fired: { name: string; s: number; state: JetState }[];
+  y: number[][];
+  fired: { name: string; s: number; y: number[] }[];
   status: OdeStatus;
+  /** in words, with the path distance where it stopped early */
   message: string;
   evaluations: number;
 }
 
-export const STATE_KEYS = ['x', 'y', 'z', 'Q', 'Mx', 'My', 'Mz', 'R', 'Th'] as const;
 const deg = Math.PI / 180;
+/** step attempts per segment (default) */
+export const JET_MAX_STEPS = 20000;
 
-/** Validates a run's input and sets up the ambient, the closure context and the port state. */
+/** Validates a run's input and sets up the ambient tables and the port state. */
 export function prepareJetRun(input: JetRunInput): JetRun {
   const D = requireInRange('diameter', input.diameter, 'm', { ...positive, max: 20 });
   const U = requireInRange('velocity', input.velocity, 'm/s', { ...positive, max: 100 });
@@ -74,7 +82,7 @@ export function prepareJetRun(input: JetRunInput): JetRun {
   const theta = requireInRange('horizontal_angle', input.horizontalAngle ?? 0, 'deg', { min: -180, max: 180 }) * deg;
   const H = requireInRange('port_depth', input.portDepth, 'm', { ...positive, max: 11000 });
   const rhoE = requireInRange('effluent_density', input.effluentDensity, 'kg/m3', { min: 900, max: 1300 });
-  const amb = ambientFunctions(input.ambient, input.current ?? 0, input.bedDepth);
+  const amb = ambientTables(input.ambient, input.current ?? 0, input.bedDepth);
   // a profile or water depth shallower than the port means the port sits on the bed
   const bed = input.bedDepth === undefined && amb.bedDepth !== undefined ? Math.max(amb.bedDepth, H) : amb.bedDepth;
   if (bed !== undefined && bed < H)
@@ -87,17 +95,11 @@ export function prepareJetRun(input: JetRunInput): JetRun {
       : requireInRange('effluent_temperature', input.effluentTemperature, 'degC', { min: -3, max: 100 });
   const sMax =
     input.maxPath === undefined ? Math.max(100 * D, 50 * H) : requireInRange('max_path', input.maxPath, 'm', positive);
+  const maxSteps = requireInRange('max_steps', input.maxSteps ?? JET_MAX_STEPS, '1', { min: 1, max: 1e6 });
 
-  const rhoRef = amb.density(H),
-    tRef = amb.temperature?.(H) ?? 0;
-  const ctx: ClosureContext = {
-    portDepth: H,
-    rhoRef,
-    tRef,
-    density: amb.density,
-    temperature: amb.temperature,
-    current: amb.current,
-  };
+  const rhoRef = interpolateAt(amb.depth, amb.density, H),
+    tRef = amb.temperature ? interpolateAt(amb.depth, amb.temperature, H) : 0;
+  const portCurrent = interpolateAt(amb.currentDepth, amb.currentSpeed, H);
   const Q0 = (Math.PI * D * D * U) / 4,
     M0 = Q0 * U;
   const rhoScale = Math.max(Math.abs(rhoE - rhoRef), 0.01),
@@ -119,7 +121,7 @@ export function prepareJetRun(input: JetRunInput): JetRun {
     diameter: D,
     velocity: U,
     gPrime: Math.max(-5, Math.min(5, gPort)),
-    current: amb.current(H),
+    current: portCurrent,
   });
   return {
     D,
@@ -130,11 +132,12 @@ export function prepareJetRun(input: JetRunInput): JetRun {
     spacing,
     tE,
     sMax,
+    maxSteps,
     rhoE,
     rhoRef,
     tRef,
-    amb,
-    ctx,
+    ambient: amb,
+    portCurrent,
     Q0,
     M0,
     rhoScale,
@@ -142,6 +145,32 @@ export function prepareJetRun(input: JetRunInput): JetRun {
     start,
     scales,
     returnTerminal: bed === undefined || bed === H,
+  };
+}
+
+/**
+ * The plain-data equations of a stretch: path in port diameters, fluxes in port (or per-length) units. The merged
+ * line plume is followed as in still water (no crossflow entrainment, no current momentum): see DIFFUSER_PLUME.
+ * The temperature is followed only when the effluent temperature is known.
+ */
+export function jetEquationsOf(run: JetRun, geometry: JetGeometry): JetEquations {
+  const perLength = geometry === 'plane' ? 1 / (run.spacing as number) : 1;
+  const qRef = run.Q0 * perLength,
+    mRef = run.M0 * perLength,
+    D = run.D,
+    a = run.ambient;
+  return {
+    geometry,
+    lengthScale: D,
+    scale: [D, D, D, qRef, mRef, mRef, mRef, qRef * run.rhoScale, qRef * run.tScale],
+    portDepth: run.H,
+    rhoRef: run.rhoRef,
+    tRef: run.tRef,
+    ambientDepth: a.depth,
+    ambientDensity: a.density,
+    ...(run.tE !== undefined && a.temperature ? { ambientTemperature: a.temperature } : {}),
+    currentDepth: geometry === 'plane' ? [0] : a.currentDepth,
+    currentSpeed: geometry === 'plane' ? [0] : a.currentSpeed,
   };
 }
 
@@ -156,75 +185,83 @@ export interface StretchOptions {
   neutralPassed?: boolean;
 }
 
+/** One event along a stretch: its gap (zero where it fires) read from the gauges of the state. */
+interface JetEventSpec {
+  name: string;
+  gap: (g: JetGauges) => number;
+  direction: 'rising' | 'falling' | 'either';
+  terminal: boolean;
+}
+
+/** The events along a stretch, evaluated together from the gauges of the scaled state. */
+function stretchEvents(run: JetRun, eq: JetEquations, o: StretchOptions): OdeEventSet {
+  const { H, bed, spacing } = run;
+  const specs: JetEventSpec[] = [
+    { name: 'surface contact', gap: (g) => g.z - H, direction: 'rising', terminal: true },
+    { name: 'return to port level', gap: (g) => g.z, direction: 'falling', terminal: run.returnTerminal },
+    { name: 'maximum rise', gap: (g) => g.verticalMomentum, direction: 'falling', terminal: true },
+    { name: 'lowest point', gap: (g) => g.verticalMomentum, direction: 'rising', terminal: true },
+    { name: 'neutral buoyancy', gap: (g) => g.densityExcess, direction: 'either', terminal: false },
+    { name: 'momentum spent', gap: (g) => g.speedRatio - 1e-3, direction: 'falling', terminal: true },
+    { name: 'edge reaches surface', gap: (g) => g.upperEdge - H, direction: 'rising', terminal: false },
+  ];
+  if (bed !== undefined && bed > H) {
+    specs.push({ name: 'bed contact', gap: (g) => g.z + (bed - H), direction: 'falling', terminal: true });
+    specs.push({
+      name: 'edge reaches bed',
+      gap: (g) => g.lowerEdge + (bed - H),
+      direction: 'falling',
+      terminal: false,
+    });
+  }
+  if (spacing !== undefined && o.geometry === 'round') {
+    const terminal = o.stopAtMerge ?? false;
+    specs.push({ name: 'plumes merge', gap: (g) => 2 * g.width - spacing, direction: 'rising', terminal });
+  }
+  const gauges = newJetGauges();
+  return {
+    events: specs,
+    g: (_t, y, out) => {
+      jetGaugesInto(y, eq, gauges);
+      for (let i = 0; i < specs.length; i++) out[i] = specs[i].gap(gauges);
+    },
+  };
+}
+
 /**
  * Integrates one stretch of the jet path in s/D with Dormand–Prince 5(4) (numerics/ode.ts) on scaled fluxes; continues
  * through a maximum rise of a dense jet and stops at the surface, the bed, a trapping turning point, or maxPath.
  */
 export function traceStretch(run: JetRun, o: StretchOptions): Stretch {
-  const { D, H, bed } = run;
-  const perLength = o.geometry === 'plane' ? 1 / (run.spacing as number) : 1;
-  // the merged line plume is followed as in still water (no crossflow entrainment, no current momentum): see DIFFUSER_PLUME
-  const ctx: ClosureContext =
-    o.geometry === 'plane' ? { ...run.ctx, geometry: 'plane', current: () => 0 } : { ...run.ctx, geometry: 'round' };
-  const qRef = run.Q0 * perLength,
-    mRef = run.M0 * perLength;
-  const scale = [D, D, D, qRef, mRef, mRef, mRef, qRef * run.rhoScale, qRef * run.tScale];
-  const toState = (v: readonly number[]): JetState =>
-    Object.fromEntries(STATE_KEYS.map((k, i) => [k, v[i] * scale[i]])) as unknown as JetState;
-  const rhs = (_t: number, v: readonly number[]) => {
-    const ds = jetDerivative(toState(v), ctx);
-    return STATE_KEYS.map((k, i) => (ds[k] * D) / scale[i]);
-  };
-  const edge = (v: readonly number[], sign: number) => {
-    const s = toState(v),
-      L = localJet(s, ctx);
-    return s.z + sign * L.b * Math.sqrt(Math.max(0, 1 - L.ez * L.ez));
-  };
-  const events: OdeEvent[] = [
-    { name: 'surface contact', g: (_t, v) => v[2] * D - H, direction: 'rising', terminal: true },
-    { name: 'return to port level', g: (_t, v) => v[2], direction: 'falling', terminal: run.returnTerminal },
-    { name: 'maximum rise', g: (_t, v) => v[6], direction: 'falling', terminal: true },
-    { name: 'lowest point', g: (_t, v) => v[6], direction: 'rising', terminal: true },
-    { name: 'neutral buoyancy', g: (_t, v) => localJet(toState(v), ctx).densityExcess, direction: 'either' },
-    {
-      name: 'momentum spent',
-      g: (_t, v) => Math.hypot(v[4], v[5], v[6]) / v[3] - 1e-3,
-      direction: 'falling',
-      terminal: true,
-    },
-    { name: 'edge reaches surface', g: (_t, v) => edge(v, 1) - H, direction: 'rising' },
-  ];
-  if (bed !== undefined && bed > H) {
-    events.push({ name: 'bed contact', g: (_t, v) => v[2] * D + (bed - H), direction: 'falling', terminal: true });
-    events.push({ name: 'edge reaches bed', g: (_t, v) => edge(v, -1) + (bed - H), direction: 'falling' });
-  }
-  const spacing = run.spacing;
-  if (spacing !== undefined && o.geometry === 'round') {
-    events.push({
-      name: 'plumes merge',
-      g: (_t, v) => 2 * localJet(toState(v), ctx).b - spacing,
-      direction: 'rising',
-      terminal: o.stopAtMerge ?? false,
-    });
-  }
-
+  const D = run.D;
+  const eq = jetEquationsOf(run, o.geometry);
+  const rhs = jetRhsFor(eq);
+  const events = stretchEvents(run, eq, o);
   // integrate in segments: a turning point ends the path only when the jet is trapped (neutral buoyancy passed)
   const ts: number[] = [],
     ys: number[][] = [],
     fired: { name: string; t: number; y: number[] }[] = [];
   let start = o.sStart / D,
-    y0: number[] = STATE_KEYS.map((k, i) => o.start[k] / scale[i]),
+    y0 = scaledState(o.start, eq),
     evaluations = 0,
     status: OdeStatus = 'completed',
     message = '';
   for (let seg = 0; seg < 8; seg++) {
-    const sol = solveOde(rhs, start, y0, run.sMax / D, { rtol: 1e-8, atol: 1e-10, h0: 0.01, maxSteps: 20000, events });
+    const sol = integrateOde(rhs, start, y0, run.sMax / D, {
+      rtol: 1e-8,
+      atol: 1e-10,
+      h0: 0.01,
+      maxSteps: run.maxSteps,
+      events,
+    });
     evaluations += sol.evaluations;
     status = sol.status;
-    message = sol.message;
+    message = stopMessage(sol.status, sol.message, sol.t[sol.t.length - 1] * D, run.maxSteps);
     const skip = ts.length ? 1 : 0;
-    ts.push(...sol.t.slice(skip));
-    ys.push(...sol.y.slice(skip));
+    for (let i = skip; i < sol.t.length; i++) {
+      ts.push(sol.t[i]);
+      ys.push(sol.y[i]);
+    }
     fired.push(...sol.events);
     const last = sol.events[sol.events.length - 1];
     const turning = sol.status === 'terminal-event' && (last.name === 'maximum rise' || last.name === 'lowest point');
@@ -234,13 +271,22 @@ export function traceStretch(run: JetRun, o: StretchOptions): Stretch {
   }
   return {
     geometry: o.geometry,
-    ctx,
-    qRef,
+    equations: eq,
+    qRef: eq.scale[3],
     s: ts.map((t) => t * D),
-    states: ys.map(toState),
-    fired: fired.map((e) => ({ name: e.name, s: e.t * D, state: toState(e.y) })),
+    y: ys,
+    fired: fired.map((e) => ({ name: e.name, s: e.t * D, y: e.y })),
     status,
     message,
     evaluations,
   };
+}
+
+/** The integrator's stop in the words of the path: where and why it stopped early. */
+function stopMessage(status: OdeStatus, message: string, s: number, maxSteps: number): string {
+  const at = `s = ${Number(s.toPrecision(4))} m`;
+  if (status === 'max-steps') return `the path integration stopped at its step limit of ${maxSteps} steps at ${at}`;
+  if (status === 'step-failed')
+    return `the path integration stopped on a failed step at ${at} (${message.replace(/ at t = .*$/, '')})`;
+  return message;
 }

@@ -1,6 +1,7 @@
 import { InputError } from '../core/errors';
 import { requireInRange } from '../core/range';
 import type { MethodInfo, Scalar } from '../core/method';
+import { note } from '../core/warning';
 
 export const REQUIRED_DILUTION: MethodInfo = {
   id: 'required-dilution',
@@ -37,7 +38,7 @@ export function requiredDilution(effluent: number, ambient: number, criterion: n
       value: 1,
       unit: '1',
       method: REQUIRED_DILUTION.id,
-      warnings: ['The effluent already meets the criterion before any dilution.'],
+      warnings: [note('criterion-met-undiluted', 'The effluent already meets the criterion before any dilution.')],
     };
   }
   if (sign * (cc - ca) <= 0) {

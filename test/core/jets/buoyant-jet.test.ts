@@ -260,8 +260,13 @@ describe('buoyant-jet properties', () => {
         'end of near field',
       ]),
     );
-    expect(dense.warnings.join(' ')).toMatch(/merge/);
-    expect(dense.warnings.join(' ')).toMatch(/under-predict/);
+    const merging = dense.warnings.find((w) => w.code === 'plumes-merge-single-port');
+    expect(merging?.severity).toBe('caution');
+    expect(merging?.message).toMatch(/merge/);
+    const inclined = dense.warnings.find((w) => w.code === 'dense-jet-dilution-low');
+    expect(inclined).toMatchObject({ severity: 'caution', input: 'angle' });
+    expect(inclined?.message).toMatch(/under-predict/);
+    expect(dense.warnings.map((w) => w.code)).toContain('near-field-bed-contact');
     const warm = buoyantJetTrajectory({
       diameter: 0.3,
       velocity: 1.5,

@@ -165,7 +165,14 @@ describe('diffuser-plume limits', () => {
     expect(one.regime).toBe('single port');
     expect(one.dilution).toBe(buoyantJetTrajectory({ ...base, horizontalAngle: 0 }).path.dilutionCentreline.at(-1));
     const swept = diffuserPlume({ ...base, spacing: 2, ports: 4, current: 0.1, currentAngle: 20 });
-    const w = swept.warnings.join(' ');
+    const w = swept.warnings.map((x) => x.message).join(' ');
+    expect(swept.warnings.map((x) => [x.code, x.severity, x.input])).toEqual(
+      expect.arrayContaining([
+        ['merged-plume-still-water', 'caution', 'current'],
+        ['current-along-diffuser', 'outside-validity', 'current_angle'],
+        ['diffuser-shorter-than-rise', 'caution', undefined],
+      ]),
+    );
     expect(w).toMatch(/still water/);
     expect(w).toMatch(/20° to the diffuser/);
     expect(w).toMatch(/shorter than the rise/);

@@ -44,7 +44,8 @@ describe('jet length scales', () => {
   it('a dense discharge is described as falling back; a low Froude number warns', () => {
     const r = jetLengthScales({ diameter: 1, velocity: 0.1, gPrime: -0.2, current: 0.1, buoyancyFrequency: 0.01 });
     expect(r.regime.join(' ')).toMatch(/denser/);
-    expect(r.warnings.join(' ')).toMatch(/froude/);
+    expect(r.warnings).toEqual([expect.objectContaining({ code: 'validity-range', input: 'froude' })]);
+    expect(r.warnings[0].message).toMatch(/froude/);
   });
   it('scales grow with momentum flux and fall with buoyancy (property)', () => {
     fc.assert(
