@@ -2,6 +2,7 @@ import { createReadStream } from 'node:fs';
 import { createServer, type IncomingMessage, type ServerResponse } from 'node:http';
 import { randomBytes, timingSafeEqual } from 'node:crypto';
 import type { AddressInfo } from 'node:net';
+import type { Duplex } from 'node:stream';
 import type { Reply } from '../../shared-core/ipc/contract';
 import { createChannelHandlers, dispatch } from '../services/channel-handlers';
 import { resolveStatic, SECURITY_HEADERS } from '../services/static-files';
@@ -40,18 +41,20 @@ function sendReply(res: ServerResponse, status: number, reply: Reply<unknown>): 
 const refuse = (res: ServerResponse, status: number, code: string, message: string) =>
   sendReply(res, status, { ok: false, error: { code, message } });
 
+/**
+ * The request body, or null when it is over MAX_BODY. An oversized body is read to its end and dropped
+ * rather than cut off, so the client receives the 413 answer instead of a connection reset.
+ */
 function readBody(req: IncomingMessage): Promise<string | null> {
   return new Promise((done, fail) => {
     const chunks: Buffer[] = [];
     let size = 0;
     req.on('data', (c: Buffer) => {
       size += c.length;
-      if (size > MAX_BODY) {
-        done(null);
-        req.destroy();
-      } else chunks.push(c);
+      if (size <= MAX_BODY) chunks.push(c);
+      else chunks.length = 0;
     });
-    req.on('end', () => done(Buffer.concat(chunks).toString('utf8')));
+    req.on('end', () => done(size > MAX_BODY ? null : Buffer.concat(chunks).toString('utf8')));
     req.on('error', fail);
   });
 }
@@ -88,7 +91,10 @@ export async function startShell(opts: ShellOptions): Promise<RunningShell> {
     if (!/^application\/json\b/i.test(req.headers['content-type'] ?? ''))
       return refuse(res, 415, 'invalid-request', 'send JSON (content-type: application/json)');
     const body = await readBody(req);
-    if (body === null) return refuse(res, 413, 'invalid-request', 'the request is too large');
+    if (body === null) {
+      res.setHeader('connection', 'close');
+      return refuse(res, 413, 'invalid-request', `the request is over ${MAX_BODY / 1024 / 1024} MB`);
+    }
     let payload: unknown;
     try {
       payload = body.trim() === '' ? {} : JSON.parse(body);
@@ -111,17 +117,41 @@ export async function startShell(opts: ShellOptions): Promise<RunningShell> {
       .pipe(res);
   };
 
-  const server = createServer((req, res) => {
+  const route = async (req: IncomingMessage, res: ServerResponse) => {
     if (!req.headers.host || !origins.some((o) => o === `http://${req.headers.host}`)) {
       return send(res, 403, 'text/plain; charset=utf-8', 'this gprime shell answers only to 127.0.0.1 and localhost');
     }
     const path = (req.url ?? '/').split('?')[0];
-    const handled = path.startsWith('/api/') ? api(req, res, decodeURIComponent(path.slice(5))) : files(req, res, path);
-    Promise.resolve(handled).catch((e) => {
+    if (!path.startsWith('/api/')) return files(req, res, path);
+    let channel: string;
+    try {
+      channel = decodeURIComponent(path.slice(5));
+    } catch {
+      return refuse(res, 400, 'invalid-request', 'the request path is not valid percent-encoding');
+    }
+    return api(req, res, channel);
+  };
+
+  // every request, whatever its path or headers, is answered inside this boundary: nothing it sends can
+  // throw past it and stop the server
+  const server = createServer((req, res) => {
+    req.on('error', () => res.destroy());
+    res.on('error', () => res.destroy());
+    route(req, res).catch((e: unknown) => {
       if (!res.headersSent) refuse(res, 500, 'internal', e instanceof Error ? e.message : String(e));
       else res.destroy();
     });
   });
+  // a request Node cannot parse (bad request line, header too large) gets a 400; CONNECT and protocol
+  // upgrades (which Node hands over as raw sockets) get a 405; the socket closes
+  const answerRaw = (socket: Duplex, status: string) => {
+    socket.on('error', () => socket.destroy());
+    if (socket.writable) socket.end(`HTTP/1.1 ${status}\r\nconnection: close\r\ncontent-length: 0\r\n\r\n`);
+    else socket.destroy();
+  };
+  server.on('clientError', (_e, socket: Duplex) => answerRaw(socket, '400 Bad Request'));
+  server.on('connect', (_req, socket: Duplex) => answerRaw(socket, '405 Method Not Allowed'));
+  server.on('upgrade', (_req, socket: Duplex) => answerRaw(socket, '405 Method Not Allowed'));
 
   await new Promise<void>((done, fail) => {
     server.once('error', fail);

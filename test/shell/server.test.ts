@@ -1,6 +1,5 @@
 // The browser shell (src-main/shell): 127.0.0.1 only, a per-run token on every /api request, the Host
 // header checked (DNS-rebinding defence), the renderer served with the CSP, and the same channels as Electron.
-import { request } from 'node:http';
 import { connect } from 'node:net';
 import { existsSync, mkdirSync, mkdtempSync, readFileSync, symlinkSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
@@ -8,47 +7,9 @@ import { join } from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { startShell, type RunningShell } from '../../src-main/shell/server';
 import { RENDERER_CSP } from '../../src-main/services/static-files';
+import { http, rawRequest } from './http-client';
 
 const DEMO = readFileSync(join(import.meta.dirname, '../../examples/quillmere-reservoir.gpsite'), 'utf8');
-
-interface Answer {
-  status: number;
-  headers: Record<string, string | string[] | undefined>;
-  body: string;
-  json?: any;
-}
-
-/** A raw HTTP request, so that the Host header can be set freely (fetch would not allow it). */
-function http(
-  port: number,
-  method: string,
-  path: string,
-  headers: Record<string, string> = {},
-  body?: string,
-): Promise<Answer> {
-  return new Promise((done, fail) => {
-    const req = request(
-      { host: '127.0.0.1', port, method, path, headers: { host: `127.0.0.1:${port}`, ...headers } },
-      (res) => {
-        let text = '';
-        res
-          .setEncoding('utf8')
-          .on('data', (c) => (text += c))
-          .on('end', () => {
-            let json: unknown;
-            try {
-              json = JSON.parse(text);
-            } catch {
-              json = undefined;
-            }
-            done({ status: res.statusCode ?? 0, headers: res.headers, body: text, json });
-          });
-      },
-    );
-    req.on('error', fail);
-    req.end(body);
-  });
-}
 
 let shell: RunningShell;
 let workspace: string;
@@ -209,5 +170,44 @@ describe('browser shell', () => {
     expect(Number.isNaN(Date.parse(check.value.savedAt))).toBe(false);
     expect((await api('recovery.clear', {})).json.ok).toBe(true);
     expect((await api('recovery.check', {})).json.value).toBeNull();
+  });
+});
+
+describe('hostile requests never stop the shell', () => {
+  const stillAnswers = async () => expect((await api('app.info', {})).json?.ok).toBe(true);
+
+  it('answers request paths that are not valid percent-encoding with 400, with or without the token', async () => {
+    // '/api/%E0%A4%A' (a truncated UTF-8 sequence) once threw outside the error boundary and stopped the process
+    for (const path of ['/api/%E0%A4%A', '/api/%', '/api/%zz', '/api/%C0%AF', '/api/%ED%A0%80']) {
+      expect((await http(shell.port, 'GET', path)).status, path).toBe(400);
+      const r = await http(shell.port, 'POST', path, {
+        'content-type': 'application/json',
+        'x-gprime-token': shell.token,
+      });
+      expect(r.status, path).toBe(400);
+      expect(r.json?.error.code).toBe('invalid-request');
+    }
+    await stillAnswers();
+  });
+
+  it('answers a body over the limit with 413 (not a connection reset) and keeps serving', async () => {
+    const body = Buffer.alloc(70 * 1024 * 1024, 0x20); // 70 MB of spaces: over the 64 MB limit
+    const r = await http(
+      shell.port,
+      'POST',
+      '/api/site.save',
+      { 'content-type': 'application/json', 'x-gprime-token': shell.token },
+      body,
+    );
+    expect(r.status).toBe(413);
+    expect(r.json?.error.message).toMatch(/64 MB/);
+    await stillAnswers();
+  });
+
+  it('answers a request Node cannot parse with 400', async () => {
+    const head = (line: string) => Buffer.from(`${line}\r\nhost: 127.0.0.1:${shell.port}`, 'latin1');
+    expect(await rawRequest(shell.port, head('GET /\u0000 HTTP/1.1'))).toBe(400);
+    expect(await rawRequest(shell.port, head('BREW / HTTP/1.1\r\nbad header'))).toBe(400);
+    await stillAnswers();
   });
 });
