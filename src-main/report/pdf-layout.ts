@@ -75,32 +75,50 @@ export const ACCENT = rgb(0.12, 0.3, 0.6);
 const RULE = rgb(0.75, 0.75, 0.75);
 const HEADER_FILL = rgb(0.9, 0.92, 0.95);
 
-/** Splits text into lines no wider than `width`; words longer than a line are broken between characters. */
+/** Widths at size 1 per font and text: fontkit shapes the text on every measurement, and wrapping repeats words. */
+const widthCache = new WeakMap<PDFFont, Map<string, number>>();
+
+/** Width of text set in font at size [pt], cached (widths scale with the size). */
+export function textWidth(font: PDFFont, text: string, size: number): number {
+  let cache = widthCache.get(font);
+  if (!cache) widthCache.set(font, (cache = new Map()));
+  let width = cache.get(text);
+  if (width === undefined) cache.set(text, (width = font.widthOfTextAtSize(text, 1)));
+  return width * size;
+}
+
+/**
+ * Splits text into lines no wider than `width`; words longer than a line are broken between characters. A line's
+ * width is the sum of its words and spaces (no kerning across a space).
+ */
 export function wrapText(text: string, font: PDFFont, size: number, width: number): string[] {
   const out: string[] = [];
+  const space = textWidth(font, ' ', size);
   for (const paragraph of text.split('\n')) {
-    let line = '';
+    let line = '',
+      lineWidth = 0;
     const push = (word: string) => {
-      const next = line ? `${line} ${word}` : word;
-      if (font.widthOfTextAtSize(next, size) <= width) {
-        line = next;
+      const wordWidth = textWidth(font, word, size);
+      if (line && lineWidth + space + wordWidth <= width) {
+        line += ` ${word}`;
+        lineWidth += space + wordWidth;
         return;
       }
       if (line) out.push(line);
-      line = '';
-      if (font.widthOfTextAtSize(word, size) <= width) {
-        line = word;
-        return;
-      }
-      let piece = '';
+      [line, lineWidth] = [word, wordWidth];
+      if (wordWidth <= width) return;
+      let piece = '',
+        pieceWidth = 0;
       for (const ch of word) {
-        if (font.widthOfTextAtSize(piece + ch, size) > width && piece) {
+        const w = textWidth(font, ch, size);
+        if (pieceWidth + w > width && piece) {
           out.push(piece);
-          piece = '';
+          [piece, pieceWidth] = ['', 0];
         }
         piece += ch;
+        pieceWidth += w;
       }
-      line = piece;
+      [line, lineWidth] = [piece, pieceWidth];
     };
     for (const word of paragraph.split(/ +/).filter(Boolean)) push(word);
     out.push(line);
@@ -155,7 +173,7 @@ export class PdfWriter {
       this.ensure(lead);
       this.y -= lead;
       if (i === 0 && style.bullet) {
-        const bx = Math.max(this.left, this.left + indent - font.widthOfTextAtSize(style.bullet, size) - 4);
+        const bx = Math.max(this.left, this.left + indent - textWidth(font, style.bullet, size) - 4);
         this.page.drawText(style.bullet, { x: bx, y: this.y + size * 0.25, size, font, color: style.color ?? INK });
       }
       this.page.drawText(line, {
@@ -206,7 +224,7 @@ export class PdfWriter {
       let x = this.left;
       wrapped.forEach((lines, i) => {
         lines.forEach((line, k) => {
-          const w = font.widthOfTextAtSize(line, size);
+          const w = textWidth(font, line, size);
           const tx = columns[i].align === 'right' ? x + widths[i] - pad - w : x + pad;
           this.page.drawText(line, { x: tx, y: this.y - pad - (k + 1) * lead + size * 0.3, size, font, color: INK });
         });

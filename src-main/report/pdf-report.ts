@@ -2,7 +2,15 @@ import fontkit from '@pdf-lib/fontkit';
 import { PDFDocument, PDFName, rgb, type PDFPage } from 'pdf-lib';
 import type { EstimateSection, QuantityRow, ReportModel, UncertaintySection } from '../../shared-core/report/model';
 import { fontBytes } from './assets';
-import { embedRgb, MUTED, PdfWriter, type EmbeddedImage, type Reserved, type TableColumn } from './pdf-layout';
+import {
+  embedRgb,
+  MUTED,
+  PdfWriter,
+  textWidth,
+  type EmbeddedImage,
+  type Reserved,
+  type TableColumn,
+} from './pdf-layout';
 
 /**
  * The calc sheet as PDF: title block, contents, summary, one section per estimate (inputs, method
@@ -212,15 +220,15 @@ export async function buildPdf(
     const label = `${e.number}  ${e.title}`;
     const num = String(page);
     const size = 10;
-    const numWidth = fonts.regular.widthOfTextAtSize(num, size);
+    const numWidth = textWidth(fonts.regular, num, size);
     let shown = label;
-    while (fonts.regular.widthOfTextAtSize(shown, size) > w.width - numWidth - 30 && shown.length > 4)
+    while (textWidth(fonts.regular, shown, size) > w.width - numWidth - 30 && shown.length > 4)
       shown = shown.slice(0, -2);
     if (shown !== label) shown = shown.trimEnd() + '…';
     at.page.drawText(shown, { x: w.left, y: at.y + 3, size, font: fonts.regular });
-    const dotsFrom = w.left + fonts.regular.widthOfTextAtSize(shown, size) + 6;
+    const dotsFrom = w.left + textWidth(fonts.regular, shown, size) + 6;
     const dotsTo = w.left + w.width - numWidth - 6;
-    const dots = '.'.repeat(Math.max(0, Math.floor((dotsTo - dotsFrom) / fonts.regular.widthOfTextAtSize('.', size))));
+    const dots = '.'.repeat(Math.max(0, Math.floor((dotsTo - dotsFrom) / textWidth(fonts.regular, '.', size))));
     at.page.drawText(dots, { x: dotsFrom, y: at.y + 3, size, font: fonts.regular, color: MUTED });
     at.page.drawText(num, { x: w.left + w.width - numWidth, y: at.y + 3, size, font: fonts.regular });
     linkTo(doc, at.page, w.pages[page - 1], [w.left, at.y, w.left + w.width, at.y + size + 3]);
@@ -240,14 +248,14 @@ export async function buildPdf(
     });
     page.drawText(left, { x: w.left, y, size, font: fonts.regular, color: MUTED });
     page.drawText(center, {
-      x: w.left + (w.width - fonts.regular.widthOfTextAtSize(center, size)) / 2,
+      x: w.left + (w.width - textWidth(fonts.regular, center, size)) / 2,
       y,
       size,
       font: fonts.regular,
       color: MUTED,
     });
     page.drawText(right, {
-      x: w.left + w.width - fonts.regular.widthOfTextAtSize(right, size),
+      x: w.left + w.width - textWidth(fonts.regular, right, size),
       y,
       size,
       font: fonts.regular,

@@ -167,7 +167,7 @@ describe('tables round-trip to the numbers of `assess`', () => {
           expect(row.unit).toBe(v.unit === '1' ? '' : v.unit);
         }
       }
-      expect(rows.filter((r) => r.section === 'warning').map((r) => r.value)).toEqual(e.warnings);
+      expect(rows.filter((r) => r.section === 'warning').map((r) => r.value)).toEqual(e.warnings.map((w) => w.message));
     }
   });
 
