@@ -1,20 +1,16 @@
 import { num, text } from '../calc/resolve';
 import { arg, type CalcArgs, type CalcMethod, type CalcOutput } from '../calc/types';
-import { InputError } from '../core/errors';
 import { positive, nonNegative } from '../core/range';
 import { JET_LENGTH_SCALES, jetLengthScales } from './length-scales';
 import { BUOYANT_JET } from './closure';
-import {
-  buoyantJetTrajectory,
-  JET_PATH_COLUMNS,
-  type BuoyantJetInput,
-  type JetPath,
-  type JetTrajectory,
-} from './buoyant-jet';
+import { buoyantJetTrajectory, JET_PATH_COLUMNS, type JetTrajectory } from './buoyant-jet';
+import { buoyantJetInputFromArgs, diffuserInputFromArgs, jetPathSeries, jetPortParams } from './calc-inputs';
 import { LINE_PLUME_RSB1989, linePlumeRobertsSnyderBaumgartner1989 } from './line-plume';
-import { DIFFUSER_PLUME, diffuserPlume, type DiffuserInput } from './diffuser';
+import { DIFFUSER_PLUME, diffuserPlume } from './diffuser';
 import { REQUIRED_DILUTION, requiredDilution } from '../mixing-zone/required-dilution';
-import type { ParamSpec, ResultValue, Series } from '../calc/types';
+import type { ResultValue, Series } from '../calc/types';
+
+export { buoyantJetInputFromArgs, diffuserInputFromArgs, jetPathSeries } from './calc-inputs';
 
 const lengthScaleResults = [
   ['l_q', 'lQ', 'Q/√M: distance over which the port geometry matters'],
@@ -24,121 +20,6 @@ const lengthScaleResults = [
   ['l_strat_momentum', 'lStratMomentum', '(M/N²)^¼: stratification scale of a jet'],
   ['l_strat_buoyancy', 'lStratBuoyancy', '(|B|/N³)^¼: stratification scale of a plume'],
 ] as const;
-
-/** The model input from resolved buoyant-jet arguments (shared by the calc method and the compliance table). */
-export function buoyantJetInputFromArgs(a: CalcArgs): BuoyantJetInput {
-  const profile = arg.profile(a);
-  const rhoA = arg.optNum(a, 'ambient_density');
-  if ((profile === undefined) === (rhoA === undefined)) {
-    throw new InputError(
-      profile ? 'ambient_density' : 'file',
-      '(missing)',
-      '',
-      'exactly one of ambient_density and file',
-      'give either a uniform ambient_density or a profile file, not both and not neither',
-    );
-  }
-  const input: BuoyantJetInput = {
-    diameter: arg.num(a, 'diameter'),
-    velocity: arg.num(a, 'velocity'),
-    angle: arg.num(a, 'angle'),
-    portDepth: arg.num(a, 'port_depth'),
-    effluentDensity: arg.num(a, 'effluent_density'),
-    ambient: profile ? { kind: 'profile', profile } : { kind: 'uniform', density: rhoA as number },
-    current: arg.num(a, 'current'),
-  };
-  return input;
-}
-
-/** The merged-diffuser input from resolved diffuser-plume arguments (shared by the calc method and the compliance table). */
-export function diffuserInputFromArgs(a: CalcArgs): DiffuserInput {
-  const ports = arg.optNum(a, 'ports'),
-    length = arg.optNum(a, 'diffuser_length');
-  let spacing = arg.optNum(a, 'spacing');
-  if (spacing === undefined && length !== undefined) {
-    if (ports === undefined || ports < 2)
-      throw new InputError(
-        'ports',
-        ports ?? '(missing)',
-        '1',
-        '≥ 2 with diffuser_length',
-        'the spacing follows from diffuser_length only with the number of ports (at least 2)',
-      );
-    spacing = length / (ports - 1);
-  }
-  return { ...buoyantJetInputFromArgs(a), spacing, ports, currentAngle: arg.optNum(a, 'current_angle') };
-}
-
-/** Chart curves of a trajectory: the centreline in the vertical section and dilution along the path. */
-export function jetPathSeries(t: JetTrajectory): Series[] {
-  const col = (k: keyof JetPath) => ({ ...JET_PATH_COLUMNS[k], values: [...(t.path[k] ?? [])] });
-  return [
-    {
-      kind: 'plume-centreline',
-      title: 'Plume centreline',
-      x: col('horizontalDistance'),
-      y: [col('depth')],
-      depthAxis: true,
-      caption: `Centreline path in the vertical section (${t.outcomeText})`,
-    },
-    {
-      kind: 'dilution-along-path',
-      title: 'Dilution along the path',
-      x: col('horizontalDistance'),
-      y: [col('dilutionCentreline'), col('dilutionAverage')],
-      caption: 'Centreline and flux-average dilution against horizontal distance from the port',
-    },
-  ];
-}
-
-/** Parameters of one port and its ambient, shared by buoyant-jet and diffuser-plume. */
-const jetPortParams: ParamSpec[] = [
-  { kind: 'number', name: 'diameter', unit: 'm', description: 'port diameter', range: { ...positive, max: 20 } },
-  { kind: 'number', name: 'velocity', unit: 'm/s', description: 'exit velocity', range: { ...positive, max: 100 } },
-  {
-    kind: 'number',
-    name: 'angle',
-    unit: 'deg',
-    description: 'vertical angle above horizontal',
-    range: { min: -90, max: 90 },
-  },
-  {
-    kind: 'number',
-    name: 'port_depth',
-    unit: 'm',
-    description: 'port depth below the surface',
-    range: { ...positive, max: 11000 },
-  },
-  {
-    kind: 'number',
-    name: 'effluent_density',
-    unit: 'kg/m3',
-    description: 'effluent density',
-    range: { min: 900, max: 1300 },
-  },
-  {
-    kind: 'number',
-    name: 'ambient_density',
-    unit: 'kg/m3',
-    description: 'uniform ambient density (or give file)',
-    optional: true,
-    range: { min: 900, max: 1300 },
-  },
-  {
-    kind: 'profile',
-    name: 'file',
-    description: 'CSV profile of the ambient (or give ambient_density); its deepest sample is taken as the bed',
-    optional: true,
-  },
-  {
-    kind: 'number',
-    name: 'current',
-    unit: 'm/s',
-    description: 'current speed, taken along the jet direction (co-flowing: the lower, cautious near-field dilution)',
-    default: 0,
-    range: { ...nonNegative, max: 10 },
-  },
-];
 
 /** Runs the buoyant-jet model for the CLI and reports the headline results. */
 function runBuoyantJet(a: CalcArgs): CalcOutput {
