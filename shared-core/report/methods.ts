@@ -37,6 +37,7 @@ import * as inflows1 from '../inflows/underflow';
 import * as inflows2 from '../inflows/entrainment';
 import * as inflows3 from '../inflows/plunge';
 import * as mixing from '../mixing-zone/required-dilution';
+import * as mixingFarField from '../mixing-zone/far-field';
 import * as uncertainty from '../uncertainty/propagate';
 
 /**
@@ -83,6 +84,7 @@ const MODULES: readonly Record<string, unknown>[] = [
   inflows2,
   inflows3,
   mixing,
+  mixingFarField,
   uncertainty,
 ];
 
