@@ -226,14 +226,23 @@ function complianceTable(rows: readonly ComplianceRow[]): ComplianceTable | null
     ],
     rows: rows.map((r) => [
       r.feature,
-      r.condition,
-      r.constituent,
+      r.governing ? `${r.condition} (governs)` : r.condition,
+      `${r.constituent} (${r.zone})`,
       prettyUnit(r.unit),
       n(r.requiredDilution),
-      n(r.achievedDilution),
+      r.farFieldFactor === null
+        ? n(r.achievedDilution)
+        : `${n(r.nearFieldDilution)} × ${n(r.farFieldFactor)} = ${n(r.achievedDilution)}`,
       r.margin === null ? '—' : `${formatValue(100 * r.margin, 3)} %`,
       r.verdict,
-      r.note,
+      [
+        r.effluent === null ? '' : `Ce ${n(r.effluent)}, Ca ${n(r.ambient)}, Cc ${n(r.criterion)}`,
+        r.boundary === null ? '' : `boundary ${n(r.boundary)} m`,
+        r.models,
+        r.note,
+      ]
+        .filter(Boolean)
+        .join('; '),
     ]),
   };
 }

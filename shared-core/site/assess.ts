@@ -9,7 +9,7 @@ import { ProfileError } from '../profile/profile';
 import { boundArgs } from './bindings';
 import { makeContext, ProfileCache, type EstimateContext } from './context';
 import type { Estimate, Site } from './schema';
-import { complianceEstimates, siteCompliance } from './compliance';
+import { complianceEstimates, farFieldEstimates, siteCompliance } from './compliance';
 import { assessConditions, type ConditionOutcome } from './conditions';
 import { bandsFromTyped, MONTE_CARLO_JCGM101, type UncertaintyResult } from '../uncertainty';
 
@@ -44,22 +44,42 @@ export interface EstimateOutcome {
   added?: boolean;
 }
 
-/** One row of the mixing-zone compliance table: a constituent of an outfall under one condition. */
+/**
+ * One row of the mixing-zone compliance table: a constituent of an outfall under one condition, for one zone
+ * (acute criteria at the zone of initial dilution, chronic at the mixing-zone boundary). Concentrations are
+ * in the row's unit; dilutions are centreline values at the zone's boundary.
+ */
 export interface ComplianceRow {
   feature: string;
   condition: string;
   constituent: string;
   unit: string;
-  /** dilution needed to meet the criterion at the mixing-zone boundary, S = (Ce − Ca)/(Cc − Ca) */
+  zone: 'acute' | 'chronic';
+  /** the zone's boundary as a horizontal distance from the port [m] */
+  boundary: number | null;
+  /** Ce, Ca and Cc: effluent, ambient and criterion concentrations */
+  effluent: number | null;
+  ambient: number | null;
+  criterion: number | null;
+  /** dilution needed to meet the criterion, S = (Ce − Ca)/(Cc − Ca) */
   requiredDilution: number | null;
-  /** dilution the near-field model gives at the mixing-zone boundary */
+  /** the near-field model's dilution at the boundary (or at the end of the near field, when it ends first) */
+  nearFieldDilution: number | null;
+  /** the far-field factor from the end of the near field to the boundary, when the boundary lies beyond it */
+  farFieldFactor: number | null;
+  /** near-field dilution × far-field factor */
   achievedDilution: number | null;
   /** achieved / required − 1 (positive: meets with that margin) */
   margin: number | null;
   verdict: 'meets' | 'does not meet' | 'cannot tell';
   note: string;
-  /** the id of the estimate whose outcome gave the achieved dilution */
+  /** the models and runs that gave the achieved dilution, in words */
+  models: string;
+  /** the id of the near-field estimate whose outcome gave the dilution, and of the far-field one */
   estimate?: string;
+  farFieldEstimate?: string;
+  /** this condition is the tightest (smallest margin) for the outfall, constituent and zone */
+  governing: boolean;
 }
 
 export interface Assessment {
@@ -113,7 +133,7 @@ function failureMessage(err: unknown, method: string): string {
 /** The bound and typed arguments of an estimate, before defaults and range checks. */
 export function estimateArgs(method: CalcMethod, ctx: EstimateContext, e: Estimate): Record<string, RawArg> {
   const known = new Set(method.params.map((p) => p.name));
-  const bound = Object.fromEntries(Object.entries(boundArgs(method.id, ctx)).filter(([k]) => known.has(k)));
+  const bound = Object.fromEntries(Object.entries(boundArgs(method.id, ctx, e)).filter(([k]) => known.has(k)));
   return { ...bound, ...e.params } as Record<string, RawArg>;
 }
 
@@ -210,10 +230,11 @@ export function assessSite(
   cache = new ProfileCache(),
   run: (e: Estimate, index: number) => EstimateOutcome = (e, index) => runEstimate(site, e, index, options, cache),
 ): Assessment {
-  const estimates = assessedEstimates(site).map(({ estimate, index, added }) => {
-    const o = run(estimate, index);
-    return added ? { ...o, added: true } : o;
-  });
+  const mark = (o: EstimateOutcome, added: boolean) => (added ? { ...o, added: true } : o);
+  const first = assessedEstimates(site).map(({ estimate, index, added }) => mark(run(estimate, index), added));
+  const start = first.length;
+  const far = farFieldEstimates(site, first).map((e, k) => mark(run(e, start + k), true));
+  const estimates = [...first, ...far];
   return {
     format: 'gprime-assessment',
     project: site.project,

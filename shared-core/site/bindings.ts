@@ -3,13 +3,14 @@ import { GRAVITY } from '../quantities';
 import { interpolateAt } from '../profile/profile';
 import { waterDensity } from '../water/density';
 import { si, siOptional, buoyancyFrequencyAt, meanBuoyancyFrequency, type EstimateContext } from './context';
-import type { Channel, Feature, Inflow, Intake, Outfall } from './schema';
+import type { Channel, Estimate, Feature, Inflow, Intake, Outfall } from './schema';
+import { regulated } from './compliance';
 
 /**
  * Default arguments of each calc method, taken from the estimate's feature and condition. The
  * estimate's own `params` override them. Methods without a binding take their params only.
  */
-type Binding = (ctx: EstimateContext) => Record<string, RawArg | undefined>;
+type Binding = (ctx: EstimateContext, estimate?: Estimate) => Record<string, RawArg | undefined>;
 
 const at = (ctx: EstimateContext) => `features[${ctx.featureIndex}]`;
 const body = (ctx: EstimateContext) => ctx.site.waterBody;
@@ -198,6 +199,15 @@ const BINDINGS: Record<string, Binding> = {
       spacing: siOptional(`${at(ctx)}.spacing`, o.spacing, 'm'),
     };
   },
+  'required-dilution': (ctx, e) => {
+    // the outfall's constituent table is the one source of Ce, Ca and Cc; the estimate's params override them
+    const o = feature(ctx, 'outfall');
+    if (!o) return {};
+    const zone = e?.zone ?? 'chronic';
+    const rows = regulated(o, ctx.featureIndex, zone);
+    const row = e?.constituent ? rows.find((r) => r.name === e.constituent) : rows[0];
+    return row ? { effluent: row.effluent, ambient: row.ambient, criterion: row.criterion } : {};
+  },
   'line-plume': (ctx) => {
     const o = feature(ctx, 'outfall');
     if (!o || !ctx.profile) return {};
@@ -238,7 +248,7 @@ const BINDINGS: Record<string, Binding> = {
 };
 
 /** Default arguments for a method from its context; undefined values are left for the method's own defaults. */
-export function boundArgs(methodId: string, ctx: EstimateContext): Record<string, RawArg> {
-  const args = BINDINGS[methodId]?.(ctx) ?? {};
+export function boundArgs(methodId: string, ctx: EstimateContext, estimate?: Estimate): Record<string, RawArg> {
+  const args = BINDINGS[methodId]?.(ctx, estimate) ?? {};
   return Object.fromEntries(Object.entries(args).filter(([, v]) => v !== undefined)) as Record<string, RawArg>;
 }

@@ -1,126 +1,286 @@
 import type { EstimateModel } from '../calc/model';
 import { InputError } from '../core/errors';
-import { dilutionAtBoundary, type BoundaryDilution, type MixingZoneBoundary } from '../mixing-zone/boundary';
-import { complianceTable } from '../mixing-zone/compliance';
-import { si } from './context';
+import type { JetTrajectory } from '../jets/buoyant-jet';
+import { dilutionAtBoundary, type BoundaryDilution } from '../mixing-zone/boundary';
+import { complianceTable, type Constituent as RegulatedConstituent } from '../mixing-zone/compliance';
+import { si, siOptional } from './context';
 import type { ComplianceRow, EstimateOutcome } from './assess';
-import type { Estimate, Outfall, Site } from './schema';
+import type { Constituent, Estimate, Outfall, Site } from './schema';
+
+/**
+ * The verdict rule of every compliance row, in words for the calc sheet. The ±20 % band is a screening
+ * allowance for model uncertainty (common practice, no source), not a value from a standard.
+ */
+export const VERDICT_RULE =
+  'meets when the achieved dilution exceeds the required dilution by more than 20 %; does not meet when it falls ' +
+  'short by more than 20 %; otherwise cannot tell (a ±20 % screening band for model uncertainty, a conventional ' +
+  'allowance rather than a value from a standard). Margin = achieved ÷ required − 1.';
+
+export type Zone = 'acute' | 'chronic';
+const ZONES: readonly Zone[] = ['acute', 'chronic'];
 
 /** The near-field method that gives an outfall's dilution: the merged-diffuser model for several ports. */
 const nearFieldMethod = (o: Outfall) => (o.ports > 1 ? 'diffuser-plume' : 'buoyant-jet');
 
 const outfallsWithConstituents = (site: Site) =>
-  site.features.flatMap((f, index) => (f.kind === 'outfall' && f.constituents.length > 0 ? [{ f, index }] : []));
+  site.features.flatMap((f, index) =>
+    f.kind === 'outfall' && f.constituents.length > 0 ? [{ f: f as Outfall, index }] : [],
+  );
+
+const conditionOf = (site: Site, e: Estimate) => e.condition ?? site.conditions[0]?.id;
 
 /** The estimate of the site that gives an outfall's near-field dilution under a condition (the first one). */
 function ownNearField(site: Site, o: Outfall, conditionId: string): Estimate | undefined {
-  const first = site.conditions[0]?.id;
   return site.estimates.find(
-    (e) => e.method === nearFieldMethod(o) && e.feature === o.id && (e.condition ?? first) === conditionId,
+    (e) => e.method === nearFieldMethod(o) && e.feature === o.id && conditionOf(site, e) === conditionId,
   );
 }
 
+const nearFieldId = (site: Site, o: Outfall, conditionId: string) =>
+  ownNearField(site, o, conditionId)?.id ?? `${o.id}--${conditionId}--near-field`;
+const farFieldId = (o: Outfall, conditionId: string, zone: Zone) => `${o.id}--${conditionId}--far-field-${zone}`;
+
 /**
  * The near-field estimates the compliance table needs and the site lacks: one per outfall with constituents
- * and condition, with the outfall's and condition's bound inputs only. They are part of the assessment's
- * outcomes (marked `added`), so every view shows the run behind a verdict.
+ * and condition, with the outfall's and condition's bound inputs only. They join the assessment's outcomes
+ * (marked `added`), so every view shows the run behind a verdict.
  */
 export function complianceEstimates(site: Site): Estimate[] {
-  const out: Estimate[] = [];
-  for (const { f } of outfallsWithConstituents(site)) {
-    if (f.kind !== 'outfall') continue;
-    for (const c of site.conditions) {
-      if (ownNearField(site, f, c.id)) continue;
-      out.push({
-        id: `${f.id}--${c.id}--near-field`,
+  return outfallsWithConstituents(site).flatMap(({ f }) =>
+    site.conditions
+      .filter((c) => !ownNearField(site, f, c.id))
+      .map((c): Estimate => ({
+        id: nearFieldId(site, f, c.id),
         method: nearFieldMethod(f),
         feature: f.id,
         condition: c.id,
         title: `Near-field dilution of ${f.name} (${c.name}), for compliance`,
         params: {},
-      } as Estimate);
-    }
+      })),
+  );
+}
+
+/** The zone's boundary [m from the port] for an outfall, or undefined when the permit states no such zone. */
+function zoneDistance(f: Outfall, index: number, zone: Zone): number | undefined {
+  const at = `features[${index}].mixingZone`;
+  if (zone === 'chronic') return si(`${at}.distance`, f.mixingZone.distance, 'm');
+  const zid = f.mixingZone.zid;
+  if (!zid) return undefined;
+  if ('distance' in zid) return si(`${at}.zid.distance`, zid.distance, 'm');
+  return zid.depthMultiple * si(`features[${index}].portDepth`, f.portDepth, 'm');
+}
+
+/** The path whose dilution governs (a diffuser: the smaller of merged and single-port), with its name. */
+function governingPath(
+  model: EstimateModel | undefined,
+  edge: number,
+): { path: JetTrajectory; name: string } | undefined {
+  if (model?.kind === 'jet') return { path: model.trajectory, name: 'single-port plume' };
+  if (model?.kind !== 'diffuser') return undefined;
+  const d = model.diffuser;
+  const at = (t: JetTrajectory) => dilutionAtBoundary(t, { distance: edge, measure: 'horizontal' }).dilutionCentreline;
+  return at(d.merged) <= at(d.isolated) && d.merge
+    ? { path: d.merged, name: 'merged plumes' }
+    : { path: d.isolated, name: 'single-port plume' };
+}
+
+/** Width of the wastefield where the near field ends [m]: the plume's diameter, plus the diffuser's length. */
+function wastefieldWidth(model: EstimateModel, path: JetTrajectory): number {
+  const r = path.path.radius[path.path.radius.length - 1];
+  return 2 * r + (model.kind === 'diffuser' ? (model.diffuser.length ?? 0) : 0);
+}
+
+/**
+ * The far-field runs the table needs: one per outfall, condition and zone whose boundary lies beyond the end
+ * of the near field, when the condition has a current. Their inputs come from the near-field outcome.
+ */
+export function farFieldEstimates(site: Site, outcomes: readonly EstimateOutcome[]): Estimate[] {
+  const out: Estimate[] = [];
+  for (const { f, index } of outfallsWithConstituents(site)) {
+    site.conditions.forEach((c, ci) => {
+      const near = outcomes.find((o) => o.id === nearFieldId(site, f, c.id));
+      if (!near || near.status !== 'ok' || !near.model) return;
+      let current: number | undefined;
+      try {
+        current = siOptional(`conditions[${ci}].current`, c.current, 'm/s');
+      } catch {
+        return; // the near-field estimate reports the bad current
+      }
+      if (!current) return;
+      for (const zone of ZONES) {
+        if (!f.constituents.some((k) => k[zone] !== undefined)) continue;
+        const edge = zoneDistance(f, index, zone);
+        const g = edge === undefined ? undefined : governingPath(near.model, edge);
+        if (edge === undefined || !g) continue;
+        const x = g.path.path.horizontalDistance;
+        const beyond = edge - x[x.length - 1];
+        if (beyond <= 0 || dilutionAtBoundary(g.path, { distance: edge, measure: 'horizontal' }).reached) continue;
+        out.push({
+          id: farFieldId(f, c.id, zone),
+          method: 'far-field',
+          feature: f.id,
+          condition: c.id,
+          title: `Far-field dilution of ${f.name} (${c.name}) to the ${zone === 'acute' ? 'zone of initial dilution' : 'mixing-zone boundary'}`,
+          params: { width: wastefieldWidth(near.model, g.path), current, distance: beyond },
+        });
+      }
+    });
   }
   return out;
 }
 
-/** The centreline dilution at the boundary from a computed jet or diffuser model, and which run gave it. */
-function boundaryDilution(
-  model: EstimateModel | undefined,
-  edge: MixingZoneBoundary,
-  ports: number,
-): { at: BoundaryDilution; model: string } | undefined {
-  if (model?.kind === 'jet') return { at: dilutionAtBoundary(model.trajectory, edge), model: '' };
-  if (model?.kind !== 'diffuser') return undefined;
-  const d = model.diffuser;
-  const [merged, single] = [dilutionAtBoundary(d.merged, edge), dilutionAtBoundary(d.isolated, edge)];
-  const useMerged = merged.dilutionCentreline <= single.dilutionCentreline;
-  const which = useMerged && d.merge ? 'merged plumes' : 'single-port plume';
-  return {
-    at: useMerged ? merged : single,
-    model: `${ports} ports, ${which} (the smaller dilution); `,
-  };
+/** A constituent's concentrations in the row's unit; a linked row reads the outfall's effluent field. */
+function concentrations(f: Outfall, index: number, c: Constituent): { effluent: number; ambient: number } {
+  if (c.of === 'temperature')
+    return {
+      effluent: si(`features[${index}].effluent.temperature`, f.effluent.temperature, 'degC'),
+      ambient: c.ambient,
+    };
+  if (c.of === 'salinity')
+    return {
+      effluent: siOptional(`features[${index}].effluent.salinity`, f.effluent.salinity, 'PSU') ?? 0,
+      ambient: c.ambient,
+    };
+  return { effluent: c.effluent ?? NaN, ambient: c.ambient };
+}
+
+/** The constituent rows of an outfall for the required-dilution method and the table (Ce, Ca, Cc). */
+export function regulated(f: Outfall, index: number, zone: Zone): RegulatedConstituent[] {
+  return f.constituents.flatMap((c) => {
+    const criterion = c[zone];
+    return criterion === undefined ? [] : [{ name: c.name, unit: c.unit, ...concentrations(f, index, c), criterion }];
+  });
 }
 
 /**
- * Mixing-zone compliance of every outfall with constituents, under every ambient condition, read from the
- * assessment's own near-field outcomes (the estimate the user sees, with its own parameters, or the one the
- * assessment added): the centreline dilution at the mixing-zone boundary, measured horizontally from the port,
- * against each constituent's required dilution (complianceTable). An estimate that did not compute gives
- * 'cannot tell' rows with its reason.
+ * Mixing-zone compliance of every outfall with constituents, under every ambient condition and for each zone
+ * a criterion applies to (acute: zone of initial dilution; chronic: mixing-zone boundary), read from the
+ * assessment's own outcomes: the near-field estimate the user sees (or the one the assessment added) gives the
+ * centreline dilution at the boundary, measured horizontally from the port; where the near field ends before
+ * the boundary, the far-field run multiplies it. Each row marks whether its condition governs (the smallest
+ * margin for that outfall, constituent and zone). An estimate that did not compute gives 'cannot tell'.
  */
 export function siteCompliance(site: Site, outcomes: readonly EstimateOutcome[]): ComplianceRow[] {
   const rows: ComplianceRow[] = [];
   for (const { f, index } of outfallsWithConstituents(site)) {
-    if (f.kind !== 'outfall') continue;
-    for (const condition of site.conditions) {
-      const base = { feature: f.name, condition: condition.name };
-      const estimate = ownNearField(site, f, condition.id)?.id ?? `${f.id}--${condition.id}--near-field`;
-      const outcome = outcomes.find((o) => o.id === estimate);
-      const cannotTell = (note: string) =>
-        f.constituents.map((c) => ({
-          ...base,
-          constituent: c.name,
-          unit: c.unit,
-          requiredDilution: null,
-          achievedDilution: null,
-          margin: null,
-          verdict: 'cannot tell' as const,
-          note,
-          estimate,
-        }));
-      if (!outcome || outcome.status === 'error') {
-        rows.push(...cannotTell(`the near-field estimate ${estimate} did not compute: ${outcome?.error ?? 'missing'}`));
-        continue;
-      }
+    for (const zone of ZONES) {
+      let constituents: RegulatedConstituent[], edge: number | undefined;
       try {
-        const distance = si(`features[${index}].mixingZone.distance`, f.mixingZone.distance, 'm');
-        const found = boundaryDilution(outcome.model, { distance, measure: 'horizontal' }, f.ports);
-        if (!found) {
-          rows.push(...cannotTell(`the estimate ${estimate} holds no near-field path`));
-          continue;
-        }
-        const partial =
-          outcome.status === 'incomplete' ? `the near-field run is incomplete (${outcome.incomplete}); ` : '';
-        const table = complianceTable([{ name: condition.name, dilution: found.at }], f.constituents);
-        for (const r of table.rows) {
-          rows.push({
-            ...base,
-            constituent: r.constituent,
-            unit: r.unit,
-            requiredDilution: r.requiredDilution ?? null,
-            achievedDilution: r.achievedDilution,
-            margin: r.margin ?? null,
-            verdict: outcome.status === 'incomplete' ? 'cannot tell' : r.verdict,
-            note: partial + found.model + r.note,
-            estimate,
-          });
-        }
+        constituents = regulated(f, index, zone);
+        edge = constituents.length ? zoneDistance(f, index, zone) : undefined;
       } catch (e) {
         if (!(e instanceof InputError)) throw e;
-        rows.push(...cannotTell(e.message));
+        rows.push(...site.conditions.flatMap((c) => cannotTell(f, c.name, zone, f.constituents, e.message)));
+        continue;
       }
+      if (!constituents.length) continue;
+      if (edge === undefined) {
+        const why = 'an acute criterion is given but the outfall states no zone of initial dilution';
+        rows.push(...site.conditions.flatMap((c) => cannotTell(f, c.name, zone, f.constituents, why)));
+        continue;
+      }
+      const zoneRows = site.conditions.flatMap((c) => zoneRowsFor(site, outcomes, f, c.id, zone, edge!, constituents));
+      markGoverning(zoneRows);
+      rows.push(...zoneRows);
     }
   }
   return rows;
+}
+
+function cannotTell(
+  f: Outfall,
+  condition: string,
+  zone: Zone,
+  list: readonly { name: string; unit: string }[],
+  note: string,
+) {
+  return list.map((c): ComplianceRow => ({
+    feature: f.name,
+    condition,
+    constituent: c.name,
+    unit: c.unit,
+    zone,
+    boundary: null,
+    effluent: null,
+    ambient: null,
+    criterion: null,
+    requiredDilution: null,
+    nearFieldDilution: null,
+    farFieldFactor: null,
+    achievedDilution: null,
+    margin: null,
+    verdict: 'cannot tell',
+    note,
+    models: '',
+    governing: false,
+  }));
+}
+
+function zoneRowsFor(
+  site: Site,
+  outcomes: readonly EstimateOutcome[],
+  f: Outfall,
+  conditionId: string,
+  zone: Zone,
+  edge: number,
+  constituents: RegulatedConstituent[],
+): ComplianceRow[] {
+  const condition = site.conditions.find((c) => c.id === conditionId)!;
+  const id = nearFieldId(site, f, conditionId);
+  const near = outcomes.find((o) => o.id === id);
+  const fail = (why: string) =>
+    cannotTell(f, condition.name, zone, constituents, why).map((r) => ({ ...r, boundary: edge, estimate: id }));
+  if (!near || near.status === 'error')
+    return fail(`the near-field estimate ${id} did not compute: ${near?.error ?? 'missing'}`);
+  const g = governingPath(near.model, edge);
+  if (!g) return fail(`the estimate ${id} holds no near-field path`);
+  const atEdge = dilutionAtBoundary(g.path, { distance: edge, measure: 'horizontal' });
+  const far = outcomes.find((o) => o.id === farFieldId(f, conditionId, zone));
+  const factor =
+    far?.status === 'ok' && typeof far.results.dilution?.value === 'number' ? far.results.dilution.value : undefined;
+  const dilution: BoundaryDilution =
+    factor === undefined
+      ? atEdge
+      : { ...atEdge, dilutionCentreline: atEdge.dilutionCentreline * factor, reached: true };
+  const nearName = `${near.method} (${id}${near.model?.kind === 'diffuser' ? `, ${g.name}` : ''})`;
+  const models = factor === undefined ? nearName : `${nearName} × far-field (${far!.id})`;
+  const farNote =
+    factor !== undefined
+      ? `; the near field ends before the boundary, so the far-field 4/3-law factor ${factor.toPrecision(3)} multiplies it`
+      : !atEdge.reached && !condition.current
+        ? '; no ambient current is given, so the far field is not computed'
+        : '';
+  const partial = near.status === 'incomplete' ? `the near-field run is incomplete (${near.incomplete}); ` : '';
+  const table = complianceTable([{ name: condition.name, dilution }], constituents);
+  return table.rows.map((r, k): ComplianceRow => ({
+    feature: f.name,
+    condition: condition.name,
+    constituent: r.constituent,
+    unit: r.unit,
+    zone,
+    boundary: edge,
+    effluent: constituents[k].effluent,
+    ambient: constituents[k].ambient,
+    criterion: constituents[k].criterion,
+    requiredDilution: r.requiredDilution ?? null,
+    nearFieldDilution: atEdge.dilutionCentreline,
+    farFieldFactor: factor ?? null,
+    achievedDilution: r.achievedDilution,
+    margin: r.margin ?? null,
+    verdict: near.status === 'incomplete' ? 'cannot tell' : r.verdict,
+    note: partial + (factor === undefined ? r.note : atEdge.note) + farNote,
+    models,
+    estimate: id,
+    ...(factor !== undefined ? { farFieldEstimate: far!.id } : {}),
+    governing: false,
+  }));
+}
+
+/** Marks, per constituent, the condition with the smallest margin (the tightest) as governing. */
+function markGoverning(rows: ComplianceRow[]): void {
+  for (const name of new Set(rows.map((r) => r.constituent))) {
+    const scored = rows.filter((r) => r.constituent === name && r.margin !== null);
+    if (!scored.length) continue;
+    scored.reduce((a, b) => (b.margin! < a.margin! ? b : a)).governing = true;
+  }
 }

@@ -6,7 +6,7 @@ import { LIMITS } from '../core/limits';
  * in SI or the text the user typed with its unit ("30 ft", "450 cfs"): what the user typed is kept as typed.
  */
 export const SITE_FORMAT = 'gprime-site';
-export const SITE_VERSION = 3;
+export const SITE_VERSION = 4;
 
 const id = z
   .string()
@@ -52,13 +52,45 @@ export const intakeSchema = z.object({
   width: quantitySchema.optional(),
 });
 
-export const constituentSchema = z.object({
-  name,
-  unit: z.string().max(32),
-  effluent: z.number().finite(),
-  ambient: z.number().finite(),
-  /** limit at the edge of the mixing zone, same unit */
-  criterion: z.number().finite(),
+/**
+ * A regulated constituent of an effluent; concentrations are plain numbers in the row's unit. A row `of` the
+ * effluent's temperature or salinity takes its effluent value from the outfall's own field (one place to
+ * type it), in degC or PSU. The acute criterion applies at the zone of initial dilution, the chronic one at
+ * the mixing-zone boundary (U.S. EPA 1991, Technical Support Document, §4.3); either may be absent.
+ */
+export const constituentSchema = z
+  .object({
+    name,
+    unit: z.string().max(32),
+    of: z.enum(['temperature', 'salinity']).optional(),
+    effluent: z.number().finite().optional(),
+    ambient: z.number().finite(),
+    acute: z.number().finite().optional(),
+    chronic: z.number().finite().optional(),
+  })
+  .refine((c) => c.of !== undefined || c.effluent !== undefined, {
+    message: 'give the effluent concentration (or link the row to the effluent temperature or salinity)',
+    path: ['effluent'],
+  })
+  .refine((c) => c.of === undefined || c.effluent === undefined, {
+    message: 'a row linked to the effluent temperature or salinity takes its effluent value from the outfall',
+    path: ['effluent'],
+  })
+  .refine((c) => c.of === undefined || c.unit === (c.of === 'temperature' ? 'degC' : 'PSU'), {
+    message: 'a temperature row is in degC, a salinity row in PSU',
+    path: ['unit'],
+  });
+
+/**
+ * The zones of a permit: the mixing-zone boundary (chronic criteria) as a horizontal distance from the port,
+ * and optionally the zone of initial dilution (acute criteria), as a distance or a multiple of the water
+ * depth at the port.
+ */
+export const mixingZoneSchema = z.object({
+  distance: quantitySchema,
+  zid: z
+    .union([z.object({ distance: quantitySchema }), z.object({ depthMultiple: z.number().finite().positive() })])
+    .optional(),
 });
 
 export const outfallSchema = z.object({
@@ -85,7 +117,7 @@ export const outfallSchema = z.object({
     sediment: quantitySchema.optional(),
   }),
   /** the regulatory mixing-zone boundary, as a distance from the port [m] */
-  mixingZone: z.object({ distance: quantitySchema }),
+  mixingZone: mixingZoneSchema,
   constituents: z.array(constituentSchema).default([]),
 });
 
@@ -131,6 +163,9 @@ export const estimateSchema = z.object({
   /** standard uncertainties (one standard deviation) of numeric inputs, as typed: "10%", "0.5 ft", "0.002" */
   uncertainty: z.record(z.string(), z.string().max(40)).optional(),
   title: z.string().max(200).optional(),
+  /** for required-dilution on an outfall: the constituent (by name) and the zone whose criterion it reads */
+  constituent: z.string().max(200).optional(),
+  zone: z.enum(['acute', 'chronic']).optional(),
 });
 
 export const waterBodySchema = z.object({
@@ -175,6 +210,7 @@ export type Inflow = z.infer<typeof inflowSchema>;
 export type Channel = z.infer<typeof channelSchema>;
 export type Estimate = z.infer<typeof estimateSchema>;
 export type Constituent = z.infer<typeof constituentSchema>;
+export type MixingZone = z.infer<typeof mixingZoneSchema>;
 export type ProfileTableInput = z.infer<typeof profileTableSchema>;
 
 /** The JSON Schema of the current version (shipped as shared-core/site/site.schema.json). */

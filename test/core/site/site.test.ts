@@ -33,14 +33,41 @@ describe('site document', () => {
     expect(a.estimates[0].status).toBe('ok');
   });
 
-  it('migrates a version-2 file (no input uncertainties) to version 3 unchanged otherwise', () => {
-    const doc = JSON.parse(read(DEMOS[0]));
+  it('migrates a version-2 file (no input uncertainties) forward, unchanged otherwise', () => {
+    const doc = JSON.parse(read('test/fixtures/sites/version3.gpsite'));
     doc.version = 2;
     for (const e of doc.estimates) delete e.uncertainty;
     const site = loadSite(JSON.stringify(doc));
-    expect(site.version).toBe(3);
+    expect(site.version).toBe(SITE_VERSION);
     expect(site.estimates.map((e) => e.id)).toEqual(doc.estimates.map((e: { id: string }) => e.id));
     expect(site.estimates.every((e) => e.uncertainty === undefined)).toBe(true);
+  });
+
+  it('migrates a version-3 file: the criterion becomes the chronic one, a repeated effluent temperature is linked', () => {
+    const v3 = JSON.parse(read('test/fixtures/sites/version3.gpsite'));
+    const site = loadSite(JSON.stringify(v3));
+    expect(site.version).toBe(4);
+    const outfall = site.features.find((f) => f.kind === 'outfall')!;
+    if (outfall.kind !== 'outfall') throw new Error('an outfall');
+    const [ammonia, temperature] = outfall.constituents;
+    expect(ammonia).toEqual({ name: 'Ammonia-N', unit: 'mg/L', effluent: 12, ambient: 0.05, chronic: 1.2 });
+    // the version-3 row repeated the outfall's effluent temperature (22 degC): it now reads that field
+    expect(temperature).toEqual({ name: 'Temperature', unit: 'degC', of: 'temperature', ambient: 10.5, chronic: 12.5 });
+    expect(outfall.effluent.temperature).toBe(22);
+    // every other part of the document is as it was
+    expect(site.estimates).toEqual(loadSite(JSON.stringify(v3)).estimates);
+    expect(site.conditions.map((c) => c.profile)).toEqual(v3.conditions.map((c: { profile: unknown }) => c.profile));
+  });
+
+  it('a version-3 row that differs from the effluent field keeps its own value (nothing typed is lost)', () => {
+    const v3 = JSON.parse(read('test/fixtures/sites/version3.gpsite'));
+    const outfall = v3.features.find((f: { kind: string }) => f.kind === 'outfall');
+    outfall.constituents[1].effluent = 23;
+    const site = loadSite(JSON.stringify(v3));
+    const f = site.features.find((x) => x.kind === 'outfall')!;
+    if (f.kind !== 'outfall') throw new Error('an outfall');
+    expect(f.constituents[1]).toMatchObject({ effluent: 23, chronic: 12.5 });
+    expect(f.constituents[1].of).toBeUndefined();
   });
 
   it('refuses a newer version with a clear message', () => {
@@ -100,8 +127,11 @@ describe('site document', () => {
 
   it('builds the mixing-zone compliance table for every outfall × condition × constituent', () => {
     const a = assessSite(loadSite(read(DEMOS[0])), { gprimeVersion: 't', siteHash: 'h' });
-    expect(a.compliance).toHaveLength(4); // 1 outfall × 2 conditions × 2 constituents
-    const ammonia = a.compliance.find((r) => r.constituent === 'Ammonia-N' && r.condition === 'Early winter')!;
+    // 1 outfall × 2 conditions × (2 chronic constituents + 1 with an acute criterion)
+    expect(a.compliance).toHaveLength(6);
+    const ammonia = a.compliance.find(
+      (r) => r.constituent === 'Ammonia-N' && r.condition === 'Early winter' && r.zone === 'chronic',
+    )!;
     // required dilution by mass balance S = (Ce − Ca)/(Cc − Ca) (US EPA 1991, Technical Support Document, §4.3 — worked by hand)
     expect(ammonia.requiredDilution).toBeCloseTo((12 - 0.05) / (1.2 - 0.05), 10);
     expect(ammonia.achievedDilution).toBeGreaterThan(1);
