@@ -33,3 +33,41 @@ export function report(task: string, ours: BenchResult, baseline: BenchResult, n
     `${r.microseconds < 1000 ? r.microseconds.toFixed(1) + ' µs' : (r.microseconds / 1000).toFixed(2) + ' ms'}`;
   return `${task.padEnd(44)} ours ${fmt(ours).padStart(10)}   baseline (${baseline.name}) ${fmt(baseline).padStart(10)}   speed-up ×${ratio.toFixed(1)}${note ? '   ' + note : ''}`;
 }
+
+/** Median wall time [ms] of `runs` single calls of fn, each on a fresh value from setup (not timed). */
+export function medianMs<T>(runs: number, setup: (run: number) => T, fn: (value: T) => unknown): number {
+  const times: number[] = [];
+  for (let run = 0; run < runs; run++) {
+    const value = setup(run);
+    const t0 = performance.now();
+    fn(value);
+    times.push(performance.now() - t0);
+  }
+  return median(times);
+}
+
+/** The same for an asynchronous fn. */
+export async function medianMsAsync(runs: number, fn: (run: number) => Promise<unknown>): Promise<number> {
+  const times: number[] = [];
+  for (let run = 0; run < runs; run++) {
+    const t0 = performance.now();
+    await fn(run);
+    times.push(performance.now() - t0);
+  }
+  return median(times);
+}
+
+export function median(values: readonly number[]): number {
+  const sorted = [...values].sort((a, b) => a - b);
+  const mid = sorted.length >> 1;
+  return sorted.length % 2 ? sorted[mid] : (sorted[mid - 1] + sorted[mid]) / 2;
+}
+
+/** One measured number of the JSON output with its line of the text table. */
+export interface Measured {
+  values: Record<string, number>;
+  lines: string[];
+}
+
+/** "12.3 ms" or "850 µs" */
+export const ms = (t: number) => (t < 1 ? `${(t * 1000).toFixed(0)} µs` : `${t.toFixed(t < 100 ? 2 : 0)} ms`);

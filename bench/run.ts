@@ -1,73 +1,75 @@
 /**
- * `npm run bench`: speed of gprime's numerical kernels as ratios against a general-purpose baseline
- * measured in the same run (mathjs's solveODE and eigs, a dense generic approach). Times depend on the
- * machine; the ratios are what to compare between runs.
+ * `npm run bench`: speed of gprime against a general-purpose baseline measured in the same run (mathjs solveODE and
+ * eigs), and the times the workspace, the CLI and the report take on the demo reservoir. `npm run bench -- --json`
+ * (or `npm run bench:json`) prints one JSON object instead of the table: the measured numbers, their targets and
+ * whether each is met. Times depend on the machine and its load (printed too); ratios are what to compare.
  */
-import * as math from 'mathjs';
-import { solveOde } from '../shared-core/numerics/ode';
-import { makeProfile } from '../shared-core/profile/profile';
-import { waterDensity } from '../shared-core/water/density';
-import { verticalModesFromN2, constantN2Column } from '../shared-core/internal-waves/modes';
-import { bench, report } from './harness';
+import { availableParallelism, loadavg } from 'node:os';
+import { benchCliStart } from './cli-start';
+import type { Measured } from './harness';
+import { benchJet } from './jet';
+import { benchKernels } from './kernels';
+import { benchModes } from './modes';
+import { benchMonteCarlo } from './monte-carlo';
+import { benchPdf } from './pdf';
+import { benchSite } from './site';
+
+/** Targets of the measured numbers: at least (≥) or at most (≤) the value. */
+const TARGETS: Record<string, { at: 'least' | 'most'; value: number }> = {
+  jet_speedup_vs_mathjs: { at: 'least', value: 100 },
+  modes_speedup_vs_dense: { at: 'least', value: 1000 },
+  modes_time_exponent: { at: 'most', value: 1.15 },
+  site_recompute_ms: { at: 'most', value: 16 },
+  edit_recompute_ms: { at: 'most', value: 5 },
+  mc_jet_samples_per_s: { at: 'least', value: 20000 },
+  mc_speedup_2_workers: { at: 'least', value: 1.7 },
+  pdf_report_ms: { at: 'most', value: 3000 },
+  cli_start_ratio: { at: 'most', value: 3 },
+};
+
+const json = process.argv.includes('--json');
+const progress = (what: string) => process.stderr.write(`bench: ${what}…\n`);
+const load = loadavg()[0];
 
 const lines: string[] = [];
-
-// 1. ODE: a damped oscillator over 20 s to rtol 1e-8, same problem for both integrators.
-const rhs = (_t: number, y: readonly number[]) => [y[1], -y[0] - 0.1 * y[1]];
-const ours = bench('solveOde', () => solveOde(rhs, 0, [1, 0], 20, { rtol: 1e-8, atol: 1e-10 }));
-// mathjs types omit solveODE although the library exports it
-const solveODE = (
-  math as unknown as {
-    solveODE: (f: (t: number, y: number[]) => number[], span: number[], y0: number[], o: object) => unknown;
-  }
-).solveODE;
-const base = bench('mathjs solveODE', () => solveODE((t, y) => rhs(t, y), [0, 20], [1, 0], { tol: 1e-8 }));
-const check = solveOde(rhs, 0, [1, 0], 20, { rtol: 1e-8, atol: 1e-10 });
-lines.push(
-  report(
-    'ODE, damped oscillator, 20 s, tol 1e-8',
-    ours,
-    base,
-    `(${check.evaluations} evaluations, status ${check.status})`,
-  ),
-);
-
-// 2. Profile: density of a 2000-row EOS-80 profile, ours vs the generic per-point dispatcher.
-const n = 2000;
-const depth = Array.from({ length: n }, (_, i) => i * 0.05);
-const temperature = depth.map((d) => 24 - 14 / (1 + Math.exp(-(d - 10))));
-const salinity = depth.map((d) => 30 + d * 0.02);
-lines.push(
-  report(
-    'Profile of 2000 rows: validate + density',
-    bench('makeProfile', () => makeProfile({ depth, temperature, salinity })),
-    bench('per-point waterDensity', () =>
-      depth.map((_, i) => waterDensity({ temperature: temperature[i], salinity: salinity[i] }).value),
-    ),
-    '(baseline skips validation)',
-  ),
-);
-
-// 3. Vertical modes: 3 modes on 120 cells, Sturm bisection vs a dense general eigen-solver (all modes).
-const levels = 120,
-  H = 40,
-  N = 0.02;
-const col = constantN2Column(N, H);
-const dense = () => {
-  const h = H / levels;
-  const a = Array.from({ length: levels - 1 }, (_, i) =>
-    Array.from({ length: levels - 1 }, (_, j) =>
-      i === j ? 2 / (h * h * N * N) : Math.abs(i - j) === 1 ? -1 / (h * h * N * N) : 0,
-    ),
-  );
-  return math.eigs(math.matrix(a)).values;
+const values: Record<string, number> = {};
+const take = (m: Measured) => {
+  Object.assign(values, m.values);
+  lines.push(...m.lines);
 };
-lines.push(
-  report(
-    `Vertical modes, ${levels} cells, 3 modes`,
-    bench('verticalModesFromN2', () => verticalModesFromN2(col, H, { modes: 3, cells: levels })),
-    bench('mathjs eigs (dense)', dense, 1500),
-  ),
-);
+if (!json) {
+  progress('kernels');
+  lines.push(...benchKernels());
+}
+progress('buoyant jet');
+take(benchJet());
+progress('vertical modes (the dense baseline takes a while)');
+take(benchModes());
+progress('site assessment');
+take(benchSite());
+progress('Monte Carlo in worker threads');
+take(await benchMonteCarlo());
+progress('PDF report');
+take(await benchPdf());
+progress('CLI start');
+take(benchCliStart());
 
-console.log('gprime benchmarks (median per call)\n' + lines.join('\n'));
+const met = (key: string) => {
+  const t = TARGETS[key];
+  return t.at === 'least' ? values[key] >= t.value : values[key] <= t.value;
+};
+if (json) {
+  const targets = Object.fromEntries(
+    Object.entries(TARGETS).map(([k, t]) => [k, { [t.at === 'least' ? 'min' : 'max']: t.value, met: met(k) }]),
+  );
+  process.stdout.write(JSON.stringify({ ...values, targets, load_average_1min: load }) + '\n');
+} else {
+  const verdicts = Object.keys(TARGETS).map(
+    (k) =>
+      `  ${met(k) ? 'met    ' : 'NOT met'} ${k} = ${Number(values[k].toPrecision(4))} (${TARGETS[k].at === 'least' ? '≥' : '≤'} ${TARGETS[k].value})`,
+  );
+  console.log(
+    `gprime benchmarks (median per call; 1-minute load average ${load.toFixed(2)} on ${availableParallelism()} cores)\n` +
+      [...lines, '', 'Targets:', ...verdicts].join('\n'),
+  );
+}
