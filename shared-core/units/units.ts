@@ -1,14 +1,17 @@
 import { create, unitDependencies, createUnitDependencies, type Unit } from 'mathjs';
 import { InputError } from '../core/errors';
+import { readLeadingNumber, type DecimalMark } from './number';
 
 /**
  * Quantities with units at the edges. Inside shared-core every number is SI in the unit names of
  * quantities.ts ('m', 'm3/s', 'kg/m3', 'degC', 'PSU' …). Parsing uses mathjs units plus the trade's
- * customary units (cfs, MGD, gpm, knot, mph).
+ * customary units (cfs, MGD, ML/d, gpm, acre-ft/d, knot, mph, 6", 40', 5'6").
  */
 const math = create({ unitDependencies, createUnitDependencies });
 math.createUnit('cfs', '1 ft^3/s');
 math.createUnit('MGD', '1000000 gal/day');
+math.createUnit('MLD', '1000 m^3/day');
+math.createUnit('acreft', '43560 ft^3');
 math.createUnit('gpm', '1 gal/minute');
 math.createUnit('knot', { definition: '0.514444444444 m/s', aliases: ['knots', 'kn', 'kt'] });
 math.createUnit('mph', '1 mile/hour');
@@ -40,6 +43,8 @@ const MATHJS_NAME: Record<string, string> = {
   'm4/s3': 'm^4/s^3',
   'm3/s3': 'm^3/s^3',
   'm4/s2': 'm^4/s^2',
+  'mS/cm': 'mS/cm',
+  'S/m': 'S/m',
 };
 
 /** Unit names accepted as spelled variants in CSV headers and typed input. */
@@ -76,7 +81,46 @@ const ALIASES: Record<string, string> = {
   fps: 'ft/s',
   'ft/s2': 'ft/s^2',
   'lb/ft3': 'lb/ft^3',
+  cfs: 'cfs',
+  mgd: 'MGD',
+  gpm: 'gpm',
+  mld: 'MLD',
+  'ML/d': 'MLD',
+  'Ml/d': 'MLD',
+  'ML/day': 'MLD',
+  'm3/d': 'm^3/day',
+  'm³/d': 'm^3/day',
+  'm^3/d': 'm^3/day',
+  'm3/day': 'm^3/day',
+  'm³/day': 'm^3/day',
+  'acre-ft/d': 'acreft/day',
+  'acre-ft/day': 'acreft/day',
+  'ac-ft/d': 'acreft/day',
+  'af/d': 'acreft/day',
+  'acre-feet/day': 'acreft/day',
+  in: 'in',
+  inch: 'in',
+  inches: 'in',
+  "'": 'ft',
+  '’': 'ft',
+  '′': 'ft',
+  '"': 'in',
+  "''": 'in',
+  '”': 'in',
+  '″': 'in',
+  'ms/cm': 'mS/cm',
+  'µs/cm': 'uS/cm',
+  'μs/cm': 'uS/cm',
+  'us/cm': 'uS/cm',
+  's/m': 'S/m',
 };
+
+/** Units of the US customary system: there a comma between digits only ever groups thousands. */
+const US_CUSTOMARY = /(^|[^a-z])(ft|feet|foot|in|inch|mi|mile|yd|gal|gpm|MGD|cfs|degF|acreft|mph|lb|fps)([^a-z]|$)/i;
+
+function decimalMarkFor(unit: string): DecimalMark {
+  return unit !== '' && US_CUSTOMARY.test(normaliseUnitText(unit)) ? 'point' : 'either';
+}
 
 const DIMENSIONLESS = new Set(['1', 'PSU', '']);
 const SALINITY_UNITS = /^(psu|pss-?78|ppt|‰|g\/kg|o\/oo)$/i;
@@ -99,6 +143,17 @@ function toMathUnit(field: string, text: string, value: number): Unit {
     return math.unit(value, normaliseUnitText(text));
   } catch {
     throw new InputError(field, `${value} ${text}`, text, 'a known unit', `the unit "${text}" is not known`);
+  }
+}
+
+/** True when the text is a unit gprime knows ("m", "degC", "PSU", "mS/cm"…). */
+export function isKnownUnit(text: string): boolean {
+  if (SALINITY_UNITS.test(text)) return true;
+  try {
+    math.unit(1, normaliseUnitText(text));
+    return true;
+  } catch {
+    return false;
   }
 }
 
@@ -133,12 +188,15 @@ export function convertToSi(field: string, value: number, fromUnit: string, siUn
 }
 
 /**
- * Parses "30 ft", "30ft", "450 cfs", "54 degF", "1.5e-3", "12,5 degC" (decimal comma) into the SI unit given.
- * A bare number is taken as already SI.
+ * Parses "30 ft", "30ft", "450 cfs", "54 degF", "1.5e-3", "12,5 degC" (decimal comma), "12 500 ft" and
+ * "1,500 cfs" (grouped thousands), 6" and 40' (inches, feet), 5'6" (feet and inches) into the SI unit given.
+ * A bare number is taken as already SI. A lone comma before three digits ("1,500 m") is grouped thousands
+ * with a US customary unit and refused with both readings otherwise.
  */
 export function parseQuantity(field: string, text: string, siUnit: string): number {
   const trimmed = text.trim();
-  const m = /^([-+]?(?:\d+(?:[.,]\d*)?|[.,]\d+)(?:[eE][-+]?\d+)?)\s*(.*)$/.exec(trimmed);
+  const unitGuess = trimmed.replace(/^[-+\u2212]?[\d.,\s\u00A0\u2009\u202F]*(?:[eE][-+]?\d+)?/, '');
+  const m = readLeadingNumber(field, trimmed, decimalMarkFor(unitGuess), siUnit);
   if (!m)
     throw new InputError(
       field,
@@ -147,11 +205,12 @@ export function parseQuantity(field: string, text: string, siUnit: string): numb
       `a number with an optional unit (e.g. "12 ${siUnit === '1' ? '' : siUnit}")`,
       'it is not a number',
     );
-  const value = Number(m[1].replace(',', '.'));
-  const unit = m[2].trim();
-  if (!Number.isFinite(value))
-    throw new InputError(field, text, siUnit, 'a finite number', 'it is not a finite number');
-  return unit === '' ? value : convertToSi(field, value, unit, siUnit);
+  const feetInches = /^(?:'|’|′|ft|feet|foot)\s*(\d+(?:\.\d+)?)\s*(?:"|''|”|″|in|inch|inches)?$/i.exec(m.rest);
+  if (feetInches) {
+    const inches = Math.abs(m.value) * 12 + Number(feetInches[1]);
+    return convertToSi(field, Math.sign(m.value || 1) * inches, 'in', siUnit);
+  }
+  return m.rest === '' ? m.value : convertToSi(field, m.value, m.rest, siUnit);
 }
 
 /** Display unit for each SI unit in the US customary system (the SI system displays SI). */

@@ -16,16 +16,77 @@ const NIST = [
   ['300 mg/L', 'kg/m3', 0.3],
   ['0.5 ft/s^2', 'm/s2', 0.1524],
   ['35 ppt', 'PSU', 35],
+  ['6"', 'm', 6 * 0.0254],
+  ["40'", 'm', 40 * 0.3048],
+  [`5'6"`, 'm', 66 * 0.0254],
+  [`5' 6"`, 'm', 66 * 0.0254],
+  ['12 ft 6 in', 'm', 150 * 0.0254],
+  ['3 mgd', 'm3/s', (3e6 * 3.785411784e-3) / 86400],
+  ['3 Mgd', 'm3/s', (3e6 * 3.785411784e-3) / 86400],
+  ['250 GPM', 'm3/s', (250 * 3.785411784e-3) / 60],
+  ['86400 m³/d', 'm3/s', 1],
+  ['8640 m3/d', 'm3/s', 0.1],
+  ['10 ML/d', 'm3/s', 1e4 / 86400],
+  ['10 MLD', 'm3/s', 1e4 / 86400],
+  ['42.914 mS/cm', 'mS/cm', 42.914],
+  ['4.2914 S/m', 'mS/cm', 42.914],
+  ['1500 µS/cm', 'mS/cm', 1.5],
 ] as const;
+
+// NIST SP 811, Appendix B.8: acre-foot (based on U.S. survey foot) = 1.233489 E+03 m³; gprime uses
+// 43 560 international ft³ (1233.4818 m³), 6 ppm less — the tolerance.
+const ACRE_FOOT = 1.233489e3;
 
 describe('quantities with units (NIST SP 811, Appendix B)', () => {
   for (const [text, unit, expected] of NIST) {
     it(`${text} → ${expected} ${unit}`, () => expect(parseQuantity('x', text, unit)).toBeCloseTo(expected, 9));
   }
 
+  it('1 acre-ft/d = 1233.489 m³ per day (NIST SP 811, B.8; 6 ppm survey-foot difference allowed)', () => {
+    expect(parseQuantity('q', '1 acre-ft/d', 'm3/s')).toBeCloseTo(ACRE_FOOT / 86400, 6);
+    expect(Math.abs(parseQuantity('q', '100 acre-ft/day', 'm3/s') / ((100 * ACRE_FOOT) / 86400) - 1)).toBeLessThan(
+      1e-5,
+    );
+  });
+
   it('takes a bare number as SI and accepts a decimal comma', () => {
     expect(parseQuantity('depth', '12.5', 'm')).toBe(12.5);
     expect(parseQuantity('depth', '12,5 m', 'm')).toBe(12.5);
+  });
+
+  it('reads grouped thousands where the grouping is unambiguous', () => {
+    expect(parseQuantity('discharge', '1,500 cfs', 'm3/s')).toBeCloseTo(1500 * 0.028316846592, 9);
+    expect(parseQuantity('depth', '12,500 ft', 'm')).toBeCloseTo(12500 * 0.3048, 9);
+    expect(parseQuantity('depth', '12 500 ft', 'm')).toBeCloseTo(12500 * 0.3048, 9);
+    expect(parseQuantity('depth', '12\u00a0500 m', 'm')).toBe(12500);
+    expect(parseQuantity('depth', '1 000', 'm')).toBe(1000);
+    expect(parseQuantity('depth', '1 000 000 m', 'm')).toBe(1e6);
+    expect(parseQuantity('depth', '1,234,567 m', 'm')).toBe(1234567);
+    expect(parseQuantity('depth', '1,500.25 m', 'm')).toBe(1500.25);
+    expect(parseQuantity('depth', '1.500,25 m', 'm')).toBe(1500.25);
+    expect(parseQuantity('depth', '12 500,5 m', 'm')).toBe(12500.5);
+  });
+
+  it('keeps unambiguous decimal commas', () => {
+    expect(parseQuantity('depth', '3,5 m', 'm')).toBe(3.5);
+    expect(parseQuantity('depth', '0,500 m', 'm')).toBe(0.5);
+    expect(parseQuantity('depth', '12,25', 'm')).toBe(12.25);
+    expect(parseQuantity('flow', '1,5 cfs', 'm3/s')).toBeCloseTo(1.5 * 0.028316846592, 12);
+    expect(parseQuantity('x', '1,5e3 m', 'm')).toBe(1500);
+  });
+
+  it('refuses a lone "1,500" without a US unit, naming the field and both readings', () => {
+    for (const text of ['1,500', '1,500 m', '12,500 m3/s']) {
+      expect(() => parseQuantity('discharge', text, 'm3/s')).toThrow(InputError);
+    }
+    expect(() => parseQuantity('depth', '1,500 m', 'm')).toThrow(
+      /depth = "1,500 m" m is not allowed: "1,500" reads as 1500 \(thousands separator\) or as 1\.5 \(decimal comma\)/,
+    );
+  });
+
+  it('refuses malformed digit groups', () => {
+    expect(() => parseQuantity('depth', '1,50,0 m', 'm')).toThrow(InputError);
+    expect(() => parseQuantity('depth', '1234 567 m', 'm')).toThrow(InputError);
   });
 
   it('refuses mismatched or unknown units with the field named', () => {
