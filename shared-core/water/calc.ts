@@ -12,6 +12,7 @@ import {
 } from './buoyancy';
 import { kinematicViscosityWater, VISCOSITY_KESTIN_1978 } from './transport';
 import { KELL_1975 } from './fresh-density';
+import { practicalSalinityPss78, PSS78 } from './salinity';
 
 export const waterCalcMethods: CalcMethod[] = [
   {
@@ -152,6 +153,41 @@ export const waterCalcMethods: CalcMethod[] = [
         warnings: r.warnings,
         sources: [VISCOSITY_KESTIN_1978.source, KELL_1975.source],
       };
+    },
+  },
+  {
+    id: 'salinity',
+    title: 'Practical salinity from conductivity (PSS-78)',
+    topic: 'water',
+    params: [
+      {
+        kind: 'number',
+        name: 'conductivity',
+        unit: 'mS/cm',
+        description: 'in-situ conductivity (mS/cm; S/m or µS/cm by unit; for specific conductance give temperature=25)',
+        range: { ...nonNegative, max: 100 },
+      },
+      {
+        kind: 'number',
+        name: 'temperature',
+        unit: 'degC',
+        description: 'in-situ temperature (ITS-90)',
+        range: { min: -3, max: 60 },
+      },
+      {
+        kind: 'number',
+        name: 'pressure',
+        unit: 'dbar',
+        description: 'sea pressure',
+        default: 0,
+        range: { min: 0, max: 12000 },
+      },
+    ],
+    results: [{ name: 'salinity', unit: 'PSU', description: 'practical salinity (PSS-78)' }],
+    everyday: { conductivity: [0.05, 60], temperature: [0, 30], pressure: [0, 200] },
+    run(a) {
+      const r = practicalSalinityPss78(arg.num(a, 'conductivity'), arg.num(a, 'temperature'), arg.num(a, 'pressure'));
+      return { results: { salinity: num(r.value, 'PSU') }, warnings: r.warnings, sources: [PSS78.source] };
     },
   },
 ];

@@ -5,3 +5,4 @@ export * from './sediment';
 export * from './transport';
 export * from './buoyancy';
 export * from './density';
+export * from './salinity';
