@@ -1,7 +1,23 @@
-import Papa from 'papaparse';
 import { InputError } from '../core/errors';
-import { convertToSi } from '../units/units';
+import { note, caution, type Warning } from '../core/warning';
 import type { EquationOfState } from '../water/density';
+import {
+  depthFromPressureUnesco1983,
+  practicalSalinityFromSpecificConductance,
+  practicalSalinityPss78,
+} from '../water/salinity';
+import { readCell, tableDecimalMark, describeRows, type Cell } from './cells';
+import { depthOrder, fillGaps, reportSpikes } from './clean';
+import { readCsvTable, type CsvTable, type ProfileTable } from './csv-text';
+import {
+  columnConversion,
+  LABEL_NAME,
+  parseHeader,
+  roleOf,
+  VERTICAL_ROLES,
+  type ParsedHeader,
+  type Role,
+} from './headers';
 import {
   largestFinite,
   makeProfile,
@@ -10,205 +26,262 @@ import {
   type Profile,
   type ProfileColumn,
   type ProfileIssue,
+  type ProfileLabelColumn,
 } from './profile';
 
-/** Which standard column a header names; anything else is an extra constituent. */
-type Role = 'depth' | 'elevation' | 'temperature' | 'salinity' | 'sediment';
-
-const ROLE_PATTERNS: [Role, RegExp][] = [
-  ['depth', /^(depth|dep|d|z_?down)$/i],
-  ['elevation', /^(elevation|elev|height|z|level|stage)$/i],
-  ['temperature', /^(temperature|temp|t|water_?temp(erature)?|wtemp)$/i],
-  ['salinity', /^(salinity|sal|s|psal|practical_?salinity)$/i],
-  ['sediment', /^(sediment|ssc|tss|suspended_?(sediment|solids)|sed)$/i],
-];
-
-const SI_UNIT: Record<Role, string> = {
-  depth: 'm',
-  elevation: 'm',
-  temperature: 'degC',
-  salinity: 'PSU',
-  sediment: 'kg/m3',
-};
-const DEFAULT_UNIT: Record<Role, string> = {
-  depth: 'm',
-  elevation: 'm',
-  temperature: 'degC',
-  salinity: 'PSU',
-  sediment: 'kg/m3',
-};
-
-export interface ParsedHeader {
-  name: string;
-  unit: string;
-}
-
-/** Splits "depth (ft)", "Temp [degF]", "Sal (psu)", "DO mg/L" or "depth_m" into a name and a unit. */
-export function parseHeader(header: string): ParsedHeader {
-  const h = header.trim();
-  const bracket = /^(.*?)\s*[([{]\s*([^)\]}]*)\s*[)\]}]\s*$/.exec(h);
-  if (bracket) return { name: bracket[1].trim(), unit: bracket[2].trim() };
-  const spaced = /^(.*\S)\s+(\S*[/°%]\S*|m|ft|psu|ppt|degC|degF|C|F)$/i.exec(h);
-  if (spaced) return { name: spaced[1].trim(), unit: spaced[2].trim() };
-  const suffix = /^(.*?)_(m|ft|degc|degf|c|f|psu|ppt|mgl|kgm3)$/i.exec(h);
-  if (suffix)
-    return {
-      name: suffix[1],
-      unit: ({ mgl: 'mg/L', kgm3: 'kg/m3' } as Record<string, string>)[suffix[2].toLowerCase()] ?? suffix[2],
-    };
-  return { name: h, unit: '' };
-}
-
-function roleOf(name: string): Role | undefined {
-  const key = name.replace(/[\s.-]+/g, '_');
-  return ROLE_PATTERNS.find(([, re]) => re.test(key))?.[0];
-}
-
-/** Parses one cell (a number, or text in plain decimal notation). Empty or null → NaN. */
-function parseCell(cell: string | number | null | undefined): number {
-  if (typeof cell === 'number') return Number.isFinite(cell) ? cell : NaN;
-  const t = (cell ?? '').trim();
-  return /^[-+]?(\d+\.?\d*|\.\d+)([eE][-+]?\d+)?$/.test(t) ? Number(t) : NaN;
-}
+export { parseHeader, type ParsedHeader } from './headers';
+export { readCsvTable, type CsvTable, type ProfileTable } from './csv-text';
 
 export interface CsvProfileOptions {
   eos?: EquationOfState;
   /** water-surface elevation [m] for elevation columns; default: the highest sample */
   surfaceElevation?: number;
+  /** latitude [deg] for depth from a pressure column; default 45 */
+  latitude?: number;
 }
 
-/** A profile as a table: header texts (name and unit, e.g. "depth (ft)") and rows of cells. */
-export interface ProfileTable {
-  columns: string[];
-  rows: (string | number | null)[][];
-}
-
-/**
- * Reads CSV text into a table: comma, semicolon, tab or bar separated; blank lines and lines starting
- * with # ignored. With a separator other than a comma, decimal commas are turned into points.
- */
-export function readCsvTable(text: string): ProfileTable {
-  const body = text
-    .replace(/^\uFEFF/, '')
-    .split(/\r?\n/)
-    .filter((l) => !/^\s*#/.test(l))
-    .join('\n');
-  const parsed = Papa.parse<string[]>(body, { skipEmptyLines: 'greedy', delimitersToGuess: [',', ';', '\t', '|'] });
-  const [header = [], ...data] = parsed.data;
-  const decimalComma = parsed.meta.delimiter !== ',';
-  return {
-    columns: header.map((h) => h.trim()),
-    rows: data.map((r) => r.map((c) => (decimalComma ? c.replace(',', '.') : c))),
-  };
-}
-
-/**
- * Reads a profile CSV (see readCsvTable) into a Profile; headers carry units in any common form.
- * Every problem is collected and thrown at once as a ProfileError with row (1-based data row) and column.
- */
+/** Reads a profile CSV (see readCsvTable) into a Profile; headers carry units in any common form. */
 export function parseProfileCsv(text: string, options: CsvProfileOptions = {}): Profile {
   return profileFromTable(readCsvTable(text), options);
 }
 
-/** Builds a Profile from a table of header texts and cells, converting every unit to SI. */
-export function profileFromTable(table: ProfileTable, options: CsvProfileOptions = {}): Profile {
-  if (table.rows.length < 2)
-    throw new ProfileError([{ row: 0, column: '(file)', message: 'needs a header line and at least 2 data rows' }]);
-  requireProfileRows(table.rows.length);
-  const headers = table.columns.map(parseHeader);
-  const issues: ProfileIssue[] = [];
-  const roles = headers.map((h) => roleOf(h.name));
-  const find = (r: Role) => roles.indexOf(r);
-  const depthCol = find('depth') >= 0 ? find('depth') : find('elevation');
-  const tempCol = find('temperature');
-  if (depthCol < 0)
-    issues.push({
-      row: 0,
-      column: '(header)',
-      message: `no depth or elevation column among: ${headers.map((h) => h.name).join(', ')}`,
-    });
-  if (tempCol < 0)
-    issues.push({
-      row: 0,
-      column: '(header)',
-      message: `no temperature column among: ${headers.map((h) => h.name).join(', ')}`,
-    });
-  if (issues.length) throw new ProfileError(issues);
+/** The columns a table's headers name. */
+interface Layout {
+  headers: ParsedHeader[];
+  vertical: { col: number; role: Role };
+  temperature: number;
+  /** where salinity comes from: a salinity, conductivity or specific-conductance column */
+  salt?: { col: number; role: Role };
+  sediment?: number;
+}
 
-  const data = table.rows;
-  const column = (c: number): number[] => {
-    const h = headers[c];
-    const toSi = columnConversion(h, roles[c], issues);
-    return data.map((r, i) => {
-      if (r.length !== headers.length) {
-        issues.push({
-          row: i + 1,
-          column: h.name,
-          message: `has ${r.length} fields, the header has ${headers.length}`,
-        });
-        return NaN;
-      }
-      const cell = r[c];
-      const v = parseCell(cell);
-      if (Number.isNaN(v)) {
-        const shown = cell === null || cell === undefined ? '' : String(cell).trim();
-        issues.push({ row: i + 1, column: h.name, message: shown ? `"${shown}" is not a number` : 'value is missing' });
-        return NaN;
-      }
-      return toSi(v);
-    });
+function layoutOf(columns: readonly string[]): Layout {
+  const headers = columns.map(parseHeader);
+  const roles = headers.map(roleOf);
+  const find = (r: Role) => roles.indexOf(r);
+  const verticalRole = VERTICAL_ROLES.find((r) => find(r) >= 0);
+  const saltRole = (['salinity', 'conductivity', 'specific-conductance'] as const).find((r) => find(r) >= 0);
+  const issues: ProfileIssue[] = [];
+  const names = headers.map((h) => h.name).join(', ');
+  if (!verticalRole)
+    issues.push({ row: 0, column: '(header)', message: `no depth, elevation or pressure column among: ${names}` });
+  if (find('temperature') < 0)
+    issues.push({ row: 0, column: '(header)', message: `no temperature column among: ${names}` });
+  if (issues.length) throw new ProfileError(issues);
+  return {
+    headers,
+    vertical: { col: find(verticalRole!), role: verticalRole! },
+    temperature: find('temperature'),
+    salt: saltRole && { col: find(saltRole), role: saltRole },
+    sediment: find('sediment') >= 0 ? find('sediment') : undefined,
   };
-  let depth = column(depthCol);
-  if (roles[depthCol] === 'elevation') {
-    const surface = options.surfaceElevation ?? largestFinite(depth);
-    depth = depth.map((z) => surface - z);
-  }
-  const col = (r: Role) => (find(r) >= 0 ? column(find(r)) : undefined);
-  const temperature = column(tempCol),
-    salinity = col('salinity'),
-    sediment = col('sediment');
-  const extra: ProfileColumn[] = headers.flatMap((h, c) =>
-    roles[c] ? [] : [{ name: h.name, unit: h.unit, values: column(c) }],
-  );
-  if (issues.length) throw new ProfileError(dedupe(issues));
-  // sort by depth when the table is ordered bottom-up (elevation tables usually are)
-  const order = depth.map((_, i) => i);
-  if (depth.length > 1 && depth[0] > depth[depth.length - 1]) order.reverse();
-  const pick = (v: number[] | undefined) => v && order.map((i) => v[i]);
-  return makeProfile({
-    depth: pick(depth)!,
-    temperature: pick(temperature)!,
-    salinity: pick(salinity),
-    sediment: pick(sediment),
-    extra: extra.map((e) => ({ ...e, values: pick(e.values)! })),
-    eos: options.eos,
-  });
 }
 
 /**
- * The conversion of a column's values to SI, found once per column: every unit of a standard column is an
- * affine map (a scale, plus an offset for °F and °C), so two conversions give it. An extra column keeps its
- * values; a unit that does not fit the column is one issue on the header.
+ * Builds a Profile from a table of header texts and cells, converting every unit to SI.
+ * - A blank, "NaN" or flagged cell (−9999 …) in an essential column (vertical, temperature, salinity or
+ *   conductivity, sediment) skips its row; in another numeric column it is filled from its neighbours.
+ *   Either way a warning names the rows.
+ * - Text columns (date, time, station…) are carried along as labels; numeric ones as extras.
+ * - Pressure [dbar] gives depth by UNESCO 1983 at `latitude`; conductivity gives salinity by PSS-78.
+ * - Rows above the surface, repeated depths, rows going back up and spikes are reported by row.
+ * Any other problem (text in an essential column, a wrong unit, too few rows) is thrown at once as a
+ * ProfileError with row (1-based data row) and column.
  */
-function columnConversion(h: ParsedHeader, role: Role | undefined, issues: ProfileIssue[]): (v: number) => number {
-  if (!role) return (v) => v;
-  try {
-    const unit = h.unit || DEFAULT_UNIT[role];
-    const offset = convertToSi(h.name, 0, unit, SI_UNIT[role]);
-    const scale = convertToSi(h.name, 1, unit, SI_UNIT[role]) - offset;
-    return (v) => scale * v + offset;
-  } catch (e) {
-    issues.push({ row: 0, column: h.name, message: e instanceof InputError ? e.message : String(e) });
-    return () => NaN;
+export function profileFromTable(table: ProfileTable | CsvTable, options: CsvProfileOptions = {}): Profile {
+  if (table.rows.length < 2)
+    throw new ProfileError([{ row: 0, column: '(file)', message: 'needs a header line and at least 2 data rows' }]);
+  requireProfileRows(table.rows.length);
+  const layout = layoutOf(table.columns);
+  const { headers } = layout;
+  const issues: ProfileIssue[] = [];
+  const warnings: Warning[] = [...('warnings' in table ? table.warnings : [])];
+  const mark = tableDecimalMark(table.rows, 'either');
+  const width = headers.length;
+  table.rows.forEach((r, i) => {
+    if (r.length > width)
+      issues.push({ row: i + 1, column: '(row)', message: `has ${r.length} fields, the header has ${width}` });
+  });
+
+  const essential = [layout.vertical.col, layout.temperature, layout.salt?.col, layout.sediment].filter(
+    (c): c is number => c !== undefined,
+  );
+  const si = new Map<number, number[]>();
+  const gapsByRow = new Map<number, string[]>();
+  for (const c of essential) {
+    const toSi = columnConversion(headers[c], roleOf(headers[c])!, issues);
+    si.set(
+      c,
+      table.rows.map((r, i) => {
+        const read = readCell(r[c] as Cell, mark, headers[c].name);
+        if (read.kind === 'value') return toSi(read.value);
+        if (read.kind === 'gap') gapsByRow.set(i, [...(gapsByRow.get(i) ?? []), `${headers[c].name} "${read.shown}"`]);
+        else issues.push({ row: i + 1, column: headers[c].name, message: read.shown });
+        return NaN;
+      }),
+    );
   }
+  if (issues.length) throw new ProfileError(issues);
+  if (gapsByRow.size) warnings.push(skippedRowsWarning(gapsByRow));
+
+  const candidates = table.rows.flatMap((_, i) => (gapsByRow.has(i) ? [] : [i]));
+  const vertical = candidates.map((i) => si.get(layout.vertical.col)![i]);
+  const depthAll = verticalToDepth(layout.vertical.role, vertical, options, warnings);
+  const order = depthOrder(
+    depthAll,
+    candidates.map((i) => i + 1),
+    warnings,
+  ).map((k) => candidates[k]);
+  const rowNumber = order.map((i) => i + 1);
+  const at = (c: number) => order.map((i) => si.get(c)![i]);
+  const depthOf = new Map(candidates.map((i, k) => [i, depthAll[k]]));
+  const depth = order.map((i) => depthOf.get(i)!);
+  const temperature = at(layout.temperature);
+  const pressure = layout.vertical.role === 'pressure' ? at(layout.vertical.col) : depth;
+  const salt = layout.salt;
+  const salinity =
+    salt && salinityColumn(salt.role, headers[salt.col].name, at(salt.col), temperature, pressure, rowNumber, warnings);
+  reportSpikes('temperature', depth, temperature, rowNumber, warnings);
+  if (salinity) reportSpikes('salinity', depth, salinity, rowNumber, warnings);
+
+  const { extra, labels } = carriedColumns(table, layout, mark, order, depth, warnings);
+  const profile = makeProfile({
+    depth,
+    temperature,
+    salinity,
+    sediment: layout.sediment === undefined ? undefined : at(layout.sediment),
+    extra,
+    labels,
+    eos: options.eos,
+    warnings,
+  });
+  if (layout.vertical.role === 'pressure') return withFreshWaterDepthCaution(profile);
+  return profile;
 }
 
-function dedupe(issues: ProfileIssue[]): ProfileIssue[] {
-  const seen = new Set<string>();
-  return issues.filter((i) => {
-    const k = `${i.row}|${i.column}|${i.message}`;
-    if (seen.has(k)) return false;
-    seen.add(k);
-    return true;
+function skippedRowsWarning(gapsByRow: Map<number, string[]>): Warning {
+  const rows = [...gapsByRow.keys()].sort((a, b) => a - b);
+  const examples = rows
+    .slice(0, 3)
+    .map(
+      (i) =>
+        `row ${i + 1}: ${gapsByRow
+          .get(i)!
+          .map((g) => g.replace(/ ""$/, ' blank'))
+          .join(', ')}`,
+    )
+    .join('; ');
+  return caution(
+    'rows-skipped',
+    `Skipped ${describeRows(rows.map((i) => i + 1))}: a blank, "NaN" or flagged value in an essential column (${examples}${rows.length > 3 ? '; …' : ''}).`,
+    'file',
+  );
+}
+
+/** Depth [m] from the vertical column: depth as is, elevation below the surface, pressure by UNESCO 1983. */
+function verticalToDepth(role: Role, v: number[], options: CsvProfileOptions, warnings: Warning[]): number[] {
+  if (role === 'elevation') {
+    const surface = options.surfaceElevation ?? largestFinite(v);
+    return v.map((z) => surface - z);
+  }
+  if (role !== 'pressure') return v;
+  const latitude = options.latitude ?? 45;
+  warnings.push(
+    note(
+      'depth-from-pressure',
+      `Depth from sea pressure by UNESCO 1983 (Saunders & Fofonoff 1976) at latitude ${latitude}°` +
+        (options.latitude === undefined ? ' (the default; give the site latitude to change it)' : '') +
+        '.',
+      'file',
+    ),
+  );
+  return v.map((p) => (p < 0 ? p : depthFromPressureUnesco1983(p, latitude).value));
+}
+
+/** The UNESCO formula assumes ocean water: say how much deeper the true depths of a lighter profile are. */
+function withFreshWaterDepthCaution(p: Profile): Profile {
+  const mean = p.density.reduce((a, b) => a + b, 0) / p.density.length;
+  const percent = (1028.1 / mean - 1) * 100; // 1028.1 kg/m³: the standard ocean, S = 35, 0 °C
+  if (percent < 0.5) return p;
+  const w = caution(
+    'depth-from-pressure-fresh',
+    `The depth-from-pressure formula assumes ocean water (1028 kg/m³); at this profile's mean density (${mean.toFixed(1)} kg/m³) the true depths are about ${percent.toFixed(1)} % greater.`,
+    'file',
+  );
+  return { ...p, warnings: [...p.warnings, w] };
+}
+
+/** Salinity [PSU] from a salinity column as is, or from conductivity by PSS-78 (specific conductance at 25 °C). */
+function salinityColumn(
+  role: Role,
+  column: string,
+  values: number[],
+  temperature: number[],
+  pressure: number[],
+  rowNumber: number[],
+  warnings: Warning[],
+): number[] {
+  if (role === 'salinity') return values;
+  const issues: ProfileIssue[] = [];
+  const out = values.map((c, i) => {
+    try {
+      return role === 'conductivity'
+        ? practicalSalinityPss78(c, temperature[i], Math.max(0, pressure[i])).value
+        : practicalSalinityFromSpecificConductance(c).value;
+    } catch (e) {
+      if (!(e instanceof InputError)) throw e;
+      issues.push({ row: rowNumber[i], column, message: e.message });
+      return NaN;
+    }
   });
+  if (issues.length) throw new ProfileError(issues);
+  warnings.push(
+    role === 'conductivity'
+      ? note(
+          'salinity-from-conductivity',
+          'Salinity from in-situ conductivity, temperature and pressure by PSS-78 (UNESCO 1983; Hill et al. 1986 below 2).',
+          'file',
+        )
+      : note(
+          'salinity-from-specific-conductance',
+          'Salinity from specific conductance (conductivity at 25 °C) by PSS-78 at 25 °C (UNESCO 1983; Hill et al. 1986 below 2).',
+          'file',
+        ),
+  );
+  return out;
+}
+
+/** The other columns at the kept rows: numeric ones (and a conductivity column) as extras, text ones as labels. */
+function carriedColumns(
+  table: ProfileTable,
+  layout: Layout,
+  mark: ReturnType<typeof tableDecimalMark>,
+  order: number[],
+  depth: number[],
+  warnings: Warning[],
+): { extra: ProfileColumn[]; labels: ProfileLabelColumn[] } {
+  const extra: ProfileColumn[] = [];
+  const labels: ProfileLabelColumn[] = [];
+  const rowNumber = order.map((i) => i + 1);
+  layout.headers.forEach((h, c) => {
+    const role = roleOf(h);
+    const conductivityKept = (role === 'conductivity' || role === 'specific-conductance') && layout.salt?.col !== c;
+    const asSalt = layout.salt?.col === c && layout.salt.role !== 'salinity';
+    if (role && !conductivityKept && !asSalt) return;
+    const cells = order.map((i) => table.rows[i][c] as Cell);
+    const reads = cells.map((cell) => readCell(cell, mark, h.name));
+    const numbers = reads.filter((r) => r.kind === 'value').length;
+    const texts = reads.filter((r) => r.kind === 'text').length;
+    if (!role && (LABEL_NAME.test(h.name.replace(/[\s.-]+/g, '_')) || numbers < 2 || texts > numbers)) {
+      labels.push({
+        name: h.name,
+        values: cells.map((cell) => (cell === null || cell === undefined ? '' : String(cell).trim())),
+      });
+      return;
+    }
+    const values = reads.map((r) => (r.kind === 'value' ? r.value : NaN));
+    const filled = fillGaps(h.name, depth, values, rowNumber, warnings);
+    if (filled) extra.push({ name: h.name, unit: h.unit, values: filled });
+  });
+  return { extra, labels };
 }

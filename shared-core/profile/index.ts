@@ -1,3 +1,4 @@
 export * from './profile';
 export * from './stratification';
 export * from './csv';
+export * from './casts';

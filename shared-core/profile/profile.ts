@@ -10,6 +10,12 @@ export interface ProfileColumn {
   values: number[];
 }
 
+/** A text column carried along row by row (date, time, station, flags…). */
+export interface ProfileLabelColumn {
+  name: string;
+  values: string[];
+}
+
 /**
  * A measured ambient profile. Depth is positive down from the water surface, strictly increasing.
  * Density is the potential density referenced to the surface (p = 0), so that compressibility does not
@@ -21,6 +27,8 @@ export interface Profile {
   readonly salinity: readonly number[];
   readonly sediment: readonly number[];
   readonly extra: readonly ProfileColumn[];
+  /** text columns (date, time, station…), one value per row */
+  readonly labels: readonly ProfileLabelColumn[];
   readonly eos: EquationOfState;
   readonly density: readonly number[];
   readonly warnings: readonly Warning[];
@@ -32,7 +40,10 @@ export interface ProfileInput {
   salinity?: number[];
   sediment?: number[];
   extra?: ProfileColumn[];
+  labels?: ProfileLabelColumn[];
   eos?: EquationOfState;
+  /** warnings from reading the profile (skipped rows, conversions), kept with it */
+  warnings?: Warning[];
 }
 
 /** One problem found in a profile, with the 1-based data row and the column name. */
@@ -141,7 +152,11 @@ export function makeProfile(input: ProfileInput): Profile {
       'the profile has salinity above 0; choose eos80 or teos10',
     );
   }
-  const warnings: Warning[] = [];
+  for (const col of input.labels ?? [])
+    if (col.values.length !== n)
+      issues.push({ row: 0, column: col.name, message: `has ${col.values.length} values but depth has ${n}` });
+  if (issues.length) throw new ProfileError(issues);
+  const warnings: Warning[] = [...(input.warnings ?? [])];
   const density = input.depth.map((_, i) => {
     const r = waterDensity({ temperature: input.temperature[i], salinity: salinity[i], sediment: sediment[i], eos });
     for (const w of r.warnings) warnings.push(w);
@@ -153,6 +168,7 @@ export function makeProfile(input: ProfileInput): Profile {
     salinity: [...salinity],
     sediment: [...sediment],
     extra: (input.extra ?? []).map((c) => ({ ...c, values: [...c.values] })),
+    labels: (input.labels ?? []).map((c) => ({ ...c, values: [...c.values] })),
     eos,
     density,
     warnings: uniqueWarnings(warnings),

@@ -51,25 +51,29 @@ describe('CSV import', () => {
 
   it('reports every bad row with row and column', () => {
     try {
-      parseProfileCsv('depth (m),temperature (degC)\n0,20\n1,abc\n2,\n3,99\n');
+      parseProfileCsv('depth (m),temperature (degC)\n0,20\n1,abc\n2,\n3,xyz\n');
       expect.unreachable();
     } catch (e) {
       expect(e).toBeInstanceOf(ProfileError);
       const msg = (e as Error).message;
       expect(msg).toMatch(/row 2, column "temperature": "abc" is not a number/);
-      expect(msg).toMatch(/row 3, column "temperature": value is missing/);
+      expect(msg).toMatch(/row 4, column "temperature": "xyz" is not a number/);
+      expect(msg).not.toMatch(/row 3/); // a blank cell skips its row with a warning instead
     }
     expect(() => parseProfileCsv('depth (m),temperature (degC)\n0,20\n1,99\n')).toThrow(
       /row 2, column "temperature": 99 degC is physically impossible/,
     );
-    expect(() => parseProfileCsv('depth (m),temperature (degC)\n0,20\n0,19\n')).toThrow(
-      /row 2, column "depth": duplicate depth/,
-    );
-    expect(() => parseProfileCsv('depth (m),temperature (degC)\n0,20\n5,19\n3,18\n')).toThrow(
-      /row 3, column "depth": depth 3 m is shallower/,
-    );
     expect(() => parseProfileCsv('depth (kg),temperature (degC)\n0,20\n5,19\n')).toThrow(/cannot be converted to m/);
     expect(() => parseProfileCsv('height,colour\n0,1\n1,2\n')).toThrow(/no temperature column/);
+  });
+
+  it('drops repeated and out-of-order depths with a warning naming the rows', () => {
+    const dup = parseProfileCsv('depth (m),temperature (degC)\n0,20\n0,19\n5,18\n');
+    expect(dup.depth).toEqual([0, 5]);
+    expect(dup.warnings.find((w) => w.code === 'duplicate-depths')?.message).toMatch(/row 2\b/);
+    const back = parseProfileCsv('depth (m),temperature (degC)\n0,20\n5,19\n3,18\n8,17\n');
+    expect(back.depth).toEqual([0, 5, 8]);
+    expect(back.warnings.find((w) => w.code === 'rows-out-of-order')?.message).toMatch(/row 3: shallower/);
   });
 
   it('reads a long elevation profile (150 000 rows) without overflowing the stack', () => {
