@@ -8,6 +8,7 @@ import { hydraulicsCalcMethods } from '../hydraulics/calc';
 import { withdrawalCalcMethods } from '../withdrawal/calc';
 import { inflowCalcMethods } from '../inflows/calc';
 import { jetCalcMethods } from '../jets/calc';
+import { mixingZoneCalcMethods } from '../mixing-zone/calc';
 
 /**
  * Every method of `gprime calc`, in the order `--list` shows them. Each topic contributes one array
@@ -23,6 +24,7 @@ export const CALC_METHODS: readonly CalcMethod[] = [
   ...withdrawalCalcMethods,
   ...inflowCalcMethods,
   ...jetCalcMethods,
+  ...mixingZoneCalcMethods,
 ];
 
 export function findCalcMethod(id: string): CalcMethod | undefined {

@@ -1,5 +1,5 @@
 import type { EstimateModel } from '../calc/model';
-import { InputError } from '../core/errors';
+import { formatShort, InputError } from '../core/errors';
 import type { JetTrajectory } from '../jets/buoyant-jet';
 import { dilutionAtBoundary, type BoundaryDilution } from '../mixing-zone/boundary';
 import { complianceTable, type Constituent as RegulatedConstituent } from '../mixing-zone/compliance';
@@ -238,18 +238,25 @@ function zoneRowsFor(
   const far = outcomes.find((o) => o.id === farFieldId(f, conditionId, zone));
   const factor =
     far?.status === 'ok' && typeof far.results.dilution?.value === 'number' ? far.results.dilution.value : undefined;
+  const xEnd = g.path.path.horizontalDistance[g.path.path.horizontalDistance.length - 1];
+  const farNote =
+    factor === undefined
+      ? ''
+      : `the near field ends (${g.path.outcome}) ${formatShort(xEnd)} m from the port; the far field (4/3-law) ` +
+        `from there to the boundary multiplies its dilution by ${formatShort(factor)}`;
   const dilution: BoundaryDilution =
     factor === undefined
       ? atEdge
-      : { ...atEdge, dilutionCentreline: atEdge.dilutionCentreline * factor, reached: true };
+      : { ...atEdge, dilutionCentreline: atEdge.dilutionCentreline * factor, reached: true, note: farNote };
   const nearName = `${near.method} (${id}${near.model?.kind === 'diffuser' ? `, ${g.name}` : ''})`;
   const models = factor === undefined ? nearName : `${nearName} × far-field (${far!.id})`;
-  const farNote =
-    factor !== undefined
-      ? `; the near field ends before the boundary, so the far-field 4/3-law factor ${factor.toPrecision(3)} multiplies it`
-      : !atEdge.reached && !condition.current
-        ? '; no ambient current is given, so the far field is not computed'
-        : '';
+  const noCurrent =
+    !atEdge.reached && !condition.current ? '; no ambient current is given, so the far field is not computed' : '';
+  const extrapolated = [near, ...(factor === undefined ? [] : [far!])].flatMap((o) =>
+    o.warnings.filter((w) => w.severity === 'outside-validity').map((w) => `${o.id}: ${w.message}`),
+  );
+  // the far field only adds dilution: a near field that meets on its own meets with the band (see VERDICT_RULE)
+  const nearAlone = (req: number | undefined) => req !== undefined && atEdge.dilutionCentreline >= req * (1 + BAND);
   const partial = near.status === 'incomplete' ? `the near-field run is incomplete (${near.incomplete}); ` : '';
   const table = complianceTable([{ name: condition.name, dilution }], constituents);
   return table.rows.map((r, k): ComplianceRow => ({
@@ -267,13 +274,30 @@ function zoneRowsFor(
     farFieldFactor: factor ?? null,
     achievedDilution: r.achievedDilution,
     margin: r.margin ?? null,
-    verdict: near.status === 'incomplete' ? 'cannot tell' : r.verdict,
-    note: partial + (factor === undefined ? r.note : atEdge.note) + farNote,
+    verdict: verdictOf(r.verdict, near.status === 'incomplete', extrapolated.length > 0, nearAlone(r.requiredDilution)),
+    note:
+      partial +
+      r.note +
+      noCurrent +
+      (extrapolated.length ? `; outside the validity of a method it relies on — ${extrapolated.join('; ')}` : ''),
     models,
     estimate: id,
     ...(factor !== undefined ? { farFieldEstimate: far!.id } : {}),
     governing: false,
   }));
+}
+
+/** The band of the verdict rule (VERDICT_RULE). */
+const BAND = 0.2;
+
+/**
+ * A row's verdict: an incomplete near-field run cannot tell; "meets" that rests on an extrapolated run
+ * (outside a method's validity) cannot tell either, unless the near field meets on its own.
+ */
+function verdictOf(table: ComplianceRow['verdict'], incomplete: boolean, extrapolated: boolean, nearAlone: boolean) {
+  if (incomplete) return 'cannot tell';
+  if (table === 'meets' && extrapolated && !nearAlone) return 'cannot tell';
+  return table;
 }
 
 /** Marks, per constituent, the condition with the smallest margin (the tightest) as governing. */

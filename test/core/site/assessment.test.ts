@@ -104,3 +104,67 @@ describe('the incremental assessor', () => {
     expect(assessor.computed).toBe(winter);
   });
 });
+
+describe('compliance by zone', () => {
+  it('acute rows at the zone of initial dilution and chronic rows at the mixing-zone boundary, one governing each', () => {
+    const a = assess(demo());
+    const acute = a.compliance.filter((r) => r.zone === 'acute');
+    expect(acute.map((r) => [r.constituent, r.boundary])).toEqual([
+      ['Ammonia-N', 10],
+      ['Ammonia-N', 10],
+    ]);
+    for (const zone of ['acute', 'chronic'] as const)
+      for (const name of ['Ammonia-N', 'Temperature']) {
+        const rows = a.compliance.filter((r) => r.zone === zone && r.constituent === name);
+        if (!rows.length) continue;
+        expect(rows.filter((r) => r.governing)).toHaveLength(1);
+        // the governing condition is the one with the smallest margin
+        const least = Math.min(...rows.map((r) => r.margin!));
+        expect(rows.find((r) => r.governing)!.margin).toBe(least);
+      }
+  });
+
+  it('required dilution from the constituent table: S = (Ce − Ca)/(Cc − Ca) (U.S. EPA 1991, TSD §4.3, worked by hand)', () => {
+    const a = assess(demo());
+    const r = row(a, 'Late summer', 'Ammonia-N', 'acute');
+    expect([r.effluent, r.ambient, r.criterion]).toEqual([12, 0.05, 6]);
+    expect(r.requiredDilution).toBeCloseTo((12 - 0.05) / (6 - 0.05), 12);
+    // the required-dilution estimate reads the same row (chronic limit 1.2 mg/L) unless its params override it
+    const estimate = a.estimates.find((o) => o.id === 'ammonia-dilution')!;
+    expect(estimate.results.dilution.value).toBeCloseTo((12 - 0.05) / (1.2 - 0.05), 12);
+  });
+
+  it('the temperature row reads the outfall effluent temperature: one place to type it', () => {
+    const site = demo();
+    const works = site.features.find((f) => f.id === 'works')!;
+    if (works.kind !== 'outfall') throw new Error('the demo outfall');
+    works.effluent.temperature = '24 degC';
+    const r = row(assess(site), 'Late summer', 'Temperature');
+    expect(r.effluent).toBeCloseTo(24, 12);
+    expect(r.requiredDilution).toBeCloseTo((24 - 10.5) / (12.5 - 10.5), 12);
+  });
+
+  it('beyond the near field, the far-field run multiplies the dilution and is listed among the outcomes', () => {
+    const a = assess(demo());
+    const r = row(a, 'Early winter', 'Ammonia-N');
+    const far = a.estimates.find((o) => o.id === r.farFieldEstimate)!;
+    expect(far.method).toBe('far-field');
+    expect(far.added).toBe(true);
+    expect(r.achievedDilution).toBeCloseTo(r.nearFieldDilution! * (far.results.dilution.value as number), 12);
+    expect(r.models).toContain('far-field');
+  });
+
+  it('"meets" resting on an extrapolated far field cannot tell, unless the near field meets on its own', () => {
+    const a = assess(demo());
+    // late summer: the current (0.02 m/s) is below the far field's steady-current range
+    const summer = row(a, 'Late summer', 'Ammonia-N');
+    expect(a.estimates.find((o) => o.id === summer.farFieldEstimate)!.warnings.map((w) => w.severity)).toContain(
+      'outside-validity',
+    );
+    expect(summer.nearFieldDilution!).toBeLessThan(summer.requiredDilution! * 1.2);
+    expect(summer.verdict).toBe('cannot tell');
+    const winter = row(a, 'Early winter', 'Ammonia-N');
+    expect(winter.nearFieldDilution!).toBeGreaterThan(winter.requiredDilution! * 1.2);
+    expect(winter.verdict).toBe('meets');
+  });
+});
