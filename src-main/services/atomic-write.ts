@@ -1,6 +1,7 @@
 import * as fs from 'node:fs';
-import { randomBytes } from 'node:crypto';
-import { basename, dirname, join } from 'node:path';
+import { dirname } from 'node:path';
+import { writeTarget } from './site-paths';
+import { temporaryPathFor } from './temp-files';
 
 /** The file operations an atomic write uses; tests swap one out to simulate a full disk. */
 export interface WriteOps {
@@ -35,11 +36,14 @@ function syncDirectory(dir: string): void {
 /**
  * Replaces `path` with `text` so that the file is either the old or the new content, never a mix:
  * writes a temporary file in the same folder, flushes it to disk, then renames it over the target.
- * On any failure the temporary file is removed and the old file is left as it was.
+ * On any failure the temporary file is removed and the old file is left as it was. Through a symbolic
+ * link the link's target is replaced, never the link; a temporary file a kill leaves behind is removed
+ * at the next start (`removeStaleTemporaryFiles`).
  */
-export function atomicWriteFile(path: string, text: string, ops: WriteOps = nodeWriteOps): void {
+export function atomicWriteFile(linkOrPath: string, text: string, ops: WriteOps = nodeWriteOps): void {
+  const path = writeTarget(linkOrPath);
   const dir = dirname(path);
-  const tmp = join(dir, `.${basename(path)}.${process.pid}.${randomBytes(4).toString('hex')}.tmp`);
+  const tmp = temporaryPathFor(path);
   const data = Buffer.from(text, 'utf8');
   let mode = 0o644;
   try {

@@ -1,5 +1,5 @@
 import { existsSync, mkdirSync } from 'node:fs';
-import { relative } from 'node:path';
+import { dirname, relative } from 'node:path';
 import {
   CHANNELS,
   parseRequest,
@@ -13,6 +13,7 @@ import { exportSiteReportInWorker } from '../report/export-in-worker';
 import { readSiteText, RecentFiles, saveSiteText } from './file-store';
 import { RecoveryStore } from './recovery';
 import { ServiceError, toContractError } from './service-error';
+import { removeStaleTemporaryFiles } from './temp-files';
 
 /**
  * What differs between the Electron window and the browser shell: how the user picks files, which paths
@@ -20,8 +21,11 @@ import { ServiceError, toContractError } from './service-error';
  */
 export interface ShellHost {
   shell: 'electron' | 'browser';
-  /** returns the absolute path when the renderer may read or write this file, else throws ServiceError('forbidden') */
-  allowFile(path: string): string;
+  /**
+   * returns the absolute path when the renderer may read (or, with 'write', replace) this file, else
+   * throws ServiceError('forbidden')
+   */
+  allowFile(path: string, access?: 'read' | 'write'): string;
   /** the same for a folder the report is written into */
   allowDir(path: string): string;
   pickOpenPath(request: RequestOf<'site.open'>): Promise<string | null>;
@@ -31,6 +35,8 @@ export interface ShellHost {
   writeClipboardImage(png: Buffer): Promise<void>;
   /** files the user may reopen beyond the recent list (the browser shell's workspace folder) */
   listFiles?(): string[];
+  /** told of the document the renderer opened or saved (the Electron shell lets it be saved again) */
+  noteOpenDocument?(path: string): void;
 }
 
 export interface HandlerOptions {
@@ -47,20 +53,24 @@ const PNG_SIGNATURE = Buffer.from([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0
 export function createChannelHandlers({ host, dataDir, version }: HandlerOptions): ChannelHandlers {
   const recent = new RecentFiles(dataDir);
   const recovery = new RecoveryStore(dataDir);
+  // saves killed part-way leave temporary files beside their targets: remove them at the start
+  for (const dir of new Set([dataDir, ...recent.list().map((p) => dirname(p))])) removeStaleTemporaryFiles(dir);
   const opened = (path: string) => {
     const r = readSiteText(path);
     recent.add(path);
+    host.noteOpenDocument?.(path);
     return r;
   };
   const saved = (path: string, text: string) => {
     saveSiteText(path, text);
     recent.add(path);
+    host.noteOpenDocument?.(path);
     return { path };
   };
+  // a dangling link, a vanished file or a path now refused drops out of the list; it never breaks it
   const mayUse = (p: string) => {
     try {
-      host.allowFile(p);
-      return existsSync(p);
+      return existsSync(host.allowFile(p, 'read'));
     } catch {
       return false;
     }
@@ -71,8 +81,8 @@ export function createChannelHandlers({ host, dataDir, version }: HandlerOptions
       const path = await host.pickOpenPath(req);
       return path === null ? null : opened(path);
     },
-    'site.read': async (req) => opened(host.allowFile(req.path)),
-    'site.save': async (req) => saved(host.allowFile(req.path), req.text),
+    'site.read': async (req) => opened(host.allowFile(req.path, 'read')),
+    'site.save': async (req) => saved(host.allowFile(req.path, 'write'), req.text),
     'site.saveAs': async (req) => {
       const path = await host.pickSavePath(req.suggestedName);
       return path === null ? null : saved(path, req.text);

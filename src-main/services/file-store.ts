@@ -1,15 +1,21 @@
-import { existsSync, mkdirSync, readFileSync, statSync } from 'node:fs';
+import { existsSync, mkdirSync, readFileSync } from 'node:fs';
 import { join, resolve } from 'node:path';
 import { loadSite, SiteFileError } from '../../shared-core/site/load';
 import { atomicWriteFile, type WriteOps } from './atomic-write';
+import { checkSiteFileName, requireRegularFile } from './site-paths';
 
 export interface SiteText {
   path: string;
   text: string;
 }
 
-/** Reads a site file and validates it (format, version, schema); the file is never modified. */
+/**
+ * Reads a site file and validates it (format, version, schema); the file is never modified. Only regular
+ * files named *.gpsite of bounded size are read (a pipe or a device would block the process).
+ */
 export function readSiteText(path: string): SiteText {
+  checkSiteFileName(path);
+  requireRegularFile(path);
   const text = readFileSync(path, 'utf8');
   try {
     loadSite(text);
@@ -27,12 +33,13 @@ export function readSiteText(path: string): SiteText {
 /**
  * Saves a site document atomically. Refuses text that is not a valid site document, and refuses to
  * replace an existing file that does not load (malformed, or written by a newer gprime): such a file is
- * never modified.
+ * never modified. Only a regular file named *.gpsite (or a new one) is written.
  */
 export function saveSiteText(path: string, text: string, ops?: WriteOps): SiteText {
+  checkSiteFileName(path);
+  requireRegularFile(path, true);
   loadSite(text);
   if (existsSync(path)) {
-    if (statSync(path).isDirectory()) throw new SiteFileError(path, 'this is a folder, not a file');
     try {
       readSiteText(path);
     } catch (e) {

@@ -1,20 +1,27 @@
-import { mkdirSync, readdirSync, realpathSync, statSync } from 'node:fs';
+import { lstatSync, mkdirSync, readdirSync, realpathSync, statSync } from 'node:fs';
 import { basename, dirname, isAbsolute, join, relative, resolve, sep } from 'node:path';
 import type { ShellHost } from '../services/channel-handlers';
 import { ServiceError } from '../services/service-error';
 import { safeSiteFileName, SITE_EXTENSION } from '../services/site-names';
+import { removeStaleTemporaryFiles } from '../services/temp-files';
 
 function timestamp(d: Date): string {
   return d.toISOString().slice(0, 19).replace(/[-:]/g, '').replace('T', '-');
 }
 
-/** The real path of `abs`, resolving symbolic links of the part that exists (so a link cannot lead out). */
-function realpathOfExisting(abs: string): string {
+/**
+ * The real path of `abs`: symbolic links of the part that exists resolved, so a link cannot lead out.
+ * A link to something missing is refused (its target could be anywhere).
+ */
+function realpathOfExisting(abs: string, asked: string): string {
   const rest: string[] = [];
   for (let p = abs; ; p = dirname(p)) {
     try {
       return join(realpathSync(p), ...rest.reverse());
-    } catch {
+    } catch (e) {
+      if ((e as NodeJS.ErrnoException).code !== 'ENOENT' && (e as NodeJS.ErrnoException).code !== 'ENOTDIR') throw e;
+      if (lstatSync(p, { throwIfNoEntry: false })?.isSymbolicLink())
+        throw new ServiceError('forbidden', `${asked}: leads through a link to something missing; refused`);
       if (dirname(p) === p) return abs;
       rest.push(basename(p));
     }
@@ -22,15 +29,17 @@ function realpathOfExisting(abs: string): string {
 }
 
 /**
- * The browser shell has no native dialogs: every file lives in one workspace folder. The renderer may
- * only touch paths inside it; 'site.open' takes a file name of the folder, 'site.saveAs' writes the
- * suggested name there, reports go to <workspace>/reports/.
+ * The browser shell has no native dialogs: every file lives in one workspace folder. Every path it
+ * touches (open, save, save as, the report folder, the file list) goes through one containment check that
+ * resolves links: the real path must lie inside the workspace. 'site.open' takes a file name of the
+ * folder, 'site.saveAs' writes the suggested name there, reports go to <workspace>/reports/.
  */
 export function workspaceHost(workspaceDir: string, now: () => Date = () => new Date()): ShellHost {
   mkdirSync(workspaceDir, { recursive: true });
   const root = realpathSync(workspaceDir);
-  const inside = (path: string, what: string): string => {
-    const real = realpathOfExisting(resolve(root, path));
+  removeStaleTemporaryFiles(root);
+  const contained = (path: string, what: string): string => {
+    const real = realpathOfExisting(resolve(root, path), path);
     const rel = relative(root, real);
     if (rel === '..' || rel.startsWith('..' + sep) || isAbsolute(rel))
       throw new ServiceError(
@@ -39,18 +48,30 @@ export function workspaceHost(workspaceDir: string, now: () => Date = () => new 
       );
     return real;
   };
+  const containedFile = (path: string) => {
+    const real = contained(path, 'files');
+    if (real === root) throw new ServiceError('forbidden', `${path}: this is the workspace folder, not a file`);
+    return real;
+  };
+  const modified = (p: string) => statSync(p, { throwIfNoEntry: false })?.mtimeMs ?? 0;
+  const listable = (p: string) => {
+    try {
+      return statSync(containedFile(p)).isFile();
+    } catch {
+      return false; // a dangling link, a link leading out, a file that vanished: not listed, never an error
+    }
+  };
   return {
     shell: 'browser',
-    allowFile: (path) => {
-      const p = inside(path, 'files');
-      if (p === root) throw new ServiceError('forbidden', `${path}: this is the workspace folder, not a file`);
-      return p;
-    },
-    allowDir: (path) => inside(path, 'folders'),
-    pickOpenPath: async (req) => (req.name ? inside(join(root, basename(req.name)), 'files') : null),
-    pickSavePath: async (suggestedName) => join(root, safeSiteFileName(suggestedName)),
+    allowFile: (path) => containedFile(path),
+    allowDir: (path) => contained(path, 'folders'),
+    pickOpenPath: async (req) => (req.name ? containedFile(join(root, basename(req.name))) : null),
+    pickSavePath: async (suggestedName) => containedFile(join(root, safeSiteFileName(suggestedName))),
     pickExportDir: async (siteName) =>
-      join(root, 'reports', `${safeSiteFileName(siteName).slice(0, -SITE_EXTENSION.length)}-${timestamp(now())}`),
+      contained(
+        join(root, 'reports', `${safeSiteFileName(siteName).slice(0, -SITE_EXTENSION.length)}-${timestamp(now())}`),
+        'folders',
+      ),
     writeClipboardImage: async () => {
       throw new ServiceError(
         'unsupported',
@@ -61,7 +82,7 @@ export function workspaceHost(workspaceDir: string, now: () => Date = () => new 
       readdirSync(root)
         .filter((n) => n.toLowerCase().endsWith(SITE_EXTENSION) && !n.startsWith('.'))
         .map((n) => join(root, n))
-        .filter((p) => statSync(p).isFile())
-        .sort((a, b) => statSync(b).mtimeMs - statSync(a).mtimeMs),
+        .filter(listable)
+        .sort((a, b) => modified(b) - modified(a)),
   };
 }
