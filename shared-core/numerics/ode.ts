@@ -113,8 +113,9 @@ class StepInterpolant {
 /**
  * Integrates y' = f(t, y) from t0 to t1 with f writing into a buffer. Never throws on a failed step: it reports
  * the status ('step-failed' on a non-finite value or a step-size underflow, 'max-steps' at the step limit).
- * Forward integration only: t1 = t0 returns the initial point with status 'completed' and no evaluation; t1 < t0
- * or a non-finite bound throws a RangeError (a programming error, not a user input).
+ * Forward integration only: t1 = t0 returns the initial point with status 'completed' and no evaluation; t1 < t0,
+ * a NaN bound or an infinite t0 throws a RangeError (a programming error, not a user input). t1 = ∞ runs until a
+ * terminal event or the step limit (first step default 10⁻³·max(1, |t0|)).
  */
 export function integrateOde(
   f: OdeRhsInPlace,
@@ -123,8 +124,8 @@ export function integrateOde(
   t1: number,
   options: OdeOptions = {},
 ): OdeSolution {
-  if (!(Number.isFinite(t0) && Number.isFinite(t1) && t1 >= t0))
-    throw new RangeError(`integrateOde integrates forwards only: t1 (${t1}) must be finite and not below t0 (${t0})`);
+  if (!(Number.isFinite(t0) && t1 >= t0))
+    throw new RangeError(`integrateOde integrates forwards only: t1 (${t1}) must not be below a finite t0 (${t0})`);
   if (t1 === t0)
     return { status: 'completed', message: 'the interval is empty', t: [t0], y: [[...y0]], events: [], evaluations: 0 };
   const rtol = options.rtol ?? 1e-6,
@@ -150,7 +151,7 @@ export function integrateOde(
   let evaluations = 1,
     rejected = false;
   let t = t0,
-    h = Math.min(options.h0 ?? (t1 - t0) / 1000, hMax);
+    h = Math.min(options.h0 ?? (Number.isFinite(t1) ? (t1 - t0) / 1000 : 1e-3 * Math.max(1, Math.abs(t0))), hMax);
   f(t, y, k1);
   const ts = [t],
     ys = [copyOf(y)],

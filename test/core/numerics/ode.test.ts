@@ -129,10 +129,19 @@ describe('an integration that cannot finish says so', () => {
     expect(Math.abs(s.t[s.t.length - 1] - 1)).toBeLessThan(1e-5);
   });
 
-  it('integrates forwards only: t1 < t0 or a non-finite end is refused, t1 = t0 is the initial point', () => {
+  it('integrates forwards only: t1 < t0 or a NaN end is refused, t1 = t0 is the initial point', () => {
     expect(() => solveOde(decay, 1, [1], 0)).toThrow(RangeError);
     expect(() => solveOde(decay, 0, [1], Number.NaN)).toThrow(RangeError);
+    expect(() => solveOde(decay, Number.NEGATIVE_INFINITY, [1], 0)).toThrow(RangeError);
     const s = solveOde(decay, 2, [1], 2);
     expect(s).toMatchObject({ status: 'completed', t: [2], y: [[1]], evaluations: 0 });
+  });
+
+  it('an open end (t1 = ∞) runs to a terminal event', () => {
+    const s = solveOde(decay, 0, [1], Infinity, {
+      events: [{ name: 'tenth', g: (_t, y) => y[0] - 0.1, terminal: true }],
+    });
+    expect(s.status).toBe('terminal-event');
+    expect(Math.abs(s.t[s.t.length - 1] - Math.log(10))).toBeLessThan(1e-6);
   });
 });
