@@ -76,6 +76,20 @@ export interface DiffuserPlume {
 }
 
 const m = (x: number) => formatNumber(Number(x.toPrecision(3)));
+
+/** The round stretch cut where the plumes merge, as if the merge had stopped the integration there. */
+function untilMerge(st: Stretch, merge: Stretch['fired'][number]): Stretch {
+  const k = st.s.findIndex((x) => x >= merge.s);
+  const end = k < 0 ? st.s.length : k;
+  return {
+    ...st,
+    s: [...st.s.slice(0, end), merge.s],
+    y: [...st.y.slice(0, end), merge.y],
+    fired: st.fired.slice(0, st.fired.indexOf(merge) + 1),
+    status: 'terminal-event',
+    message: 'stopped at plumes merge',
+  };
+}
 const endDilution = (t: JetTrajectory, key: 'dilutionCentreline' | 'dilutionAverage') =>
   t.path[key][t.path[key].length - 1];
 
@@ -100,8 +114,8 @@ export function diffuserPlume(input: DiffuserInput): DiffuserPlume {
     input.currentAngle === undefined
       ? undefined
       : requireInRange('current_angle', input.currentAngle, 'deg', { min: 0, max: 90 });
-  const isolated = buoyantJetTrajectory({ ...input, horizontalAngle: 0 });
   if (ports === 1) {
+    const isolated = buoyantJetTrajectory({ ...input, horizontalAngle: 0 });
     return {
       merged: isolated,
       isolated,
@@ -124,8 +138,15 @@ export function diffuserPlume(input: DiffuserInput): DiffuserPlume {
     );
   const s = requireInRange('spacing', input.spacing, 'm', { min: input.diameter, minExclusive: true, max: 1e4 });
   const run = prepareJetRun({ ...input, horizontalAngle: 0, portSpacing: s });
-  const round = traceStretch(run, { geometry: 'round', start: run.start, sStart: 0, stopAtMerge: true });
-  const mergeEvent = round.fired.find((e) => e.name === 'plumes merge');
+  // one round path serves both: the single port follows it to its end, the merged plumes only up to merging
+  const single = traceStretch(run, { geometry: 'round', start: run.start, sStart: 0 });
+  const mergeEvent = single.fired.find((e) => e.name === 'plumes merge');
+  const isolated = assembleTrajectory(
+    run,
+    [{ ...single, fired: single.fired.filter((e) => e !== mergeEvent) }],
+    input.ambient,
+  );
+  const round = mergeEvent ? untilMerge(single, mergeEvent) : single;
   const stretches: Stretch[] = [round];
   if (mergeEvent) {
     const state = jetStateOf(mergeEvent.y, round.equations);

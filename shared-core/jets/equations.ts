@@ -10,7 +10,7 @@ import {
   type JetState,
 } from './closure';
 
-// the closure's constants and the table lookup, bound once (the right-hand side reads them on every call)
+// the closure's constants and the table interpolation, bound once (the right-hand side reads them on every call)
 const ROUND = { alphaJet: ENTRAINMENT.alphaJet, alphaPlume: ENTRAINMENT.alphaPlume, riPlume: RICHARDSON_PLUME };
 const PLANE = {
   alphaJet: PLANE_ENTRAINMENT.alphaJet,
@@ -18,9 +18,11 @@ const PLANE = {
   riPlume: RICHARDSON_PLANE_PLUME,
 };
 const BETA = ENTRAINMENT.betaCrossflow;
+const interpolate = interpolateAt;
+
 /** A table by depth at d: linear between rows, constant beyond the ends and for a table of one row. */
 function lookup(depths: readonly number[], values: readonly number[], d: number): number {
-  return values.length === 1 ? values[0] : interpolateAt(depths, values, d);
+  return values.length === 1 ? values[0] : interpolate(depths, values, d);
 }
 const G = GRAVITY;
 

@@ -249,7 +249,7 @@ export function traceStretch(run: JetRun, o: StretchOptions): Stretch {
   for (let seg = 0; seg < 8; seg++) {
     const sol = integrateOde(rhs, start, y0, run.sMax / D, {
       rtol: 1e-8,
-      atol: 1e-10,
+      atol: 1e-8,
       h0: 0.01,
       maxSteps: run.maxSteps,
       events,
