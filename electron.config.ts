@@ -1,7 +1,10 @@
 /**
  * Packaging (electron-builder) and window settings for the desktop app.
- * Packaging downloads the Electron runtime, so it is not run in CI (see README "Desktop app").
+ * Packaging downloads the Electron runtime, so it is not run in CI (see README "Desktop app"); the tests
+ * check this configuration object instead (test/main/packaging.test.ts).
  */
+import type { Configuration } from 'electron-builder';
+
 export const windowSettings = {
   width: 1440,
   height: 900,
@@ -14,8 +17,26 @@ export const windowSettings = {
 /** Site files use our own extension. */
 export const SITE_FILE_EXTENSION = 'gpsite';
 
+/**
+ * Electron fuses, flipped in the packaged binary (Electron's "Security" tutorial, item "Fuses"): the app
+ * cannot be run as plain Node, takes no NODE_OPTIONS and no --inspect, loads its code only from the
+ * app.asar whose integrity it checks, and encrypts its cookie store.
+ */
+export const ELECTRON_FUSES = {
+  runAsNode: false,
+  enableNodeOptionsEnvironmentVariable: false,
+  enableNodeCliInspectArguments: false,
+  onlyLoadAppFromAsar: true,
+  enableEmbeddedAsarIntegrityValidation: true,
+  enableCookieEncryption: true,
+  grantFileProtocolExtraPrivileges: false,
+} as const;
+
 const config = {
   appId: 'org.gprime.desktop',
+  // the app is packed into app.asar (its integrity hash is embedded in the binary for the fuse above)
+  asar: true,
+  electronFuses: ELECTRON_FUSES,
   productName: 'gprime',
   directories: { output: 'dist/packages', buildResources: 'build-resources' },
   files: ['dist/electron/**', 'dist/renderer/**', 'package.json'],
@@ -30,6 +51,6 @@ const config = {
   win: { target: ['nsis'] },
   mac: { target: ['dmg'], category: 'public.app-category.education' },
   nsis: { oneClick: false, allowToChangeInstallationDirectory: true },
-} as const;
+} as const satisfies Configuration;
 
 export default config;

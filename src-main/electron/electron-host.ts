@@ -8,33 +8,43 @@ import { safeSiteFileName } from '../services/site-names';
 const SITE_FILTERS = [{ name: 'gprime site', extensions: [SITE_FILE_EXTENSION] }];
 
 /**
- * Files through native dialogs. The renderer may only touch files the user picked in a dialog, opened
- * from the recent list or the command line, and folders picked for reports: `grant` records them.
+ * Files through native dialogs. The renderer may read files the user chose in this run (a dialog, the
+ * menu's recent list, the command line, the desktop's "open with"), files of the recent list and folders
+ * picked for reports; it may write only the files chosen in this run and the document it has open — not
+ * every file ever opened. `grant` records a choice.
  */
 export function electronHost(
   window: () => BrowserWindow | null,
   recent: () => string[],
 ): ShellHost & { grant(path: string): string } {
   const granted = new Set<string>();
+  let openDocument: string | null = null;
   const grant = (path: string) => {
     const abs = resolve(path);
     granted.add(abs);
     return abs;
   };
-  const allowed = (path: string, what: string) => {
+  const refuse = (path: string, what: string): never => {
+    throw new ServiceError('forbidden', `${path}: the workspace may only ${what}`);
+  };
+  const allowFile = (path: string, access: 'read' | 'write' = 'read') => {
     const abs = resolve(path);
-    if (granted.has(abs) || recent().includes(abs)) return abs;
-    throw new ServiceError(
-      'forbidden',
-      `${path}: the workspace may only use ${what} chosen in a dialog or from the recent list`,
-    );
+    if (granted.has(abs) || abs === openDocument) return abs;
+    if (access === 'read' && recent().includes(abs)) return abs;
+    return access === 'read'
+      ? refuse(path, 'open files chosen in a dialog or from the recent list')
+      : refuse(path, 'save the open document or files chosen in this session; use Save as');
   };
   const parent = () => window() ?? undefined;
   return {
     shell: 'electron',
     grant,
-    allowFile: (path) => allowed(path, 'files'),
-    allowDir: (path) => allowed(path, 'folders'),
+    allowFile,
+    allowDir: (path) =>
+      granted.has(resolve(path)) ? resolve(path) : refuse(path, 'write reports into folders chosen in a dialog'),
+    noteOpenDocument: (path) => {
+      openDocument = resolve(path);
+    },
     pickOpenPath: async () => {
       const options = { title: 'Open a site', properties: ['openFile' as const], filters: SITE_FILTERS };
       const win = parent();

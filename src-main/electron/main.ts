@@ -35,7 +35,9 @@ function start(): void {
     () => win,
     () => recent.list(),
   );
-  const send = (command: MenuCommand, arg?: string) => win?.webContents.send(MENU_EVENT, command, arg);
+  // a recent file picked in the menu is the user's choice: the renderer may save it again
+  const send = (command: MenuCommand, arg?: string) =>
+    win?.webContents.send(MENU_EVENT, command, command === 'openRecent' && arg ? host.grant(arg) : arg);
   const refreshMenu = () =>
     installMenu({
       recent: recent.list(),
@@ -48,7 +50,7 @@ function start(): void {
           detail: 'Screening estimates for stratified flows and density currents.',
         }),
     });
-  const openFromOutside = (path: string) => send('openRecent', host.grant(resolve(path)));
+  const openFromOutside = (path: string) => send('openRecent', resolve(path));
 
   const handlers = createChannelHandlers({ host, dataDir, version: app.getVersion() });
   for (const c of ['site.open', 'site.read', 'site.save', 'site.saveAs'] as const) {
@@ -63,7 +65,7 @@ function start(): void {
   enforceCsp();
   registerIpc(handlers);
   refreshMenu();
-  win = createMainWindow(join(here, 'preload.cjs'));
+  win = createMainWindow(join(here, 'preload.cjs'), app.isPackaged);
   win.on('closed', () => (win = null));
   const initial = siteArgs(process.argv);
   if (initial[0]) win.webContents.once('did-finish-load', () => openFromOutside(initial[0]));

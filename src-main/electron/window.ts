@@ -12,10 +12,14 @@ import { APP_ORIGIN } from './ipc-names';
 
 export const APP_URL = `${APP_ORIGIN}/index.html`;
 
-/** The renderer gets no Node, runs sandboxed in its own JavaScript world, and reaches main only through the preload. */
-export function secureWebPreferences(preload: string): WebPreferences {
+/**
+ * The renderer gets no Node, runs sandboxed in its own JavaScript world, and reaches main only through the
+ * preload. A packaged build has no DevTools.
+ */
+export function secureWebPreferences(preload: string, packaged = true): WebPreferences {
   return {
     preload,
+    devTools: !packaged,
     contextIsolation: true,
     sandbox: true,
     nodeIntegration: false,
@@ -30,8 +34,13 @@ export function secureWebPreferences(preload: string): WebPreferences {
   };
 }
 
-export function windowOptions(preload: string): BrowserWindowConstructorOptions {
-  return { ...windowSettings, show: false, autoHideMenuBar: false, webPreferences: secureWebPreferences(preload) };
+export function windowOptions(preload: string, packaged = true): BrowserWindowConstructorOptions {
+  return {
+    ...windowSettings,
+    show: false,
+    autoHideMenuBar: false,
+    webPreferences: secureWebPreferences(preload, packaged),
+  };
 }
 
 /** The one permission the renderer gets: writing to the clipboard ("Copy image", "Copy table"), from the app's own pages. */
@@ -46,9 +55,13 @@ export function permissionAllowed(permission: string, url: string | undefined): 
   }
 }
 
-/** Denies navigation away from the app, new windows, webviews and every permission but clipboard writing. */
+/**
+ * Denies navigation (of the page and of any frame in it), new windows, webviews and every permission but
+ * clipboard writing.
+ */
 export function lockDown(contents: WebContents): void {
   contents.on('will-navigate', (event) => event.preventDefault());
+  contents.on('will-frame-navigate', (event) => event.preventDefault());
   contents.on('will-redirect', (event) => event.preventDefault());
   contents.on('will-attach-webview', (event) => event.preventDefault());
   contents.setWindowOpenHandler(() => ({ action: 'deny' }));
@@ -71,8 +84,8 @@ export function enforceCsp(): void {
  * The one workspace window. When the renderer holds unsaved changes it blocks unloading
  * (beforeunload); main then asks whether to discard them.
  */
-export function createMainWindow(preload: string): BrowserWindow {
-  const win = new BrowserWindow(windowOptions(preload));
+export function createMainWindow(preload: string, packaged = true): BrowserWindow {
+  const win = new BrowserWindow(windowOptions(preload, packaged));
   lockDown(win.webContents);
   win.webContents.on('will-prevent-unload', (event) => {
     const choice = dialog.showMessageBoxSync(win, {

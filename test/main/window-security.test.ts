@@ -80,6 +80,13 @@ describe('the workspace window', () => {
     expect(prefs.preload).toBe('/app/preload.cjs');
   });
 
+  it('has no DevTools in a packaged build (nor when not told otherwise), and DevTools in development', () => {
+    createMainWindow('/p.cjs', true);
+    createMainWindow('/p.cjs');
+    createMainWindow('/p.cjs', false);
+    expect(h.windows.map((w) => w.options.webPreferences.devTools)).toEqual([false, false, true]);
+  });
+
   it('loads the renderer from the app scheme, never from file:// or the web', () => {
     createMainWindow('/p.cjs');
     expect(h.windows[0].url).toBe(APP_URL);
@@ -89,7 +96,7 @@ describe('the workspace window', () => {
   it('denies navigation, redirects, webviews, new windows and permission requests', () => {
     createMainWindow('/p.cjs');
     const wc = h.windows[0].webContents;
-    for (const name of ['will-navigate', 'will-redirect', 'will-attach-webview']) {
+    for (const name of ['will-navigate', 'will-frame-navigate', 'will-redirect', 'will-attach-webview']) {
       const event = { preventDefault: vi.fn() };
       wc.listeners[name](event, 'https://example.org/');
       expect(event.preventDefault, name).toHaveBeenCalled();
