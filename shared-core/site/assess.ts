@@ -9,7 +9,7 @@ import { ProfileError } from '../profile/profile';
 import { boundArgs } from './bindings';
 import { makeContext, ProfileCache, type EstimateContext } from './context';
 import type { Estimate, Site } from './schema';
-import { complianceEstimates, farFieldEstimates, siteCompliance } from './compliance';
+import { complianceEstimates, farFieldEstimates, siteCompliance, withRequiredDilution } from './compliance';
 import { assessConditions, type ConditionOutcome } from './conditions';
 import { bandsFromTyped, MONTE_CARLO_JCGM101, type UncertaintyResult } from '../uncertainty';
 
@@ -234,7 +234,9 @@ export function assessSite(
   const first = assessedEstimates(site).map(({ estimate, index, added }) => mark(run(estimate, index), added));
   const start = first.length;
   const far = farFieldEstimates(site, first).map((e, k) => mark(run(e, start + k), true));
-  const estimates = [...first, ...far];
+  const computed = [...first, ...far];
+  const compliance = siteCompliance(site, computed);
+  const estimates = computed.map((o) => withRequiredDilution(o, compliance));
   return {
     format: 'gprime-assessment',
     project: site.project,
@@ -245,6 +247,6 @@ export function assessSite(
     caution: SCREENING_CAUTION,
     conditions: assessConditions(site, cache),
     estimates,
-    compliance: siteCompliance(site, estimates),
+    compliance,
   };
 }

@@ -308,3 +308,27 @@ function markGoverning(rows: ComplianceRow[]): void {
     scored.reduce((a, b) => (b.margin! < a.margin! ? b : a)).governing = true;
   }
 }
+
+/**
+ * The near-field run's "dilution along the path" chart with the required dilution of each zone it feeds as a
+ * flat line, so the crossing can be seen (in the workspace and the report alike).
+ */
+export function withRequiredDilution(o: EstimateOutcome, rows: readonly ComplianceRow[]): EstimateOutcome {
+  const lines = new Map<string, number>();
+  for (const r of rows)
+    if (r.estimate === o.id && r.requiredDilution !== null)
+      lines.set(`Required, ${r.constituent} (${r.zone})`, r.requiredDilution);
+  if (!lines.size) return o;
+  const series = o.series.map((s) =>
+    s.kind !== 'dilution-along-path'
+      ? s
+      : {
+          ...s,
+          y: [
+            ...s.y,
+            ...[...lines].map(([label, value]) => ({ label, unit: '1', values: s.x.values.map(() => value) })),
+          ],
+        },
+  );
+  return { ...o, series };
+}

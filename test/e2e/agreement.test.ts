@@ -58,8 +58,18 @@ describe('the workspace, the CLI and the report agree on an edited document', ()
     const fromReport = Number(line.split(',').at(-2));
     expect(roundsTo(fromReport, plume.results.max_rise.value), `${fromReport} vs CLI`).toBe(true);
 
-    // the compliance verdict of the report is the CLI's
+    // every compliance row: the workspace's verdict, required and achieved dilution are the CLI's, and the
+    // report's table holds the same verdicts
     const compliance = readFileSync(join(out, 'r', 'tables', 'compliance.csv'), 'utf8');
-    for (const r of cli.json.compliance) expect(compliance).toContain(r.verdict);
+    expect(cli.json.compliance.length).toBeGreaterThan(0);
+    for (const r of cli.json.compliance) {
+      const tr = page.locator(`tr[data-row="${r.constituent}|${r.zone}|${r.condition}"]`);
+      expect(await tr.getAttribute('data-verdict')).toBe(r.verdict);
+      const cells = await tr.locator('td.num').allTextContents();
+      if (r.requiredDilution !== null) expect(roundsTo(Number(cells[1]), r.requiredDilution)).toBe(true);
+      const achieved = Number(cells[2].split('=').at(-1)!.trim());
+      if (r.achievedDilution !== null) expect(roundsTo(achieved, r.achievedDilution), `${cells[2]}`).toBe(true);
+      expect(compliance).toContain(r.verdict);
+    }
   });
 });
