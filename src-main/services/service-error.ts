@@ -20,9 +20,14 @@ const IO_CODES: Record<string, string> = {
   EROFS: 'the disk is read-only',
 };
 
+/** Node refuses a path with a NUL character before touching the disk; such a path is a bad request. */
+const isNulInPath = (e: unknown) =>
+  (e as NodeJS.ErrnoException | undefined)?.code === 'ERR_INVALID_ARG_VALUE' && /null bytes/.test(String(e));
+
 /** Maps anything thrown by a service to the contract's error shape. */
 export function toContractError(e: unknown): ContractError {
   if (e instanceof ServiceError) return { code: e.code, message: e.message };
+  if (isNulInPath(e)) return { code: 'invalid-request', message: 'a path contains a NUL character' };
   if (e instanceof SiteFileError) return { code: 'site-file', message: e.message };
   const errno = (e as NodeJS.ErrnoException | undefined)?.code;
   if (typeof errno === 'string' && /^E[A-Z]+$/.test(errno)) {

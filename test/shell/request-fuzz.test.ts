@@ -7,9 +7,9 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import fc from 'fast-check';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { CHANNEL_NAMES } from '../../shared-core/ipc/contract';
 import { startShell, type RunningShell } from '../../src-main/shell/server';
 import { rawRequest } from './http-client';
+import { encodeRequest, hostileRequest } from './request-arbitrary';
 
 const DEMO = readFileSync(join(import.meta.dirname, '../../examples/quillmere-reservoir.gpsite'), 'utf8');
 let shell: RunningShell;
@@ -32,64 +32,13 @@ beforeAll(async () => {
 });
 afterAll(() => shell.close());
 
-/** Pieces that tend to break URL decoding, path joining and routing. */
-const pathPiece = fc.oneof(
-  fc.constantFrom(
-    '%',
-    '%E0%A4%A',
-    '%ED%A0%80',
-    '%C0%AF',
-    '%2e%2e',
-    '%2F',
-    '%00',
-    '%zz',
-    '..',
-    '.',
-    '/',
-    '//',
-    '?',
-    '#',
-  ),
-  fc.constantFrom('api', 'api/', 'index.html', 'favicon.ico', ...CHANNEL_NAMES),
-  fc.string({ maxLength: 6 }),
-  fc.stringMatching(/^%[0-9A-Fa-f]{2}$/),
-);
-const headerValue = fc.oneof(fc.string({ maxLength: 40 }), fc.constantFrom('', ' ', '\u0000', 'é', '\u2028'));
-
-const request = fc.record({
-  method: fc.constantFrom('GET', 'POST', 'HEAD', 'PUT', 'DELETE', 'OPTIONS', 'PATCH', 'CONNECT', 'X'),
-  path: fc.array(pathPiece, { maxLength: 8 }).map((p) => `/${p.join('')}`),
-  host: fc.oneof(fc.constant('ours'), fc.constant('localhost'), fc.constant(null), headerValue),
-  token: fc.oneof(fc.constant('ours'), fc.constant(null), headerValue),
-  origin: fc.oneof(fc.constant(null), fc.constant('ours'), headerValue),
-  contentType: fc.oneof(fc.constant('application/json'), fc.constant(null), headerValue),
-  extra: fc.array(fc.tuple(fc.stringMatching(/^[A-Za-z][A-Za-z0-9-]{0,12}$/), headerValue), { maxLength: 3 }),
-  body: fc.oneof(fc.constant(''), fc.json({ maxDepth: 2 }), fc.string({ maxLength: 50 })),
-});
-
-type FuzzRequest = typeof request extends fc.Arbitrary<infer T> ? T : never;
-
-function encode(r: FuzzRequest): { head: Buffer; body: Buffer } {
-  const us = `127.0.0.1:${shell.port}`;
-  const lines = [`${r.method} ${r.path} HTTP/1.1`];
-  if (r.host !== null)
-    lines.push(`host: ${r.host === 'ours' ? us : r.host === 'localhost' ? `localhost:${shell.port}` : r.host}`);
-  if (r.token !== null) lines.push(`x-gprime-token: ${r.token === 'ours' ? shell.token : r.token}`);
-  if (r.origin !== null) lines.push(`origin: ${r.origin === 'ours' ? `http://${us}` : r.origin}`);
-  if (r.contentType !== null) lines.push(`content-type: ${r.contentType}`);
-  for (const [name, value] of r.extra) lines.push(`${name}: ${value}`);
-  const body = Buffer.from(r.body, 'utf8');
-  lines.push(`content-length: ${body.length}`, 'connection: close');
-  return { head: Buffer.from(lines.join('\r\n'), 'utf8'), body };
-}
-
 describe('request fuzzing of the browser shell', () => {
   it('answers every generated request without a 500, a hang or a changed file, and keeps serving', async () => {
     const before = digest();
     const statuses = new Map<number | null, number>();
     await fc.assert(
-      fc.asyncProperty(request, async (r) => {
-        const { head, body } = encode(r);
+      fc.asyncProperty(hostileRequest, async (r) => {
+        const { head, body } = encodeRequest(r, shell.port, shell.token);
         const status = await rawRequest(shell.port, head, body);
         statuses.set(status, (statuses.get(status) ?? 0) + 1);
         expect(status, head.toString('latin1')).not.toBeNull();

@@ -102,6 +102,18 @@ describe('the browser shell keeps every path inside its workspace', () => {
     }
   });
 
+  it('answers a path with a NUL character as a bad request (found by the reliability suite)', async () => {
+    const path = join(ws, 'a\u0000.gpsite');
+    for (const [channel, payload] of [
+      ['site.read', { path }],
+      ['site.save', { path, text: DEMO }],
+    ] as const)
+      expect((await call(channel, payload)).error).toEqual({
+        code: 'invalid-request',
+        message: 'a path contains a NUL character',
+      });
+  });
+
   it("saves through a link inside the workspace into the link's target, leaving the link a link", async () => {
     expect((await call('site.saveAs', { text: DEMO, suggestedName: 'real' })).ok).toBe(true);
     symlinkSync(join(ws, 'real.gpsite'), join(ws, 'alias.gpsite'));
