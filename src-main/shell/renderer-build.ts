@@ -1,5 +1,6 @@
 import { existsSync, readdirSync, renameSync, rmSync, statSync } from 'node:fs';
-import { join } from 'node:path';
+import { basename, dirname, join } from 'node:path';
+import { processIsAlive } from '../services/temp-files';
 
 /** Folders whose files end up in the renderer bundle. */
 const RENDERER_SOURCES = ['src-renderer', 'shared-core', 'vite.config.ts', 'svelte.config.js'];
@@ -22,11 +23,23 @@ export function rendererIsStale(root: string, outDir: string): boolean {
   return RENDERER_SOURCES.some((s) => newestMtime(join(root, s)) > built);
 }
 
+/** Removes the half-built folders (`<outDir>.<pid>.new|old`) that a build killed part-way left behind. */
+export function removeStaleBuildFolders(outDir: string, isAlive: (pid: number) => boolean = processIsAlive): void {
+  const prefix = `${basename(outDir)}.`;
+  const parent = dirname(outDir);
+  if (!existsSync(parent)) return;
+  for (const name of readdirSync(parent)) {
+    const m = name.startsWith(prefix) ? /^(\d+)\.(new|old)$/.exec(name.slice(prefix.length)) : null;
+    if (m && !isAlive(Number(m[1]))) rmSync(join(parent, name), { recursive: true, force: true });
+  }
+}
+
 /**
  * Builds the renderer with vite when it is missing or stale. Builds into a fresh folder first and swaps
  * it in, so a server already serving the old build never sees a half-written one.
  */
 export async function ensureRendererBuilt(root: string, outDir = join(root, 'dist', 'renderer')): Promise<void> {
+  removeStaleBuildFolders(outDir);
   if (!rendererIsStale(root, outDir)) return;
   const { build } = await import('vite');
   const fresh = `${outDir}.${process.pid}.new`;
