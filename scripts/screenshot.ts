@@ -22,6 +22,8 @@ try {
     await page.getByRole('button', { name: 'Open…' }).click();
     await page.getByRole('button', { name: 'quillmere-reservoir.gpsite' }).click();
     await page.getByText('quillmere-reservoir.gpsite', { exact: true }).waitFor();
+    // the assessment arrives from its worker: wait for the cards and the profile strip
+    await page.locator('[data-estimate]').first().waitFor();
     if (zoom === 1) await page.getByRole('button', { name: 'Treatment works outfall', exact: false }).first().click();
     if (detail)
       await page

@@ -30,11 +30,6 @@ export function outsideValidity(code: string, message: string, input?: string): 
     : { code, severity: 'outside-validity', input, message };
 }
 
-/** Transitional: a warning still written as prose is a caution of unknown kind. */
-export function asWarning(w: Warning | string): Warning {
-  return typeof w === 'string' ? caution('unclassified', w) : w;
-}
-
 /** One warning per code, input and message (the same warning raised twice is shown once). */
 export function uniqueWarnings(list: readonly Warning[]): Warning[] {
   const seen = new Set<string>();

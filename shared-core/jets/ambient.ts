@@ -1,6 +1,6 @@
 import { InputError } from '../core/errors';
 import { requireInRange, positive } from '../core/range';
-import { asWarning, type Warning } from '../core/warning';
+import type { Warning } from '../core/warning';
 import type { Profile } from '../profile/profile';
 
 /** Ambient water around a discharge: uniform or a measured profile, with a uniform or depth-varying current. */
@@ -77,7 +77,7 @@ export function ambientTables(a: AmbientWater, current: Current = 0, bedDepth?: 
   }
   if (a.kind === 'table') return tableOf(a, u, bedDepth, warnings);
   const p = a.profile;
-  warnings.push(...p.warnings.map(asWarning));
+  warnings.push(...p.warnings);
   const bed = bedDepth ?? p.depth[p.depth.length - 1];
   if (bedDepth !== undefined) requireInRange('bed_depth', bedDepth, 'm', positive);
   return { depth: p.depth, density: p.density, temperature: p.temperature, ...u, bedDepth: bed, warnings };

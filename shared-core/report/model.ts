@@ -1,7 +1,6 @@
 import type { Assessment, ComplianceRow, EstimateOutcome } from '../site/assess';
 import { keyResultName, type ResultValue } from '../calc/types';
 import { findCalcMethod } from '../calc/registry';
-import { asWarning } from '../core/warning';
 import { toDisplay, type UnitSystem } from '../units/units';
 import { chartSpecs, type ChartSpec } from './charts';
 import { formatValue, prettyUnit, readableName } from './format';
@@ -165,7 +164,7 @@ function uncertaintySection(e: EstimateOutcome, units: UnitSystem): UncertaintyS
         values,
       };
     }),
-    warnings: r.warnings.map((w) => asWarning(w).message),
+    warnings: r.warnings.map((w) => w.message),
   };
 }
 

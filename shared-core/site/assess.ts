@@ -4,7 +4,7 @@ import type { EstimateModel } from '../calc/model';
 import type { CalcMethod, ResultValue, Series } from '../calc/types';
 import { ComputationError, InputError } from '../core/errors';
 import { SCREENING_CAUTION } from '../core/caution';
-import { asWarning, uniqueWarnings, type Warning } from '../core/warning';
+import { uniqueWarnings, type Warning } from '../core/warning';
 import { ProfileError } from '../profile/profile';
 import { boundArgs } from './bindings';
 import { makeContext, ProfileCache, type EstimateContext } from './context';
@@ -188,7 +188,7 @@ export function runEstimate(
     const raw = estimateArgs(method, ctx, e);
     const out = runCalc(method, raw);
     const inputs = describeInputs(method, resolveArgs(method, raw), ctx.condition?.name);
-    const warnings = uniqueWarnings([...(ctx.profile?.warnings ?? []).map(asWarning), ...out.warnings]);
+    const warnings = uniqueWarnings([...(ctx.profile?.warnings ?? []), ...out.warnings]);
     const wantsBand = options.bands !== false && e.uncertainty && Object.keys(e.uncertainty).length > 0;
     const uncertainty = wantsBand
       ? bandsFromTyped(method, raw, e.uncertainty!, { progress: options.bandProgress })

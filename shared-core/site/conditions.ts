@@ -1,5 +1,5 @@
 import type { Series } from '../calc/types';
-import { asWarning, type Warning } from '../core/warning';
+import type { Warning } from '../core/warning';
 import { profileSeries } from '../profile/calc';
 import { ProfileError, type ProfileIssue } from '../profile/profile';
 import type { ProfileCache } from './context';
@@ -35,7 +35,7 @@ export function assessConditions(site: Site, cache: ProfileCache): ConditionOutc
     return {
       ...base,
       status: 'ok',
-      warnings: p.warnings.map(asWarning),
+      warnings: [...p.warnings],
       series: profileSeries(p),
       deepest: p.depth[p.depth.length - 1],
     };

@@ -3,7 +3,7 @@ import { nonNegative, positive, requireInRange } from '../core/range';
 import type { MethodInfo } from '../core/method';
 import { GRAVITY } from '../quantities';
 import { brentRoot } from '../numerics/roots';
-import { asWarning, caution, type Warning } from '../core/warning';
+import { caution, type Warning } from '../core/warning';
 import { profileBottom, type Profile } from '../profile/profile';
 import { DepthCursor } from './depth-cursor';
 import {
@@ -201,6 +201,6 @@ export function withdrawalLimitsBohanGrace1973(
     upper,
     lower,
     method: WITHDRAWAL_MEASURED_PROFILE.id,
-    warnings: [...p.warnings.map(asWarning), ...warnings],
+    warnings: [...p.warnings, ...warnings],
   };
 }

@@ -1,7 +1,6 @@
 import { formatNumber } from '../../shared-core/core/errors';
 import { SCREENING_CAUTION } from '../../shared-core/core/caution';
 import type { CalcOutput, CalcMethod } from '../../shared-core/calc/types';
-import { asWarning } from '../../shared-core/core/warning';
 import { MONTE_CARLO_JCGM101, type UncertaintyResult } from '../../shared-core/uncertainty';
 
 /** Plain-text rendering of a calc result for a terminal. */
@@ -33,7 +32,7 @@ export function formatUncertaintyText(r: UncertaintyResult): string {
       `  ${b.name.padEnd(width)}  ${formatNumber(b.low)} … ${formatNumber(b.high)}${u}  (median ${formatNumber(b.median)}, s.d. ${formatNumber(b.standardDeviation)})`,
     );
   }
-  if (r.warnings.length) lines.push(...r.warnings.map((w) => `  ! ${asWarning(w).message}`));
+  if (r.warnings.length) lines.push(...r.warnings.map((w) => `  ! ${w.message}`));
   lines.push(
     `  - ${MONTE_CARLO_JCGM101.source}`,
     '  The band covers the stated input uncertainties only, not the error of the method itself.',

@@ -8,6 +8,7 @@ const [profile, twoCurves] = [
   chartSpecs(
     [
       {
+        kind: 'profile-temperature',
         title: 'Temperature',
         x: { label: 'Depth', unit: 'm', values: [0.5, 5, 10, 20, 38] },
         y: [{ label: 'Temperature', unit: 'degC', values: [24.8, 24.1, 17.2, 10.5, 9.1] }],
@@ -21,6 +22,7 @@ const [profile, twoCurves] = [
   chartSpecs(
     [
       {
+        kind: 'front-position',
         title: 'Front position',
         x: { label: 'Time', unit: 's', values: [0, 60, 120, 180] },
         y: [

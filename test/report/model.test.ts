@@ -107,6 +107,7 @@ describe('report model', () => {
     const charts = chartSpecs(
       [
         {
+          kind: 'front-position',
           title: 'Front position',
           x: { label: 'Time', unit: 's', values: [0, 10, 20] },
           y: [
@@ -117,6 +118,7 @@ describe('report model', () => {
           caption: 'Front position against time',
         },
         {
+          kind: 'plume-centreline',
           title: 'Plume path',
           x: { label: 'Distance', unit: 'm', values: [0, 1, 2] },
           y: [{ label: 'Centreline depth', unit: 'm', values: [20, 18, 17] }],
@@ -156,11 +158,20 @@ describe('report model', () => {
           condition: 'Late summer',
           constituent: 'ammonia',
           unit: 'mg/L',
+          zone: 'chronic',
+          boundary: 50,
+          effluent: 12,
+          ambient: 0.05,
+          criterion: 1.2,
           requiredDilution: 10.4,
+          nearFieldDilution: 6.24,
+          farFieldFactor: 2,
           achievedDilution: 12.48,
           margin: 0.2,
           verdict: 'meets',
           note: '',
+          models: 'buoyant-jet (plume) × far-field (far)',
+          governing: true,
         },
       ],
     };
@@ -168,14 +179,14 @@ describe('report model', () => {
     expect(m.summary[0]).toMatchObject({ status: 'error', keyResult: 'not computed: file: no profile' });
     expect(m.compliance?.rows[0]).toEqual([
       'Outfall',
-      'Late summer',
-      'ammonia',
+      'Late summer (governs)',
+      'ammonia (chronic)',
       'mg/L',
       '10.4',
-      '12.48',
+      '6.24 × 2 = 12.48',
       '20 %',
       'meets',
-      '',
+      'Ce 12, Ca 0.05, Cc 1.2; boundary 50 m; buoyant-jet (plume) × far-field (far)',
     ]);
     expect(m.contents.map((c) => c.anchor)).toContain('compliance');
   });

@@ -20,6 +20,7 @@ const linear: Profile = {
   extra: [{ name: 'tracer', unit: '1', values: depth.map((d) => (d - 30) ** 2) }],
   eos: 'fresh',
   density: depth.map((d) => 1000 + 0.05 * d),
+  labels: [],
   warnings: [],
 };
 const CASES: Record<string, [number, number][]> = {
