@@ -2,3 +2,4 @@ export * from './model';
 export * from './charts';
 export * from './format';
 export { METHOD_CATALOGUE, methodsForSource } from './methods';
+export * from './compliance';

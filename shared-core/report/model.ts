@@ -1,4 +1,6 @@
-import type { Assessment, ComplianceRow, EstimateOutcome } from '../site/assess';
+import type { Assessment, EstimateOutcome } from '../site/assess';
+import { VERDICT_RULE } from '../site/compliance';
+import { complianceTable, derivation, verdictLines, type ComplianceTable, type VerdictLine } from './compliance';
 import { keyResultName, type ResultValue } from '../calc/types';
 import { findCalcMethod } from '../calc/registry';
 import { toDisplay, type UnitSystem } from '../units/units';
@@ -76,11 +78,6 @@ export interface ContentsEntry {
   anchor: string;
 }
 
-export interface ComplianceTable {
-  header: string[];
-  rows: string[][];
-}
-
 export interface ReportModel {
   title: string;
   subtitle: string;
@@ -98,6 +95,12 @@ export interface ReportModel {
   }[];
   estimates: EstimateSection[];
   compliance: ComplianceTable | null;
+  /** per limit, the verdict under its governing condition (page 1) */
+  verdicts: VerdictLine[];
+  /** per compliance row: how the verdict was reached, with the warnings of the runs behind it */
+  complianceDerivations: string[];
+  /** the rule every verdict follows, in words */
+  verdictRule: string;
   /** every cited source, once, in order of first citation */
   references: string[];
   cautions: string[];
@@ -176,6 +179,17 @@ function methodTexts(sources: readonly string[]): MethodText[] {
   });
 }
 
+/** Where an input came from, in words for the calc sheet. */
+function originText(e: EstimateOutcome, name: string): string {
+  const origin = e.origins?.[name];
+  if (origin === 'typed') return e.added ? 'derived from the near-field run it continues' : 'typed on this estimate';
+  if (origin === 'default') return "the method's default";
+  const from = [e.feature?.name, e.condition && `condition “${e.condition.name}”`].filter(Boolean).join(', ');
+  return e.added
+    ? `from the site${from ? `: ${from}` : ''}, run added for compliance`
+    : `from the site${from ? `: ${from}` : ''}`;
+}
+
 function section(e: EstimateOutcome, number: string, units: UnitSystem): EstimateSection {
   const method = findCalcMethod(e.method);
   const paramText = (n: string) => method?.params.find((p) => p.name === n)?.description ?? readableName(n);
@@ -190,7 +204,7 @@ function section(e: EstimateOutcome, number: string, units: UnitSystem): Estimat
     condition: e.condition?.name,
     status: e.status,
     error: e.error ?? e.incomplete,
-    inputs: quantities(e.inputs, paramText, units),
+    inputs: quantities(e.inputs, (n) => `${paramText(n)} (${originText(e, n)})`, units),
     results: quantities(e.results, resultText, units),
     methods: methodTexts(e.sources),
     warnings: e.warnings.map((w) => w.message),
@@ -206,44 +220,6 @@ function keyResult(s: EstimateSection, results: Record<string, ResultValue>): st
   const r = s.results.find((q) => q.name === key);
   if (!r) return '';
   return `${r.name} = ${r.shown}${r.shownUnit ? ' ' + r.shownUnit : ''}`;
-}
-
-function complianceTable(rows: readonly ComplianceRow[]): ComplianceTable | null {
-  if (rows.length === 0) return null;
-  const n = (x: number | null) => (x === null ? '—' : formatValue(x));
-  return {
-    header: [
-      'Feature',
-      'Condition',
-      'Constituent',
-      'Unit',
-      'Required dilution',
-      'Achieved dilution',
-      'Margin',
-      'Verdict',
-      'Note',
-    ],
-    rows: rows.map((r) => [
-      r.feature,
-      r.governing ? `${r.condition} (governs)` : r.condition,
-      `${r.constituent} (${r.zone})`,
-      prettyUnit(r.unit),
-      n(r.requiredDilution),
-      r.farFieldFactor === null
-        ? n(r.achievedDilution)
-        : `${n(r.nearFieldDilution)} × ${n(r.farFieldFactor)} = ${n(r.achievedDilution)}`,
-      r.margin === null ? '—' : `${formatValue(100 * r.margin, 3)} %`,
-      r.verdict,
-      [
-        r.effluent === null ? '' : `Ce ${n(r.effluent)}, Ca ${n(r.ambient)}, Cc ${n(r.criterion)}`,
-        r.boundary === null ? '' : `boundary ${n(r.boundary)} m`,
-        r.models,
-        r.note,
-      ]
-        .filter(Boolean)
-        .join('; '),
-    ]),
-  };
 }
 
 /** Builds the report model of an assessment in the given unit system. */
@@ -288,6 +264,9 @@ export function buildReportModel(a: Assessment, units: UnitSystem): ReportModel 
     })),
     estimates,
     compliance,
+    verdicts: verdictLines(a.compliance),
+    complianceDerivations: a.compliance.map((r) => derivation(r, a.estimates)),
+    verdictRule: VERDICT_RULE,
     references,
     cautions: [
       a.caution,

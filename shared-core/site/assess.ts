@@ -13,6 +13,9 @@ import { complianceEstimates, farFieldEstimates, siteCompliance, withRequiredDil
 import { assessConditions, type ConditionOutcome } from './conditions';
 import { bandsFromTyped, MONTE_CARLO_JCGM101, type UncertaintyResult } from '../uncertainty';
 
+/** Where an input of an estimate came from. */
+export type InputOrigin = 'typed' | 'site' | 'default';
+
 /**
  * The outcome of one estimate: what every view (cards, section, detail charts, compliance, report,
  * CSV/XLSX, bands) reads. `ok`: computed; `incomplete`: the computation stopped early (an integration at its
@@ -27,6 +30,8 @@ export interface EstimateOutcome {
   status: 'ok' | 'incomplete' | 'error';
   /** the arguments the method ran with, in SI */
   inputs: Record<string, ResultValue>;
+  /** where each input came from: typed on the estimate, taken from the site (feature, condition, profile), or the method's default */
+  origins: Record<string, InputOrigin>;
   results: Record<string, ResultValue>;
   warnings: Warning[];
   sources: string[];
@@ -162,6 +167,7 @@ export function runEstimate(
     method: e.method,
     title: e.title ?? method?.title ?? e.method,
     inputs: {},
+    origins: {},
     results: {},
     warnings: [] as Warning[],
     sources: [] as string[],
@@ -188,6 +194,12 @@ export function runEstimate(
     const raw = estimateArgs(method, ctx, e);
     const out = runCalc(method, raw);
     const inputs = describeInputs(method, resolveArgs(method, raw), ctx.condition?.name);
+    const origins = Object.fromEntries(
+      Object.keys(inputs).map((k): [string, InputOrigin] => [
+        k,
+        k in e.params ? 'typed' : raw[k] !== undefined ? 'site' : 'default',
+      ]),
+    );
     const warnings = uniqueWarnings([...(ctx.profile?.warnings ?? []), ...out.warnings]);
     const wantsBand = options.bands !== false && e.uncertainty && Object.keys(e.uncertainty).length > 0;
     const uncertainty = wantsBand
@@ -199,6 +211,7 @@ export function runEstimate(
       status: out.incomplete ? 'incomplete' : 'ok',
       ...(out.incomplete ? { incomplete: out.incomplete } : {}),
       inputs,
+      origins,
       results: out.results,
       warnings,
       sources: uncertainty ? [...out.sources, MONTE_CARLO_JCGM101.source] : out.sources,

@@ -100,7 +100,15 @@ function sectionBody(w: PdfWriter, s: EstimateSection, images: ReadonlyMap<strin
       w.text(`Source: ${m.source}`, { size: 8.5, indent: 10, color: MUTED, after: 5 });
     }
   }
-  if (s.status === 'ok') {
+  if (s.status === 'incomplete') {
+    w.text(`Incomplete, results partial: ${s.error ?? ''}`, {
+      size: 10,
+      bold: true,
+      color: rgb(0.6, 0.1, 0.1),
+      after: 6,
+    });
+  }
+  if (s.status !== 'error') {
     w.heading('Results', 2, 40);
     const short = s.results.filter((r) => typeof r.value === 'number' || r.shown.length <= LONG_TEXT);
     const long = s.results.filter((r) => !short.includes(r));
@@ -165,6 +173,27 @@ export async function buildPdf(
     9,
   );
   w.box(model.cautions[0]);
+  if (model.verdicts.length) {
+    w.heading('Mixing-zone compliance at a glance', 2, 60);
+    w.table(
+      [
+        { header: 'Outfall', width: 0.15 },
+        { header: 'Limit', width: 0.23 },
+        { header: 'Tightest condition', width: 0.17 },
+        { header: 'Required', width: 0.115, align: 'right' },
+        { header: 'Achieved', width: 0.115, align: 'right' },
+        { header: 'Margin', width: 0.09, align: 'right' },
+        { header: 'Verdict', width: 0.13 },
+      ],
+      model.verdicts.map((v) => [v.outfall, v.limit, v.condition, v.required, v.achieved, v.margin, v.verdict]),
+      8.5,
+    );
+    w.text(`Verdict rule: ${model.verdictRule} The derivation of every row is in the compliance section.`, {
+      size: 8,
+      color: MUTED,
+      after: 6,
+    });
+  }
   w.heading('Contents', 2, 40);
   const toc: { entry: ReportModel['contents'][number]; at: Reserved }[] = model.contents.map((entry) => ({
     entry,
@@ -208,6 +237,9 @@ export async function buildPdf(
       model.compliance.rows,
       8,
     );
+    w.text(`Verdict rule: ${model.verdictRule}`, { size: 8.5, after: 6 });
+    w.heading('Derivation of each verdict', 2, 40);
+    for (const d of model.complianceDerivations) w.text(d, { size: 8.5, indent: 12, bullet: '•', after: 4 });
   }
   startSection('references', `${entry('references').number}  References`);
   model.references.forEach((r, i) => w.text(r, { size: 8.5, indent: 26, bullet: `[${i + 1}]`, after: 3 }));

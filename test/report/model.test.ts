@@ -237,3 +237,36 @@ describe('uncertainty bands in the report model', () => {
     ).toBeUndefined();
   });
 });
+
+describe('the calc package traces every verdict', () => {
+  const m = buildReportModel(quillmere, 'si');
+
+  it('page 1 lists the verdict of each limit under its tightest condition', () => {
+    const limits = new Set(quillmere.compliance.map((r) => `${r.feature}|${r.constituent}|${r.zone}`));
+    expect(m.verdicts).toHaveLength(limits.size);
+    for (const v of m.verdicts) expect(['meets', 'does not meet', 'cannot tell']).toContain(v.verdict);
+    expect(m.verdictRule).toMatch(/20 %/);
+  });
+
+  it('each compliance row has its derivation: Ce, Ca, Cc, S required, the runs and their warnings', () => {
+    expect(m.complianceDerivations).toHaveLength(quillmere.compliance.length);
+    quillmere.compliance.forEach((r, i) => {
+      const d = m.complianceDerivations[i];
+      expect(d).toContain(`Ce = ${formatValue(r.effluent!)}`);
+      expect(d).toContain(`S required = (Ce − Ca)/(Cc − Ca) = ${formatValue(r.requiredDilution!)}`);
+      expect(d).toContain(r.estimate!);
+      const run = quillmere.estimates.find((o) => o.id === r.estimate)!;
+      for (const w of run.warnings) expect(d).toContain(w.message);
+    });
+  });
+
+  it('every input names its origin: typed, from the site, or the method default', () => {
+    const jet = m.estimates.find((s) => s.id === 'plume-summer')!;
+    expect(jet.inputs.find((q) => q.name === 'diameter')!.description).toMatch(
+      /from the site: Treatment works outfall/,
+    );
+    const added = m.estimates.find((s) => s.id.endsWith('far-field-chronic'))!;
+    expect(added.inputs.find((q) => q.name === 'width')!.description).toMatch(/derived from the near-field run/);
+    expect(added.inputs.find((q) => q.name === 'alpha')!.description).toMatch(/default/);
+  });
+});
