@@ -16,7 +16,7 @@ import {
   writeFileSync,
 } from 'node:fs';
 import { tmpdir } from 'node:os';
-import { join } from 'node:path';
+import { join, sep } from 'node:path';
 
 export interface HostileWorkspace {
   ws: string;
@@ -28,12 +28,13 @@ export interface HostileWorkspace {
   changed(): string[];
 }
 
-function fingerprint(path: string): string {
+/** Kind and content of an entry; a folder's listing counts only outside the workspace (saves inside may add files). */
+function fingerprint(path: string, ws: string): string {
   const st = lstatSync(path, { throwIfNoEntry: false });
   if (!st) return 'missing';
   if (st.isSymbolicLink()) return `link → ${readlinkSync(path)}`;
   if (st.isFIFO()) return 'pipe';
-  if (st.isDirectory()) return `folder: ${readdirSync(path).sort().join(',')}`;
+  if (st.isDirectory()) return path.startsWith(ws + sep) ? 'folder' : `folder: ${readdirSync(path).sort().join(',')}`;
   return `file ${createHash('sha256').update(readFileSync(path)).digest('hex')}`;
 }
 
@@ -61,7 +62,8 @@ export function hostileWorkspace(site: string, newerSite: string): HostileWorksp
   symlinkSync(join(ws, 'kept.gpsite'), join(ws, 'link-in.gpsite'));
   execFileSync('mkfifo', [join(ws, 'pipe.gpsite')]);
 
-  // watched: everything that no request may change (kept.gpsite, sub/inner.gpsite and link-in's target may be saved)
+  // watched: everything no request may change. Site files inside may be saved or created (kept.gpsite,
+  // sub/inner.gpsite, gone.gpsite — a save to it by name is legitimate and turns the dangling link into a good one)
   const watched = [
     outside,
     join(outside, 'secret.gpsite'),
@@ -73,19 +75,18 @@ export function hostileWorkspace(site: string, newerSite: string): HostileWorksp
     join(ws, 'link-out-dir'),
     join(ws, 'reports'),
     join(ws, 'dangling.gpsite'),
-    join(ws, 'gone.gpsite'),
     join(ws, 'link-in.gpsite'),
     join(ws, 'pipe.gpsite'),
     join(ws, 'folder.gpsite'),
   ];
-  let last = watched.map(fingerprint);
+  let last = watched.map((p) => fingerprint(p, ws));
   return {
     ws,
     outside,
     dataDir: join(root, 'data'),
     entries: [...new Set([...Object.keys(files), ...watched, join(ws, 'sub'), ws])],
     changed: () => {
-      const now = watched.map(fingerprint);
+      const now = watched.map((p) => fingerprint(p, ws));
       const changed = watched.filter((_p, i) => now[i] !== last[i]);
       last = now;
       return changed;
