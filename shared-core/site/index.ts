@@ -9,3 +9,4 @@ export type { ConditionOutcome } from './conditions';
 // reading a profile table as the document holds it (the workspace's CSV import)
 export { parseHeader, readCsvTable, type ProfileTable } from '../profile/csv';
 export type { ProfileIssue } from '../profile/profile';
+export { conditionsFromCsv } from './casts';
