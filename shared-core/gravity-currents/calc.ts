@@ -84,12 +84,14 @@ function frontReport(
   };
   if (arrival !== undefined) results.arrival_time = num(arrivalTime(pieces, arrival), 's');
   const horizon = Math.max(2 * time, arrival !== undefined ? 1.2 * arrivalTime(pieces, arrival) : 0);
+  // a point source has no front at t = 0 (its speed is unbounded there): its curves start one step later
+  const skip = pieces[0].xStart === 0 && pieces[0].m > 0 ? 1 : 0;
   return {
     results,
     series: frontSeriesCharts(
       sampleFront(
         pieces,
-        Array.from({ length: 121 }, (_, i) => (horizon * i) / 120),
+        Array.from({ length: 121 - skip }, (_, i) => (horizon * (i + skip)) / 120),
         [],
         [],
       ),

@@ -207,3 +207,14 @@ describe('release charts', () => {
     expect(out.series?.map((s) => s.kind)).toEqual(['front-position', 'front-speed']);
   });
 });
+
+describe('flux-release from a point source (axisymmetric)', () => {
+  it('computes through the calc method: its chart starts after t = 0, where a point source has no front', () => {
+    const method = gravityCurrentCalcMethods.find((m) => m.id === 'flux-release')!;
+    const out = runCalc(method, { geometry: 'axisymmetric', g_prime: 0.1, flux: 0.01, time: 600 });
+    expect(out.results.front_position.value).toBeGreaterThan(0);
+    const position = out.series!.find((s) => s.kind === 'front-position')!;
+    expect(position.x.values[0]).toBeGreaterThan(0);
+    expect(position.y.every((y) => y.values.every(Number.isFinite))).toBe(true);
+  });
+});
