@@ -21,6 +21,12 @@ export interface MethodInfo {
   /** the equation in words or symbols, for the calc sheet */
   equation: string;
   validity: Record<string, ValidityRange>;
+  /**
+   * how the coefficients and the form were obtained, when not checked against the original publication
+   * (e.g. "coefficient as quoted in …; not compared with the original"): printed in the report's
+   * verification appendix, so that `source` stays a clean bibliographic reference
+   */
+  provenance?: string;
 }
 
 /** A scalar result: value in SI, unit, the method that made it and its warnings. */

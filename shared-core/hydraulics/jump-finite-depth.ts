@@ -30,12 +30,14 @@ export const INTERNAL_JUMP_FINITE_DEPTH: MethodInfo = {
     'Wood, I.R., Simpson, J.E. (1984). Jumps in layered miscible fluids. J. Fluid Mech. 140, 329–342, and Klemp, J.B., Rotunno, R., ' +
     'Skamarock, W.C. (1997). On the propagation of internal bores. J. Fluid Mech. 331, 81–106 (total momentum with energy conserved in ' +
     'the contracting layer); comparison closure: Yih, C.-S., Guha, C.R. (1955). Hydraulic jump in a fluid system of two layers. Tellus 7, ' +
-    '358–366 (layer momentum, interfacial pressure linear across the jump; attribution from memory); long-wave stability (Δu)² < g′D: ' +
+    '358–366 (layer momentum, interfacial pressure linear across the jump); long-wave stability (Δu)² < g′D: ' +
     'Long, R.R. (1956). Long waves in a two-fluid system. J. Meteorol. 13, 70–74.',
   equation:
     'g′y²/2 + q²/y + q_u²(D − 2y)/(2(D − y)²) equal on both sides (q_u = −q by default); head loss = drop of the lower-layer ' +
     'Bernoulli head P/(ρg′) + y + q²/(2g′y²); subcritical conjugate only; limit: it reaches the second critical thickness (G² = 1)',
   validity: {},
+  provenance:
+    'The attribution of the comparison closure (layer momentum) to Yih & Guha (1955) was not compared with the original paper.',
 };
 
 export interface FiniteDepthJump {

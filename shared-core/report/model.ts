@@ -7,6 +7,7 @@ import { toDisplay, type UnitSystem } from '../units/units';
 import { chartSpecs, type ChartSpec } from './charts';
 import { formatValue, prettyUnit, readableName } from './format';
 import { methodsForSource } from './methods';
+import { verificationEntries, type VerificationEntry } from './verification';
 
 /**
  * The one report model: everything a calc sheet, a spreadsheet or a chart export shows, built from an
@@ -101,6 +102,8 @@ export interface ReportModel {
   complianceDerivations: string[];
   /** the rule every verdict follows, in words */
   verdictRule: string;
+  /** for each method used: the external checks it passes and how its coefficients were obtained */
+  verification: VerificationEntry[];
   /** every cited source, once, in order of first citation */
   references: string[];
   cautions: string[];
@@ -232,6 +235,7 @@ export function buildReportModel(a: Assessment, units: UnitSystem): ReportModel 
     { number: '1', title: 'Summary of estimates', anchor: 'summary' },
     ...estimates.map((s) => ({ number: s.number, title: `${s.title} (${s.id})`, anchor: s.id })),
     ...(compliance ? [{ number: String(next++), title: 'Mixing-zone compliance', anchor: 'compliance' }] : []),
+    { number: String(next++), title: 'Verification of the methods', anchor: 'verification' },
     { number: String(next++), title: 'References', anchor: 'references' },
     { number: String(next), title: 'Cautions', anchor: 'cautions' },
   ];
@@ -267,6 +271,7 @@ export function buildReportModel(a: Assessment, units: UnitSystem): ReportModel 
     verdicts: verdictLines(a.compliance),
     complianceDerivations: a.compliance.map((r) => derivation(r, a.estimates)),
     verdictRule: VERDICT_RULE,
+    verification: verificationEntries(references),
     references,
     cautions: [
       a.caution,

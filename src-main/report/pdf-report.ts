@@ -241,6 +241,18 @@ export async function buildPdf(
     w.heading('Derivation of each verdict', 2, 40);
     for (const d of model.complianceDerivations) w.text(d, { size: 8.5, indent: 12, bullet: '•', after: 4 });
   }
+  startSection('verification', `${entry('verification').number}  Verification of the methods`);
+  w.text(
+    'Each method below is tested against the external references listed, with the number of cases and the accepted difference; the tests run with every build of gprime.',
+    { size: 9, after: 6 },
+  );
+  for (const v of model.verification) {
+    w.text(v.method, { size: 9.5, bold: true, after: 2 });
+    if (!v.checks.length) w.text('No external check recorded.', { size: 8.5, indent: 12, after: 2 });
+    for (const c of v.checks) w.text(c, { size: 8.5, indent: 12, bullet: '•', after: 2 });
+    if (v.provenance) w.text(`Note: ${v.provenance}`, { size: 8.5, indent: 12, color: MUTED, after: 2 });
+    w.text('', { size: 4, after: 3 });
+  }
   startSection('references', `${entry('references').number}  References`);
   model.references.forEach((r, i) => w.text(r, { size: 8.5, indent: 26, bullet: `[${i + 1}]`, after: 3 }));
   startSection('cautions', `${entry('cautions').number}  Cautions`);
