@@ -124,10 +124,12 @@ describe('copying from the estimate detail', () => {
     const shown = Number(
       (await detail().locator('[data-name="max_rise"] [data-testid="reading-value"]').first().textContent())!.trim(),
     );
-    expect(rows.find((r) => r[0] === 'max rise')).toEqual(['max rise', String(shown), 'm']);
-    expect(rows.find((r) => r[0] === 'port depth')?.slice(1)).toEqual(['20', 'm']);
+    // rows are labelled in the workspace's words, as on screen
+    expect(rows.find((r) => r[0] === 'Maximum rise above the port')?.slice(1)).toEqual([String(shown), 'm']);
+    expect(rows.find((r) => r[0] === 'Port depth')?.slice(1)).toEqual(['20', 'm']);
     expect(rows.some((r) => r[0] === 'caution' && r[1].startsWith('Screening estimate only'))).toBe(true);
-    expect(rows.some((r) => r[0] === 'method' && r[1].startsWith('buoyant-jet'))).toBe(true);
+    expect(rows.some((r) => r[0] === 'method' && r[1].startsWith('Round buoyant jet'))).toBe(true);
+    expect(rows.flat().filter((c) => /\b[a-z]{2,}_[a-z]{2,}/.test(c))).toEqual([]);
     await detail().getByRole('button', { name: 'Close' }).click();
   });
 
@@ -144,7 +146,7 @@ describe('copying from the estimate detail', () => {
     const rows = String(await page.evaluate('navigator.clipboard.readText()'))
       .split('\n')
       .map((l) => l.split('\t'));
-    const port = rows.find((r) => r[0] === 'port depth')!;
+    const port = rows.find((r) => r[0] === 'Port depth')!;
     expect(port[2]).toBe('ft');
     // the demo's port is 20 m deep: 20 / 0.3048 = 65.62 ft, shown to four digits
     expect(Math.abs(Number(port[1]) - 20 / FOOT)).toBeLessThan(0.005);

@@ -1,5 +1,6 @@
 import type { ResultBand, UncertaintyResult } from '../../../shared-core/uncertainty';
 import type { UnitSystem } from '../../../shared-core/units/units';
+import { namesAsWords } from './messages';
 import { formatNumber, prettyUnit, safeDisplay, showQuantity, words } from './format';
 
 /** A spread (a difference, e.g. a standard uncertainty) in display units: °F converts without its offset. */
@@ -26,21 +27,26 @@ export function bandLine(r: UncertaintyResult, b: ResultBand, system: UnitSystem
 }
 
 /** Tab-separated rows of a band for the "Copy table" text. */
-export function bandTableRows(r: UncertaintyResult, system: UnitSystem, inputUnit: (name: string) => string): string[] {
+export function bandTableRows(
+  r: UncertaintyResult,
+  system: UnitSystem,
+  inputUnit: (name: string) => string,
+  method?: string,
+): string[] {
   const head = [`${coverageText(r)} band`, 'low', 'median', 'high', 'unit'].join('\t');
   const rows = r.bands.map((b) => {
     const v = bandValues(b, system);
-    return [words(b.name), v.low, v.median, v.high, v.unit].join('\t');
+    return [words(b.name, method, 'result'), v.low, v.median, v.high, v.unit].join('\t');
   });
   const inputs = r.inputs.map((i) => {
     const s = showSpread(i.standardUncertainty, inputUnit(i.name), system);
-    return [`± ${words(i.name)} (one standard deviation)`, s.text, s.unit].join('\t');
+    return [`± ${words(i.name, method, 'input')} (one standard deviation)`, s.text, s.unit].join('\t');
   });
   return [
     head,
     ...rows,
     ...inputs,
-    ...r.warnings.map((w) => ['band warning', w.message.replace(/[\t\r\n]+/g, ' ')].join('\t')),
+    ...r.warnings.map((w) => ['band warning', namesAsWords(w.message, method).replace(/[\t\r\n]+/g, ' ')].join('\t')),
   ];
 }
 

@@ -1,3 +1,4 @@
+import { nameText } from '../../../shared-core/core/vocabulary';
 import { displayUnit, toDisplay, type UnitSystem } from '../../../shared-core/units/units';
 
 /** Unit names as people read them (m3/s → m³/s, degC → °C). Display only. */
@@ -53,7 +54,7 @@ export function shownUnit(siUnit: string, system: UnitSystem): string {
   return prettyUnit(displayUnit(siUnit, system));
 }
 
-/** Underscored result names as words: "max_rise" → "max rise". */
-export function words(name: string): string {
-  return name.replace(/_/g, ' ');
+/** A parameter or result name as people read it ("l_q" → "Jet length scale L_Q (Q/√M)"), from the one vocabulary. */
+export function words(name: string, method?: string, role?: 'input' | 'result'): string {
+  return nameText(name, method, role);
 }

@@ -5,15 +5,22 @@ import { SCREENING_CAUTION } from '../../../shared-core/core/caution';
 import type { UncertaintyResult } from '../../../shared-core/uncertainty';
 import { showQuantity, words } from './format';
 import { BAND_NOTE, bandTableRows } from './band-text';
+import { namesAsWords } from './messages';
 
 /** Tabs and line breaks would split a spreadsheet cell: they become spaces. */
 const cell = (s: string): string => s.replace(/[\t\r\n]+/g, ' ').trim();
 
-function rows(values: Record<string, ResultValue>, system: UnitSystem): string[] {
+function rows(
+  values: Record<string, ResultValue>,
+  system: UnitSystem,
+  method: string,
+  role: 'input' | 'result',
+): string[] {
   return Object.entries(values).map(([name, v]) => {
-    if (typeof v.value !== 'number') return [words(name), cell(v.value), ''].join('\t');
+    const label = words(name, method, role);
+    if (typeof v.value !== 'number') return [label, cell(v.value), ''].join('\t');
     const shown = showQuantity(v.value, v.unit, system);
-    return [words(name), shown.text, shown.unit].map(cell).join('\t');
+    return [label, shown.text, shown.unit].map(cell).join('\t');
   });
 }
 
@@ -33,19 +40,20 @@ export function resultsTableText(
   const lines = [
     [cell(o.title), cell(where)].join('\t'),
     ['result', 'value', 'unit'].join('\t'),
-    ...rows(o.results, system),
+    ...rows(o.results, system, o.method, 'result'),
   ];
-  if (o.status === 'error') lines.push(['cannot compute', cell(o.error ?? '')].join('\t'));
-  if (o.status === 'incomplete') lines.push(['incomplete', cell(o.incomplete ?? '')].join('\t'));
-  lines.push('', ['input', 'value', 'unit'].join('\t'), ...rows(o.inputs, system), '');
+  if (o.status === 'error') lines.push(['cannot compute', cell(namesAsWords(o.error ?? '', o.method))].join('\t'));
+  if (o.status === 'incomplete')
+    lines.push(['incomplete', cell(namesAsWords(o.incomplete ?? '', o.method))].join('\t'));
+  lines.push('', ['input', 'value', 'unit'].join('\t'), ...rows(o.inputs, system, o.method, 'input'), '');
   if (band)
     lines.push(
-      ...bandTableRows(band, system, (name) => o.inputs[name]?.unit ?? '1'),
+      ...bandTableRows(band, system, (name) => o.inputs[name]?.unit ?? '1', o.method),
       ['band note', BAND_NOTE].join('\t'),
       '',
     );
-  lines.push(...o.warnings.map((w) => ['warning', cell(w.message)].join('\t')));
-  lines.push(['method', cell(methodTitle ? `${o.method}: ${methodTitle}` : o.method)].join('\t'));
+  lines.push(...o.warnings.map((w) => ['warning', cell(namesAsWords(w.message, o.method))].join('\t')));
+  lines.push(['method', cell(methodTitle || o.method)].join('\t'));
   lines.push(...o.sources.map((s) => ['source', cell(s)].join('\t')));
   lines.push(['caution', SCREENING_CAUTION].join('\t'));
   return `${lines.join('\n')}\n`;

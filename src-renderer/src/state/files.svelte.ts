@@ -48,9 +48,7 @@ export class FileActions {
 
   newSite(): void {
     if (!this.confirmDiscard()) return;
-    this.ws.doc.replace(blankSite(), null, true);
-    this.ws.selection = { kind: 'waterBody' };
-    this.ws.conditionChoice = null;
+    this.ws.replaceDocument(blankSite(), null, true);
     this.ws.say('New site. Describe the water body, paste or import a profile, then add features.');
   }
 

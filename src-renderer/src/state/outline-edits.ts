@@ -22,6 +22,7 @@ export function addFeature(ws: Workspace, kind: FeatureKind): void {
   ws.doc.change((d) => {
     const f = blankFeature(kind, id, depth);
     f.name = `${KIND_WORDS[kind]} ${d.features.filter((x) => x.kind === kind).length + 1}`;
+    ws.addedFeatures = new Map([...ws.addedFeatures, [id, structuredClone(f)]]);
     d.features.push(f);
     d.estimates.push(...suggestedEstimates(kind, id, conditionId, taken));
   });

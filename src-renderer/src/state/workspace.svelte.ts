@@ -1,5 +1,6 @@
-import { loadSite, SiteFileError, type Assessment } from '../../../shared-core/site';
+import { loadSite, SiteFileError, type Assessment, type Site } from '../../../shared-core/site';
 import type { UnitSystem } from '../../../shared-core/units/units';
+import type { Feature } from '../../../shared-core/site/schema';
 import { drawEstimate, type EstimateDrawing } from '../lib/estimate-curves';
 import { SiteDocument } from './document.svelte';
 import { BandStore } from './bands.svelte';
@@ -28,8 +29,12 @@ export class Workspace {
   /** the estimate whose detail is open */
   detailId = $state<string | null>(null);
   notice = $state<Notice | null>(null);
+  /** features added in this session, as added: their results say they rest on starting values until replaced */
+  addedFeatures = $state.raw(new Map<string, Feature>());
 
-  units: UnitSystem = $derived(this.doc.site.units);
+  /** the unit system chosen in this session: a view setting (no edit, no undo step); null follows the file */
+  private unitChoice = $state<UnitSystem | null>(null);
+  units: UnitSystem = $derived(this.unitChoice ?? this.doc.site.units);
   conditionId = $derived.by(() => {
     const ids = this.doc.site.conditions.map((c) => c.id);
     return this.conditionChoice && ids.includes(this.conditionChoice) ? this.conditionChoice : ids[0];
@@ -48,24 +53,29 @@ export class Workspace {
     this.notice = { tone, text };
   }
 
+  /** Shows every number in SI or US units; the document is not changed (the file keeps the units it opens in). */
   setUnits(system: UnitSystem): void {
-    if (system !== this.units)
-      this.doc.change((d) => {
-        d.units = system;
-      });
+    this.unitChoice = system;
+  }
+
+  /** Replaces the open document (new, open, recover) and shows it as it opens: its own units, nothing selected. */
+  replaceDocument(site: Site, path: string | null, saved: boolean): void {
+    this.doc.replace(site, path, saved);
+    this.unitChoice = null;
+    this.addedFeatures = new Map();
+    this.selection = { kind: 'waterBody' };
+    this.conditionChoice = null;
+    this.detailId = null;
   }
 
   /** Opens a site from its text; a malformed or newer file is refused with the place named. */
   openText(text: string, path: string | null, saved = true): boolean {
     try {
-      const site = loadSite(text);
-      this.doc.replace(site, path, saved);
-      this.selection = { kind: 'waterBody' };
-      this.conditionChoice = null;
-      this.detailId = null;
+      this.replaceDocument(loadSite(text), path, saved);
       return true;
     } catch (e) {
-      this.say(e instanceof SiteFileError ? `Cannot open ${path ?? 'the file'}: ${e.message}` : String(e), 'error');
+      const why = e instanceof SiteFileError ? e.message : 'it is not a gprime site file';
+      this.say(`Cannot open ${path ?? 'the file'}: ${why}`, 'error');
       return false;
     }
   }
