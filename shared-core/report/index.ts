@@ -4,3 +4,4 @@ export * from './format';
 export { METHOD_CATALOGUE, methodsForSource } from './methods';
 export * from './compliance';
 export * from './verification';
+export * from './inputs';

@@ -8,6 +8,8 @@ import { chartSpecs, type ChartSpec } from './charts';
 import { formatValue, prettyUnit, readableName } from './format';
 import { methodsForSource } from './methods';
 import { verificationEntries, type VerificationEntry } from './verification';
+import { siteInputs, type InputLine } from './inputs';
+import type { Site } from '../site/schema';
 
 /**
  * The one report model: everything a calc sheet, a spreadsheet or a chart export shows, built from an
@@ -102,6 +104,8 @@ export interface ReportModel {
   complianceDerivations: string[];
   /** the rule every verdict follows, in words */
   verdictRule: string;
+  /** every quantity of the site document as entered, in SI and in display units (empty without the site) */
+  inputs: InputLine[];
   /** for each method used: the external checks it passes and how its coefficients were obtained */
   verification: VerificationEntry[];
   /** every cited source, once, in order of first citation */
@@ -226,7 +230,7 @@ function keyResult(s: EstimateSection, results: Record<string, ResultValue>): st
 }
 
 /** Builds the report model of an assessment in the given unit system. */
-export function buildReportModel(a: Assessment, units: UnitSystem): ReportModel {
+export function buildReportModel(a: Assessment, units: UnitSystem, site?: Site): ReportModel {
   const estimates = a.estimates.map((e, i) => section(e, String(i + 2), units));
   const compliance = complianceTable(a.compliance);
   const references = [...new Set(a.estimates.flatMap((e) => e.sources))];
@@ -235,6 +239,7 @@ export function buildReportModel(a: Assessment, units: UnitSystem): ReportModel 
     { number: '1', title: 'Summary of estimates', anchor: 'summary' },
     ...estimates.map((s) => ({ number: s.number, title: `${s.title} (${s.id})`, anchor: s.id })),
     ...(compliance ? [{ number: String(next++), title: 'Mixing-zone compliance', anchor: 'compliance' }] : []),
+    ...(site ? [{ number: String(next++), title: 'Site inputs as entered', anchor: 'inputs' }] : []),
     { number: String(next++), title: 'Verification of the methods', anchor: 'verification' },
     { number: String(next++), title: 'References', anchor: 'references' },
     { number: String(next), title: 'Cautions', anchor: 'cautions' },
@@ -272,6 +277,7 @@ export function buildReportModel(a: Assessment, units: UnitSystem): ReportModel 
     complianceDerivations: a.compliance.map((r) => derivation(r, a.estimates)),
     verdictRule: VERDICT_RULE,
     verification: verificationEntries(references),
+    inputs: site ? siteInputs(site, units) : [],
     references,
     cautions: [
       a.caution,

@@ -241,6 +241,24 @@ export async function buildPdf(
     w.heading('Derivation of each verdict', 2, 40);
     for (const d of model.complianceDerivations) w.text(d, { size: 8.5, indent: 12, bullet: '•', after: 4 });
   }
+  if (model.inputs.length) {
+    startSection('inputs', `${entry('inputs').number}  Site inputs as entered`);
+    w.text('Every quantity of the site file as typed, its SI value and its value in the display units.', {
+      size: 9,
+      after: 6,
+    });
+    w.table(
+      [
+        { header: 'Belongs to', width: 0.24 },
+        { header: 'Field', width: 0.22 },
+        { header: 'As entered', width: 0.26 },
+        { header: 'SI', width: 0.14, align: 'right' },
+        { header: 'Shown', width: 0.14, align: 'right' },
+      ],
+      model.inputs.map((i) => [i.owner, i.field, i.typed, i.si, i.shown]),
+      8,
+    );
+  }
   startSection('verification', `${entry('verification').number}  Verification of the methods`);
   w.text(
     'Each method below is tested against the external references listed, with the number of cases and the accepted difference; the tests run with every build of gprime.',

@@ -91,7 +91,7 @@ export async function writeReport(
   options: ReportOptions,
 ): Promise<string[]> {
   const formats = checkFormats(options.formats);
-  const model = buildReportModel(assessment, options.units);
+  const model = buildReportModel(assessment, options.units, loaded.site);
   const stem = slug(basename(loaded.path, extname(loaded.path)) || loaded.site.project.site);
   const files = await renderReport(model, formats, stem, loaded.site.project.date, options.chart);
   mkdirSync(options.outDir, { recursive: true });

@@ -109,7 +109,7 @@ describe('uncertainty bands in the workspace', () => {
     expect(rows).toContainEqual(['90 % band', 'low', 'median', 'high', 'unit']);
     expect(
       rows
-        .find((r) => r[0] === 'plunge depth' && r.length === 5)
+        .find((r) => r[0] === 'Plunge depth h_p' && r.length === 5)
         ?.slice(1)
         .map(Number),
     ).toEqual([low, median, high, NaN]);
