@@ -1,8 +1,15 @@
-import type { Warning } from '../core/warning';
+import { formatNumber } from '../core/errors';
+import { caution, type Warning } from '../core/warning';
 import type { OdeStatus } from '../numerics/ode';
 import { interpolateAt } from '../profile/profile';
 import type { AmbientWater, Current } from './ambient';
-import { CENTRELINE_TO_AVERAGE } from './closure';
+import { centrelineToAverage } from './closure';
+import {
+  chooseDenseJetDilution,
+  denseJetLabCorrelations,
+  type DenseJetDilution,
+  type DenseJetDilutionChoice,
+} from './dense-jet-lab';
 import { jetLocalInto, newJetLocal } from './equations';
 import type { JetLengthScales } from './length-scales';
 import { describeOutcome, pathWarnings, type JetOutcome } from './outcome';
@@ -30,8 +37,10 @@ export interface BuoyantJetInput {
   bedDepth?: number;
   /** port spacing of a multiport diffuser [m]: neighbouring plumes merge when the width reaches it */
   portSpacing?: number;
-  /** longest path to follow [m] (default max(100 D, 50 port depth)) */
+  /** longest path to follow [m] (default JET_DEFAULT_MAX_PATH, or 100 D or 50 port depths when longer) */
   maxPath?: number;
+  /** a dense jet's return-point dilution for compliance (default 'cautious': the smaller of model and laboratory) */
+  denseJetDilution?: DenseJetDilutionChoice;
   /** step attempts allowed per integrated segment (default JET_MAX_STEPS); beyond it the status is 'max-steps' */
   maxSteps?: number;
 }
@@ -113,6 +122,8 @@ export interface JetTrajectory {
   /** the highest centreline point [m above the port] */
   maxRise: number;
   scales: JetLengthScales;
+  /** a dense jet's laboratory values and the return-point dilution chosen for compliance (when it returns to port level) */
+  denseJet?: DenseJetDilution;
   warnings: Warning[];
 }
 
@@ -126,17 +137,40 @@ export interface JetTrajectory {
  */
 export function buoyantJetTrajectory(input: BuoyantJetInput): JetTrajectory {
   const run = prepareJetRun(input);
-  return assembleTrajectory(
+  const t = assembleTrajectory(
     run,
     [traceStretch(run, { geometry: 'round', start: run.start, sStart: 0 })],
     input.ambient,
   );
+  return withDenseJetLab(t, run, input.denseJetDilution ?? 'cautious');
+}
+
+/** A dense jet that returns to port level, with the laboratory correlations and the chosen return dilution added. */
+function withDenseJetLab(t: JetTrajectory, run: JetRun, choice: DenseJetDilutionChoice): JetTrajectory {
+  const ret = t.events.find((e) => e.kind === 'return to port level');
+  if (run.rhoE <= run.rhoRef || !ret) return t;
+  const lab = denseJetLabCorrelations(run.angleDeg, run.scales.froude, run.D, run.portCurrent);
+  const denseJet = chooseDenseJetDilution(choice, ret, lab);
+  // the correlations' validity concerns the estimate only where their dilution is the one used
+  const labWarnings = (lab?.warnings ?? []).map((w) =>
+    denseJet.factor === 1 ? { ...w, severity: 'note' as const } : w,
+  );
+  const warnings = [...t.warnings, ...labWarnings, ...denseJet.warnings];
+  if (lab?.maxRise !== undefined && lab.maxRise >= run.H)
+    warnings.push(
+      caution(
+        'dense-jet-lab-reaches-surface',
+        `Laboratory jets of this Froude number rise ${formatNumber(Number(lab.maxRise.toPrecision(3)))} m, as far as the surface ${formatNumber(run.H)} m above the port: the jet may strike the surface, where neither the model nor the correlations apply.`,
+        'port_depth',
+      ),
+    );
+  return { ...t, denseJet, warnings };
 }
 
 /**
  * Joins stretches (a round jet, then possibly a merged plane plume) into one trajectory: path columns, events, outcome
  * and warnings. Dilution refers to each stretch's own reference flux (Q0, or Q0/spacing per unit length), so it is
- * continuous where plumes merge. After merging the round-plume centreline/average ratio is kept (see DIFFUSER_PLUME).
+ * continuous where plumes merge; the centreline dilution takes the ratio of each stretch's geometry (round, then plane).
  */
 export function assembleTrajectory(run: JetRun, stretches: readonly Stretch[], ambient: AmbientWater): JetTrajectory {
   const { H, tE, tRef } = run;
@@ -172,7 +206,7 @@ export function assembleTrajectory(run: JetRun, stretches: readonly Stretch[], a
       depth: H - z,
       horizontalDistance: Math.hypot(x, y),
       radius: L.b,
-      dilutionCentreline: Math.max(1, Sa * CENTRELINE_TO_AVERAGE),
+      dilutionCentreline: Math.max(1, Sa * centrelineToAverage(st.geometry)),
       dilutionAverage: Sa,
     };
   };
@@ -222,6 +256,7 @@ export function assembleTrajectory(run: JetRun, stretches: readonly Stretch[], a
       profileBottom: profileBottom(ambient),
       portDepth: H,
       merged: stretches.some((st) => st.geometry === 'plane'),
+      pathLength: run.sMax,
     }),
   ];
   const evaluations = stretches.reduce((n, st) => n + st.evaluations, 0);

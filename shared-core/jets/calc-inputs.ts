@@ -27,6 +27,7 @@ export function buoyantJetInputFromArgs(a: CalcArgs): BuoyantJetInput {
     effluentDensity: arg.num(a, 'effluent_density'),
     ambient: profile ? { kind: 'profile', profile } : { kind: 'uniform', density: rhoA as number },
     current: arg.num(a, 'current'),
+    maxPath: arg.optNum(a, 'max_path_length'),
   };
   return input;
 }
@@ -115,8 +116,17 @@ export const jetPortParams: ParamSpec[] = [
     kind: 'number',
     name: 'current',
     unit: 'm/s',
-    description: 'current speed, taken along the jet direction (co-flowing: the lower, cautious near-field dilution)',
+    description:
+      'current speed (buoyant-jet: at current_angle to the jet, by default with it, the cautious case; diffuser-plume: with each port)',
     default: 0,
     range: { ...nonNegative, max: 10 },
+  },
+  {
+    kind: 'number',
+    name: 'max_path_length',
+    unit: 'm',
+    description: 'longest centreline path followed (default 10 km, or 100 diameters or 50 port depths when longer)',
+    optional: true,
+    range: { ...positive, max: 1e6 },
   },
 ];

@@ -3,14 +3,16 @@ import { arg, type CalcArgs, type CalcMethod, type CalcOutput } from '../calc/ty
 import { positive, nonNegative } from '../core/range';
 import { JET_LENGTH_SCALES, jetLengthScales } from './length-scales';
 import { BUOYANT_JET } from './closure';
-import { buoyantJetTrajectory, JET_PATH_COLUMNS, type JetTrajectory } from './buoyant-jet';
-import { buoyantJetInputFromArgs, diffuserInputFromArgs, jetPathSeries, jetPortParams } from './calc-inputs';
-import { LINE_PLUME_RSB1989, linePlumeRobertsSnyderBaumgartner1989 } from './line-plume';
+import { JET_PATH_COLUMNS } from './buoyant-jet';
+import { buoyantJetCalcMethod, incompleteOf } from './buoyant-jet-calc';
+import { diffuserInputFromArgs, jetPathSeries, jetPortParams } from './calc-inputs';
+import { LINE_PLUME_RSB1989, linePlume } from './line-plume';
 import { DIFFUSER_PLUME, diffuserPlume } from './diffuser';
 import { REQUIRED_DILUTION, requiredDilution } from '../mixing-zone/required-dilution';
 import type { ResultValue, Series } from '../calc/types';
 
 export { buoyantJetInputFromArgs, diffuserInputFromArgs, jetPathSeries } from './calc-inputs';
+export { incompleteOf } from './buoyant-jet-calc';
 
 const lengthScaleResults = [
   ['l_q', 'lQ', 'Q/√M: distance over which the port geometry matters'],
@@ -20,37 +22,6 @@ const lengthScaleResults = [
   ['l_strat_momentum', 'lStratMomentum', '(M/N²)^¼: stratification scale of a jet'],
   ['l_strat_buoyancy', 'lStratBuoyancy', '(|B|/N³)^¼: stratification scale of a plume'],
 ] as const;
-
-/** Runs the buoyant-jet model for the CLI and reports the headline results. */
-function runBuoyantJet(a: CalcArgs): CalcOutput {
-  const t = buoyantJetTrajectory(buoyantJetInputFromArgs(a));
-  const results: Record<string, ResultValue> = { max_rise: num(t.maxRise, 'm') };
-  const ev = (k: string) => t.events.find((e) => e.kind === k);
-  const ret = ev('return to port level');
-  if (ret) {
-    results.return_distance = num(ret.horizontalDistance, 'm');
-    results.return_dilution = num(ret.dilutionCentreline, '1');
-  }
-  const neutral = ev('neutral buoyancy');
-  if (t.outcome === 'trapped' && neutral) results.trap_height = num(neutral.z, 'm');
-  const surf = ev('surface contact');
-  if (t.outcome === 'surfaces' && surf) results.surface_dilution = num(surf.dilutionCentreline, '1');
-  results.outcome = text(t.outcomeText);
-  return {
-    results,
-    warnings: t.warnings,
-    sources: [BUOYANT_JET.source],
-    series: jetPathSeries(t),
-    model: { kind: 'jet', trajectory: t },
-    ...incompleteOf(t),
-  };
-}
-
-/** `incomplete` for a CalcOutput when a path integration stopped early (step limit or failed step). */
-export function incompleteOf(...paths: JetTrajectory[]): { incomplete?: string } {
-  const stopped = paths.find((t) => t.status === 'max-steps' || t.status === 'step-failed');
-  return stopped ? { incomplete: stopped.message } : {};
-}
 
 /** Runs the merged-diffuser model for the CLI: regime, merging point, rise and governing dilution. */
 function runDiffuserPlume(a: CalcArgs): CalcOutput {
@@ -154,25 +125,7 @@ export const jetCalcMethods: CalcMethod[] = [
       return { results, warnings: r.warnings, sources: [JET_LENGTH_SCALES.source] };
     },
   },
-  {
-    id: 'buoyant-jet',
-    title: BUOYANT_JET.title,
-    topic: 'jets',
-    params: jetPortParams,
-    results: [
-      { name: 'max_rise', unit: 'm', description: 'highest centreline point above the port' },
-      {
-        name: 'return_distance',
-        unit: 'm',
-        description: 'horizontal distance where the centreline falls back to port level (dense jets)',
-      },
-      { name: 'return_dilution', unit: '1', description: 'centreline dilution at the return point' },
-      { name: 'trap_height', unit: 'm', description: 'height above the port of neutral buoyancy, when trapped' },
-      { name: 'surface_dilution', unit: '1', description: 'centreline dilution where the plume reaches the surface' },
-      { name: 'outcome', unit: '', description: 'how the near field ends, in words' },
-    ],
-    run: (a) => runBuoyantJet(a),
-  },
+  buoyantJetCalcMethod,
   {
     id: 'diffuser-plume',
     title: DIFFUSER_PLUME.title,
@@ -266,8 +219,16 @@ export const jetCalcMethods: CalcMethod[] = [
         kind: 'number',
         name: 'buoyancy_frequency',
         unit: '1/s',
-        description: 'buoyancy frequency N of the linear stratification',
-        range: { ...positive, max: 2 },
+        description: 'buoyancy frequency N of the linear stratification (0: unstratified water, give water_depth)',
+        range: { ...nonNegative, max: 2 },
+      },
+      {
+        kind: 'number',
+        name: 'water_depth',
+        unit: 'm',
+        description: 'height of the water surface above the diffuser (needed when buoyancy_frequency = 0)',
+        optional: true,
+        range: { ...positive, max: 11000 },
       },
       {
         kind: 'number',
@@ -283,11 +244,12 @@ export const jetCalcMethods: CalcMethod[] = [
       { name: 'dilution', unit: '1', description: 'minimum dilution at the end of the near field' },
     ],
     run(a) {
-      const r = linePlumeRobertsSnyderBaumgartner1989(
+      const r = linePlume(
         arg.num(a, 'discharge_per_length'),
         arg.num(a, 'g_prime'),
         arg.num(a, 'buoyancy_frequency'),
         arg.num(a, 'current'),
+        arg.optNum(a, 'water_depth'),
       );
       return {
         results: { rise_height: num(r.riseHeight, 'm'), dilution: num(r.dilution, '1') },

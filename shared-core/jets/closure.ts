@@ -37,8 +37,21 @@ export const RICHARDSON_PLANE_PLUME = PLANE_ENTRAINMENT.alphaPlume;
 /** Jet geometry: a round jet from one port, or a plane (line) plume per unit length of a diffuser after its plumes merge. */
 export type JetGeometry = 'round' | 'plane';
 
-/** Centreline dilution = flux-average dilution × λ²/(1+λ²) for Gaussian profiles of width ratio λ. */
+/** Centreline dilution = flux-average dilution × λ²/(1+λ²) for round Gaussian profiles of width ratio λ. */
 export const CENTRELINE_TO_AVERAGE = ENTRAINMENT.lambda ** 2 / (1 + ENTRAINMENT.lambda ** 2);
+
+/** concentration-to-velocity width ratio λ of a plane plume's Gaussian profiles (Fischer et al. 1979, Table 9.1; from memory) */
+export const PLANE_LAMBDA = 1.24;
+
+/**
+ * Centreline dilution = flux-average dilution × λ/√(1+λ²) for plane Gaussian profiles (one transverse direction): the ratio
+ * of a line plume, used once neighbouring round plumes have merged (Rouse, Yih & Humphreys 1952; Fischer et al. 1979 §9.3).
+ */
+export const PLANE_CENTRELINE_TO_AVERAGE = PLANE_LAMBDA / Math.sqrt(1 + PLANE_LAMBDA ** 2);
+
+/** The centreline/average dilution ratio of a stretch of path by its geometry. */
+export const centrelineToAverage = (geometry: JetGeometry): number =>
+  geometry === 'plane' ? PLANE_CENTRELINE_TO_AVERAGE : CENTRELINE_TO_AVERAGE;
 
 export const BUOYANT_JET: MethodInfo = {
   id: 'buoyant-jet',

@@ -20,15 +20,17 @@ export const DIFFUSER_PLUME: MethodInfo = {
     'Round plumes: the buoyant-jet integral model of this program (Morton, Taylor & Turner 1956 entrainment; see buoyant-jet). ' +
     'Merging where the plume width 2b reaches the port spacing, then continuation as a line plume with the fluxes per unit ' +
     'length q = Q/s, m = M/s, f = B/s: the merging-plume approach of Wright, S.J., Wong, D.R., Zimmerman, K.E., Wallace, R.B. ' +
-    '(1982). Outfall diffuser behavior in stratified ambient fluid. J. Hydraul. Div. ASCE 108(HY4), 483–501 (from memory; the ' +
-    'criterion 2b = s and the equal-flux slot are our reading). Line (plane) plume: top-hat integral model with Gaussian ' +
+    '(1982). Outfall diffuser behavior in stratified ambient fluid. J. Hydraul. Div. ASCE 108(HY4), 483–501. Line (plane) plume: top-hat integral model with Gaussian ' +
     'coefficients α = 0.052 (plane jet, Fischer et al. 1979, Table 9.1) and 0.11 (plane plume, Richardson, J., Hunt, G.R. (2022). ' +
-    'What is the entrainment coefficient of a pure turbulent line plume? J. Fluid Mech. 934, A11), both × √2 for top-hat ' +
-    '(from memory). Limits compared with Roberts, P.J.W., Snyder, W.H., Baumgartner, D.J. (1989). Ocean outfalls. I. ' +
+    'What is the entrainment coefficient of a pure turbulent line plume? J. Fluid Mech. 934, A11), both × √2 for top-hat. ' +
+    'After merging, the centreline/average dilution ratio of plane Gaussian profiles, λ_p/√(1+λ_p²) with ' +
+    'λ_p = 1.24 (plane plume, Fischer et al. 1979, Table 9.1), as for the line plume of Rouse, H., Yih, C.S., ' +
+    'Humphreys, H.W. (1952). Gravitational convection from a boundary source. Tellus 4, 201–210. ' +
+    'Limits compared with Roberts, P.J.W., Snyder, W.H., Baumgartner, D.J. (1989). Ocean outfalls. I. ' +
     'J. Hydraul. Eng. 115(1), 1–25, and with the single port.',
   equation:
     'round jet until 2b = s; then per unit length, as in still water: d(q)/ds = 2α(Ri)u, d(q u)/ds = (q g′/u) ẑ, d(q Δρ)/ds = (dq/ds)(ρ_a(z) − ρ_ref), ' +
-    'q = 2bu, α = α_j + (α_p − α_j)·clamp(Ri/α_p, 0, 1), Ri = g′b e_z/u²; S_c = S_avg·λ²/(1+λ²) kept from the round plumes; ' +
+    'q = 2bu, α = α_j + (α_p − α_j)·clamp(Ri/α_p, 0, 1), Ri = g′b e_z/u²; after merging S_c = S_avg·λ_p/√(1+λ_p²), λ_p = 1.24; ' +
     'governing dilution = min(S_merged, S_single port) at the end of the near field',
   validity: {
     froude_current: {
@@ -38,6 +40,10 @@ export const DIFFUSER_PLUME: MethodInfo = {
       note: 'F = u³/b of the line-plume experiments of Roberts, Snyder & Baumgartner (1989)',
     },
   },
+  provenance:
+    'The merging criterion 2b = s and the slot of equal fluxes are this model’s interpretation of Wright et al. (1982); the ' +
+    'plane coefficients and λ_p are as commonly quoted from Fischer et al. (1979) and Richardson & Hunt (2022), not compared ' +
+    'with the originals.',
 };
 
 export interface DiffuserInput extends Omit<BuoyantJetInput, 'portSpacing' | 'horizontalAngle'> {

@@ -88,6 +88,8 @@ export interface WarningContext {
   portDepth: number;
   /** the path continues as a merged (plane) plume after the plumes merge */
   merged?: boolean;
+  /** the longest path followed [m] */
+  pathLength: number;
 }
 
 /** Warnings where the model leaves its validity along this path. */
@@ -158,8 +160,21 @@ export function pathWarnings(c: WarningContext): Warning[] {
         'Integral models of this kind under-predict the dilution of inclined dense jets measured in the laboratory by tens of percent (Roberts, Ferrier & Daviero 1997; Kikkert, Davidson & Nokes 2007); the dilutions here err on the low side.',
         'angle',
       ),
+      caution(
+        'dense-jet-rise-low',
+        'The model’s rise is low: laboratory dense jets rise higher than integral models predict (Lai & Lee 2012 found 10–15 % for theirs; this one is about 20 % below Roberts, Ferrier & Daviero 1997). Do not rely on the model’s rise to show that the jet stays below the surface or an intake; compare the laboratory rise (max_rise_lab).',
+        'angle',
+      ),
     );
   }
+  if (c.status === 'completed' && !find('end of near field'))
+    w.push(
+      caution(
+        'path-length-reached',
+        `The path followed ends (max_path_length = ${m(c.pathLength)} m) before the near field does: the dilution at its end is a lower bound.`,
+        'max_path_length',
+      ),
+    );
   if (c.profileBottom !== undefined && c.portDepth > c.profileBottom)
     w.push(
       caution(

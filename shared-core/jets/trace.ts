@@ -73,6 +73,11 @@ export interface Stretch {
 const deg = Math.PI / 180;
 /** step attempts per segment (default) */
 export const JET_MAX_STEPS = 20000;
+/**
+ * Default longest path [m]: long enough for a weakly buoyant plume bent over by a strong current to surface from tens of
+ * metres (a 20 m deep port in 0.6 m/s surfaces some 1.4 km downstream); the adaptive steps make a long path cheap.
+ */
+export const JET_DEFAULT_MAX_PATH = 10000;
 
 /** Validates a run's input and sets up the ambient tables and the port state. */
 export function prepareJetRun(input: JetRunInput): JetRun {
@@ -94,7 +99,9 @@ export function prepareJetRun(input: JetRunInput): JetRun {
       ? undefined
       : requireInRange('effluent_temperature', input.effluentTemperature, 'degC', { min: -3, max: 100 });
   const sMax =
-    input.maxPath === undefined ? Math.max(100 * D, 50 * H) : requireInRange('max_path', input.maxPath, 'm', positive);
+    input.maxPath === undefined
+      ? Math.max(JET_DEFAULT_MAX_PATH, 100 * D, 50 * H)
+      : requireInRange('max_path_length', input.maxPath, 'm', positive);
   const maxSteps = requireInRange('max_steps', input.maxSteps ?? JET_MAX_STEPS, '1', { min: 1, max: 1e6 });
 
   const rhoRef = interpolateAt(amb.depth, amb.density, H),

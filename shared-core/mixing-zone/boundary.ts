@@ -19,9 +19,25 @@ export interface BoundaryDilution {
  * Dilution at the mixing-zone boundary, interpolated linearly along the trajectory. When the near field
  * ends inside the mixing zone (surface, bed, trapping) the dilution at its end is returned with reached = false:
  * further mixing in the far field is not included, so the value errs on the low (safe) side.
+ * For a dense jet whose return-point dilution was chosen apart from the model's (`t.denseJet`, see dense-jet-lab.ts),
+ * the model's dilution at and beyond its return point is scaled by the chosen ÷ model ratio, and the note says so.
  * @param t a buoyant-jet trajectory; @param boundary distance [m] from the port (horizontal) or along the path
  */
 export function dilutionAtBoundary(t: JetTrajectory, boundary: MixingZoneBoundary): BoundaryDilution {
+  const d = modelDilutionAtBoundary(t, boundary);
+  const dense = t.denseJet;
+  if (!dense || dense.factor === 1 || d.pathDistance === undefined || d.pathDistance < dense.returnPathDistance)
+    return d;
+  const f = dense.factor;
+  return {
+    ...d,
+    dilutionCentreline: Math.max(1, d.dilutionCentreline * f),
+    dilutionAverage: Math.max(1, d.dilutionAverage * f),
+    note: `${d.note}; beyond the return point the model's dilution is scaled by ${f.toPrecision(3)} to the ${dense.choice === 'lab' ? 'laboratory' : 'cautious'} return dilution (dense_jet_dilution = ${dense.choice})`,
+  };
+}
+
+function modelDilutionAtBoundary(t: JetTrajectory, boundary: MixingZoneBoundary): BoundaryDilution {
   const R = requireInRange('boundary_distance', boundary.distance, 'm', nonNegative);
   const key = boundary.measure === 'horizontal' ? 'horizontalDistance' : 's';
   const xs = t.path[key],

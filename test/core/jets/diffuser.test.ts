@@ -31,10 +31,12 @@ const gPort = (GRAVITY * 23) / 1023;
 
 function compute(i: Record<string, number | string>): number {
   switch (i.quantity) {
-    case 'uniform line-limit average dilution coefficient': {
+    case 'uniform line-limit average dilution coefficient':
+    case 'uniform line-limit centreline dilution coefficient': {
       const r = uniform(0.02, 0.2, 0.05),
         q = portFlux(0.02, 0.2) / 0.05;
-      return (r.dilutionAverage * q) / (Math.cbrt(0.2 * q) * 40);
+      const S = i.quantity.startsWith('uniform line-limit average') ? r.dilutionAverage : r.dilution;
+      return (S * q) / (Math.cbrt(0.2 * q) * 40);
     }
     case 'stratified line-limit centreline dilution coefficient':
     case 'stratified line-limit rise over l_b': {

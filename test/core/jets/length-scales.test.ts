@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
 import { jetLengthScales } from '../../../shared-core/jets/length-scales';
-import { linePlumeRobertsSnyderBaumgartner1989 } from '../../../shared-core/jets/line-plume';
+import { linePlume, linePlumeRobertsSnyderBaumgartner1989 } from '../../../shared-core/jets/line-plume';
 import { InputError } from '../../../shared-core/core/errors';
 import { runCheckValues } from '../../helpers/check-values';
 
@@ -27,7 +27,13 @@ runCheckValues('jets', 'jet-length-scales', (i) => {
 });
 
 runCheckValues('jets', 'line-plume', (i) => {
-  const r = linePlumeRobertsSnyderBaumgartner1989(Number(i.q), Number(i.g_prime), Number(i.N), Number(i.u));
+  const r = linePlume(
+    Number(i.q),
+    Number(i.g_prime),
+    Number(i.N),
+    Number(i.u),
+    i.H === undefined ? undefined : Number(i.H),
+  );
   if (i.quantity === 'rise_height') return r.riseHeight;
   if (i.quantity === 'rise_height_over_lb') return r.riseHeight / r.lb;
   return r.dilution;
@@ -69,6 +75,8 @@ describe('jet length scales', () => {
       InputError,
     );
     expect(() => linePlumeRobertsSnyderBaumgartner1989(0.01, 0.2, 0)).toThrow(InputError);
+    expect(() => linePlume(0.01, 0.2, 0)).toThrow(/water_depth/);
+    expect(() => linePlume(0.01, 0.2, 0, 0, -1)).toThrow(InputError);
     expect(() => linePlumeRobertsSnyderBaumgartner1989(0.01, -0.2, 0.01)).toThrow(InputError);
   });
   it('line-plume dilution grows with current and never drops below 1 (property)', () => {
@@ -87,5 +95,24 @@ describe('jet length scales', () => {
         },
       ),
     );
+  });
+
+  it('unstratified line plume: dilution grows as H and b^⅓/q, a current only adds a caution, and the wastefield surfaces', () => {
+    // Roberts (1979): S_m = 0.27 b^⅓H/q at zero current (from memory); scaling of the formula, not its coefficient
+    const a = linePlume(0.01, 0.2, 0, 0, 20),
+      deeper = linePlume(0.01, 0.2, 0, 0, 40),
+      more = linePlume(0.08, 0.2, 0, 0, 20);
+    expect(deeper.dilution / a.dilution).toBeCloseTo(2, 9);
+    expect(more.dilution / a.dilution).toBeCloseTo(8 ** (1 / 3) / 8, 9);
+    expect(a.riseHeight).toBe(20);
+    expect(a.lb).toBe(Infinity);
+    expect(a.warnings).toEqual([]);
+    const swept = linePlume(0.01, 0.2, 0, 0.5, 20);
+    expect(swept.dilution).toBe(a.dilution);
+    expect(swept.warnings.map((w) => [w.code, w.input])).toEqual([['unstratified-current-lower-bound', 'current']]);
+    // stratified water shallower than the stratified rise: the wastefield reaches the surface
+    const shallow = linePlume(0.01, 0.2, 0.02, 0, 10);
+    expect(shallow.riseHeight).toBeGreaterThan(10);
+    expect(shallow.warnings.map((w) => w.code)).toContain('wastefield-reaches-surface');
   });
 });

@@ -7,8 +7,9 @@ Stage 2, line plume with the fluxes per unit length q = Q/s, M/s, (Q drho)/s, fo
   dX/ds = e, dq/ds = E = 2 alpha u, d(q u)/ds = (q g'/u) z_hat, d(q (rho - rho_ref))/ds = E (rho_a - rho_ref)
   b = q/(2u), Ri = g' b e_z / u^2, alpha = a_j + (a_p - a_j) clamp(Ri / a_p, 0, 1)
   Gaussian plane coefficients a_j = 0.052 (Fischer et al. 1979, Table 9.1), a_p = 0.11 (Richardson & Hunt 2022), times sqrt(2)
-  for top-hat (from memory). Dilution refers to Q0/s, so it is continuous at merging; the centreline/average ratio
-  lambda^2/(1+lambda^2), lambda = 1.19, is kept from the round plumes.
+  for top-hat (from memory). Dilution refers to Q0/s, so its flux average is continuous at merging; after merging the
+  centreline/average ratio is that of plane Gaussian profiles, lambda/sqrt(1+lambda^2) with lambda = 1.24 (plane plume,
+  Fischer et al. 1979, Table 9.1; from memory).
 Written from these equations, not from the TypeScript code. Run: /usr/bin/python3 diffuser_plume_scipy.py > diffuser-plume-scipy.json
 """
 import json
@@ -17,6 +18,7 @@ from scipy.integrate import solve_ivp
 from buoyant_jet_scipy import make, CF, G
 
 AJ2, AP2 = np.sqrt(2) * 0.052, np.sqrt(2) * 0.11
+CF_PLANE = 1.24 / np.sqrt(1 + 1.24 ** 2)
 
 
 def ev(fun, terminal, direction):
@@ -76,7 +78,7 @@ def run(case):
     def plane_point(y):
         u, b, d, drho, gp, E, m = plane_local(y)
         return {'z': y[2], 'horizontalDistance': float(np.hypot(y[0], y[1])), 'radius': b,
-                'dilutionCentreline': max(1.0, y[3] / q0 * CF), 'dilutionAverage': y[3] / q0}
+                'dilutionCentreline': max(1.0, y[3] / q0 * CF_PLANE), 'dilutionAverage': y[3] / q0}
 
     surface = ev(lambda s, y: y[2] - H, True, 1)
     top = ev(lambda s, y: y[6], True, -1)
