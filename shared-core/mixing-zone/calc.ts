@@ -66,14 +66,14 @@ export const mixingZoneCalcMethods: CalcMethod[] = [
         unit: '1',
         description: 'far-field centreline dilution factor (multiplies the near-field dilution)',
       },
-      { name: 'width', unit: 'm', description: 'wastefield width at the distance' },
+      { name: 'field_width', unit: 'm', description: 'wastefield width at the distance' },
     ],
     everyday: { width: [5, 500], current: [0.05, 0.5], distance: [0, 5000], alpha: [2e-4, 1e-3] },
     run(a) {
       const [b, u, x, alpha] = ['width', 'current', 'distance', 'alpha'].map((n) => arg.num(a, n));
       const r = farFieldSpreadingBrooks1960(b, u, x, alpha);
       return {
-        results: { dilution: num(r.dilution, '1'), width: num(r.width, 'm') },
+        results: { dilution: num(r.dilution, '1'), field_width: num(r.width, 'm') },
         warnings: r.warnings,
         sources: [FAR_FIELD_BROOKS_1960.source],
         ...(x > 0 ? { series: [farFieldSeries(b, u, x, alpha)] } : {}),

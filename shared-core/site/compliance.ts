@@ -37,8 +37,8 @@ function ownNearField(site: Site, o: Outfall, conditionId: string): Estimate | u
 }
 
 const nearFieldId = (site: Site, o: Outfall, conditionId: string) =>
-  ownNearField(site, o, conditionId)?.id ?? `${o.id}-${conditionId}-near-field`;
-const farFieldId = (o: Outfall, conditionId: string, zone: Zone) => `${o.id}-${conditionId}-far-field-${zone}`;
+  ownNearField(site, o, conditionId)?.id ?? `${o.id}-${conditionId}-near`;
+const farFieldId = (o: Outfall, conditionId: string, zone: Zone) => `${o.id}-${conditionId}-far-${zone}`;
 
 /**
  * The near-field estimates the compliance table needs and the site lacks: one per outfall with constituents

@@ -26,7 +26,7 @@ describe('vocabulary', () => {
 
   it('tells apart the senses a name has in different methods', () => {
     expect(labelOf('froude', 'obstacle-flow').label).not.toBe(labelOf('froude', 'front-speed').label);
-    expect(labelOf('width', 'far-field', 'input').label).not.toBe(labelOf('width', 'far-field', 'result').label);
+    expect(labelOf('width', 'far-field', 'input').label).not.toBe(labelOf('field_width', 'far-field').label);
     expect(nameText('l_q')).toBe('Jet length scale L_Q (Q/√M)');
     expect(nameText('g_prime')).toBe('Reduced gravity g′');
   });

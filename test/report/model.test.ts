@@ -66,6 +66,7 @@ describe('report model', () => {
       'summary',
       ...quillmere.estimates.map((e) => e.id),
       ...(quillmere.compliance.length ? ['compliance'] : []),
+      'verification',
       'references',
       'cautions',
     ]);
@@ -265,7 +266,7 @@ describe('the calc package traces every verdict', () => {
     expect(jet.inputs.find((q) => q.name === 'diameter')!.description).toMatch(
       /from the site: Treatment works outfall/,
     );
-    const added = m.estimates.find((s) => s.id.endsWith('far-field-chronic'))!;
+    const added = m.estimates.find((s) => s.id.endsWith('far-chronic'))!;
     expect(added.inputs.find((q) => q.name === 'width')!.description).toMatch(/derived from the near-field run/);
     expect(added.inputs.find((q) => q.name === 'alpha')!.description).toMatch(/default/);
   });

@@ -83,7 +83,7 @@ describe('far-field (Brooks 1960 4/3-law)', () => {
     const out = runCalc(farField, { width: '20 m', current: '0.15 m/s', distance: '2 km' });
     const direct = farFieldSpreadingBrooks1960(20, 0.15, 2000);
     expect(out.results.dilution).toEqual({ value: direct.dilution, unit: '1' });
-    expect(out.results.width).toEqual({ value: direct.width, unit: 'm' });
+    expect(out.results.field_width).toEqual({ value: direct.width, unit: 'm' });
     const series = out.series!.find((s) => s.kind === 'far-field-dilution')!;
     expect(series.x.values[0]).toBe(0);
     expect(series.x.values.at(-1)).toBe(2000);
