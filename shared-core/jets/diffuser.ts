@@ -17,7 +17,7 @@ export const DIFFUSER_PLUME: MethodInfo = {
   id: 'diffuser-plume',
   title: 'Multiport diffuser: round plumes merging into a line plume (equivalent slot)',
   source:
-    'Round plumes: the buoyant-jet integral model of this program (Morton, Taylor & Turner 1956 entrainment; see buoyant-jet). ' +
+    'Round plumes: the buoyant-jet integral model (Morton, Taylor & Turner 1956 entrainment; see buoyant-jet). ' +
     'Merging where the plume width 2b reaches the port spacing, then continuation as a line plume with the fluxes per unit ' +
     'length q = Q/s, m = M/s, f = B/s: the merging-plume approach of Wright, S.J., Wong, D.R., Zimmerman, K.E., Wallace, R.B. ' +
     '(1982). Outfall diffuser behavior in stratified ambient fluid. J. Hydraul. Div. ASCE 108(HY4), 483–501. Line (plane) plume: top-hat integral model with Gaussian ' +
@@ -213,7 +213,7 @@ export function diffuserPlume(input: DiffuserInput): DiffuserPlume {
           )
         : outsideValidity(
             'current-along-diffuser',
-            `The current runs at ${m(currentAngle)}° to the diffuser: plumes are swept onto their downstream neighbours and merge sooner than modelled; the model describes a current across the diffuser (Roberts, Snyder & Baumgartner 1989 found lower dilutions for currents along the diffuser; from memory).`,
+            `The current runs at ${m(currentAngle)}° to the diffuser: plumes are swept onto their downstream neighbours and merge sooner than modelled; the model describes a current across the diffuser (Roberts, Snyder & Baumgartner 1989 found lower dilutions for currents along the diffuser).`,
             'current_angle',
           ),
     );
