@@ -1,7 +1,10 @@
 import { create, erfDependencies } from 'mathjs';
 import { brentRoot } from '../numerics/roots';
 
-const math = create({ erfDependencies });
+let erfMath: ReturnType<typeof create> | undefined;
+
+/** The mathjs instance for erf, created on first use (a start that draws no sample does not pay for it). */
+const math = () => (erfMath ??= create({ erfDependencies }));
 
 /**
  * Seeded pseudo-random numbers in [0, 1): the 32-bit "mulberry32" generator (T. Ettinger, public domain).
@@ -20,7 +23,7 @@ export function seededRandom(seed: number): () => number {
 
 /** Standard normal distribution function Φ(x) = ½(1 + erf(x/√2)) (Abramowitz & Stegun 1964, 26.2.29). */
 export function normalCdf(x: number): number {
-  return 0.5 * (1 + (math.erf(x / Math.SQRT2) as number));
+  return 0.5 * (1 + (math().erf(x / Math.SQRT2) as number));
 }
 
 /**

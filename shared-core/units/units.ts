@@ -7,14 +7,22 @@ import { readLeadingNumber, type DecimalMark } from './number';
  * quantities.ts ('m', 'm3/s', 'kg/m3', 'degC', 'PSU' …). Parsing uses mathjs units plus the trade's
  * customary units (cfs, MGD, ML/d, gpm, acre-ft/d, knot, mph, 6", 40', 5'6").
  */
-const math = create({ unitDependencies, createUnitDependencies });
-math.createUnit('cfs', '1 ft^3/s');
-math.createUnit('MGD', '1000000 gal/day');
-math.createUnit('MLD', '1000 m^3/day');
-math.createUnit('acreft', '43560 ft^3');
-math.createUnit('gpm', '1 gal/minute');
-math.createUnit('knot', { definition: '0.514444444444 m/s', aliases: ['knots', 'kn', 'kt'] });
-math.createUnit('mph', '1 mile/hour');
+function createUnitMath() {
+  const math = create({ unitDependencies, createUnitDependencies });
+  math.createUnit('cfs', '1 ft^3/s');
+  math.createUnit('MGD', '1000000 gal/day');
+  math.createUnit('MLD', '1000 m^3/day');
+  math.createUnit('acreft', '43560 ft^3');
+  math.createUnit('gpm', '1 gal/minute');
+  math.createUnit('knot', { definition: '0.514444444444 m/s', aliases: ['knots', 'kn', 'kt'] });
+  math.createUnit('mph', '1 mile/hour');
+  return math;
+}
+
+let unitMath: ReturnType<typeof createUnitMath> | undefined;
+
+/** The mathjs instance with our units, created on first use: a start that parses no unit does not pay for it. */
+const math = () => (unitMath ??= createUnitMath());
 
 export type UnitSystem = 'si' | 'us';
 
@@ -140,7 +148,7 @@ export function normaliseUnitText(text: string): string {
 
 function toMathUnit(field: string, text: string, value: number): Unit {
   try {
-    return math.unit(value, normaliseUnitText(text));
+    return math().unit(value, normaliseUnitText(text));
   } catch {
     throw new InputError(field, `${value} ${text}`, text, 'a known unit', `the unit "${text}" is not known`);
   }
@@ -150,7 +158,7 @@ function toMathUnit(field: string, text: string, value: number): Unit {
 export function isKnownUnit(text: string): boolean {
   if (SALINITY_UNITS.test(text)) return true;
   try {
-    math.unit(1, normaliseUnitText(text));
+    math().unit(1, normaliseUnitText(text));
     return true;
   } catch {
     return false;
@@ -235,7 +243,12 @@ export function displayUnit(siUnit: string, system: UnitSystem): string {
 export function toDisplay(value: number, siUnit: string, system: UnitSystem): { value: number; unit: string } {
   const unit = displayUnit(siUnit, system);
   if (unit === siUnit) return { value, unit };
-  return { value: math.unit(value, MATHJS_NAME[siUnit] ?? siUnit).toNumber(normaliseUnitText(unit)), unit };
+  return {
+    value: math()
+      .unit(value, MATHJS_NAME[siUnit] ?? siUnit)
+      .toNumber(normaliseUnitText(unit)),
+    unit,
+  };
 }
 
 /** Converts a value in the display unit of the system back to SI (inverse of toDisplay). */

@@ -1,8 +1,11 @@
-import { assessSite, type Assessment } from '../../shared-core/site';
+import { assessSite, SiteFileError, type Assessment } from '../../shared-core/site';
 import { formatNumber } from '../../shared-core/core/errors';
 import { keyResultName } from '../../shared-core/calc/types';
 import { readSiteFile, GPRIME_VERSION } from '../services/site-file';
-import { EXIT_NOT_ALL_OK, UsageError, type CommandResult } from './errors';
+import { checkOutFolder } from './out-folder';
+import { EXIT_NOT_ALL_OK, treatAsBadInput, UsageError, type CommandResult } from './errors';
+
+treatAsBadInput(SiteFileError);
 
 /** A short plain-text summary: per estimate its key result and warnings count. */
 export function summariseAssessment(a: Assessment): string {
@@ -54,6 +57,7 @@ export interface AssessOptions {
 
 export function parseAssessArgs(args: string[]): AssessOptions {
   const opts: AssessOptions = { file: '' };
+  const given = new Set<string>();
   for (let i = 0; i < args.length; i++) {
     const a = args[i];
     const value = () => {
@@ -61,6 +65,8 @@ export function parseAssessArgs(args: string[]): AssessOptions {
       if (v === undefined) throw new UsageError(`${a} needs a value`);
       return v;
     };
+    if (['--out', '--format', '--units'].includes(a) && given.has(a)) throw new UsageError(`${a} is given twice`);
+    given.add(a);
     if (a === '--out') opts.out = value();
     else if (a === '--format')
       opts.formats = value()
@@ -96,6 +102,7 @@ export function assessmentExit(a: Assessment): Pick<CommandResult, 'exitCode' | 
 /** `gprime assess <site file> [--json]` evaluates every estimate of the site. */
 export async function assessCommand(args: string[], json: boolean): Promise<CommandResult> {
   const opts = parseAssessArgs(args);
+  if (opts.out) checkOutFolder(opts.out);
   const loaded = readSiteFile(opts.file);
   const assessment = assessSite(loaded.site, { gprimeVersion: GPRIME_VERSION, siteHash: loaded.hash });
   const exit = assessmentExit(assessment);

@@ -2,10 +2,13 @@ import { readFileSync } from 'node:fs';
 import { resolve } from 'node:path';
 import { CALC_METHODS, findCalcMethod } from '../../shared-core/calc/registry';
 import { runCalc, type RawArg } from '../../shared-core/calc/resolve';
+import type { CalcMethod } from '../../shared-core/calc/types';
 import { InputError } from '../../shared-core/core/errors';
+import { describeRange } from '../../shared-core/core/range';
 import { parseProfileCsv } from '../../shared-core/profile/csv';
 import { bandsFromTyped, type UncertaintyResult } from '../../shared-core/uncertainty';
 import { describeMethods, formatCalcText, formatUncertaintyText } from './format';
+import { calcPairs, uncertaintyFlags } from './calc-args';
 import { UsageError, type CommandResult } from './errors';
 
 /** Reads a CSV profile from disk for a 'profile' parameter. */
@@ -23,6 +26,25 @@ export function loadProfileFile(field: string, path: string) {
     );
   }
   return parseProfileCsv(text);
+}
+
+/**
+ * runCalc, with a value the parameter could not read as a quantity (not a number, an unknown unit, a unit of another
+ * dimension) refused by a message that also names the unit the parameter expects and its allowed range.
+ */
+function runWithUnitHelp(method: CalcMethod, raw: Record<string, RawArg>) {
+  try {
+    return runCalc(method, raw);
+  } catch (e) {
+    const spec = e instanceof InputError ? method.params.find((p) => p.name === e.field) : undefined;
+    if (!(e instanceof InputError) || spec?.kind !== 'number' || typeof raw[spec.name] !== 'string') throw e;
+    if (typeof e.value !== 'string') throw e; // read, but out of range: the message names the range already
+    const range = describeRange(spec.range ?? {}, spec.unit);
+    const expected = spec.unit === '1' ? 'a plain number' : `${spec.unit} or a unit convertible to it`;
+    const explained = new InputError(e.field, e.value, e.unit, range);
+    explained.message = `${e.message}; ${spec.name} takes ${expected}, allowed ${range}`;
+    throw explained;
+  }
 }
 
 /** `gprime calc <method> name=value … [--json]` and `gprime calc --list [--json]`. */
@@ -45,16 +67,8 @@ export function calcCommand(args: string[], json: boolean): CommandResult {
   const method = findCalcMethod(id);
   if (!method)
     throw new UsageError(`unknown method "${id}"; known methods: ${CALC_METHODS.map((m) => m.id).join(', ')}`);
-  const raw: Record<string, RawArg> = {};
-  for (const pair of pairs) {
-    const eq = pair.indexOf('=');
-    if (eq <= 0) throw new UsageError(`expected name=value, got "${pair}"`);
-    const name = pair.slice(0, eq).trim();
-    const value = pair.slice(eq + 1);
-    const spec = method.params.find((p) => p.name === name);
-    raw[name] = spec?.kind === 'profile' ? loadProfileFile(name, value) : value;
-  }
-  const out = runCalc(method, raw);
+  const raw = calcPairs(method, pairs, loadProfileFile);
+  const out = runWithUnitHelp(method, raw);
   const band = sigmas.length ? bandsFromTyped(method, raw, Object.fromEntries(sigmas), options) : undefined;
   if (json)
     return {
@@ -67,37 +81,6 @@ export function calcCommand(args: string[], json: boolean): CommandResult {
       }),
     };
   return { stdout: formatCalcText(method, out, band && formatUncertaintyText(band)) };
-}
-
-/** Splits off `--sigma name=u` (repeatable), `--samples N`, `--seed N` and `--coverage p`. */
-function uncertaintyFlags(args: string[]) {
-  const rest: string[] = [];
-  const sigmas: [string, string][] = [];
-  const options: { samples?: number; seed?: number; coverage?: number } = {};
-  for (let i = 0; i < args.length; i++) {
-    const flag = args[i];
-    if (!['--sigma', '--samples', '--seed', '--coverage'].includes(flag)) {
-      rest.push(flag);
-      continue;
-    }
-    const value = args[++i];
-    if (value === undefined) throw new UsageError(`${flag} needs a value`);
-    if (flag === '--sigma') {
-      const eq = value.indexOf('=');
-      if (eq <= 0)
-        throw new UsageError(
-          `--sigma expects name=standard uncertainty (e.g. g_prime=0.002 or depth=10%), got "${value}"`,
-        );
-      const name = value.slice(0, eq).trim();
-      if (sigmas.some(([n]) => n === name)) throw new UsageError(`--sigma ${name} is given twice`);
-      sigmas.push([name, value.slice(eq + 1)]);
-    } else {
-      const n = Number(value);
-      if (!Number.isFinite(n)) throw new UsageError(`${flag} expects a number, got "${value}"`);
-      options[flag.slice(2) as 'samples' | 'seed' | 'coverage'] = n;
-    }
-  }
-  return { rest, sigmas, options };
 }
 
 function uncertaintyJson(r: UncertaintyResult) {

@@ -1,8 +1,9 @@
 import { InputError } from '../../shared-core/core/errors';
 import { ProfileError } from '../../shared-core/profile/profile';
-import { SiteFileError } from '../../shared-core/site/load';
 import { calcCommand } from './calc-command';
-import { UsageError, type CommandResult } from './errors';
+import { isBadInput, treatAsBadInput, UsageError, type CommandResult } from './errors';
+
+treatAsBadInput(InputError, ProfileError);
 
 const USAGE = `gprime — screening estimates for stratified flows and density currents
 
@@ -49,8 +50,7 @@ export async function main(argv: string[]): Promise<number> {
     if (result.stderr) process.stderr.write(`gprime: ${result.stderr}\n`);
     return result.exitCode ?? 0;
   } catch (e) {
-    const bad =
-      e instanceof InputError || e instanceof ProfileError || e instanceof UsageError || e instanceof SiteFileError;
+    const bad = isBadInput(e);
     const message = e instanceof Error ? e.message : String(e);
     if (json) {
       const field = e instanceof InputError ? e.field : undefined;

@@ -19,14 +19,18 @@ function staticLoad(file: string, load = { files: new Map<string, string>(), pac
 }
 
 describe('CLI start', () => {
-  it('a calc command loads no report library; the report writer is a chunk loaded by a dynamic import', () => {
+  it('a calc command loads no report library and no site schema; assess and its report writer are chunks loaded on demand', () => {
     expect(runGprime(['calc', 'water-density', 'temperature=20']).code).toBe(0);
     const { files, packages } = staticLoad(join(ROOT, 'dist', 'cli', 'gprime.mjs'));
     expect(packages.has('node:fs'), 'the scan finds static imports').toBe(true);
     for (const lib of REPORT_LIBRARIES) expect(packages.has(lib), lib).toBe(false);
     const code = [...files.values()].join('\n');
-    // chart.js is bundled rather than external: esbuild marks each bundled module with its path
+    // chart.js and zod are bundled rather than external: esbuild marks each bundled module with its path
     expect(code).not.toContain('node_modules/chart.js/');
-    expect(code).toMatch(/import\(["']\.\/write-report-[\w-]+\.mjs["']\)/);
+    expect(code, 'the site schema (zod) loads only for assess').not.toContain('node_modules/zod/');
+    const assess = /import\(["']\.\/(assess-command-[\w-]+\.mjs)["']\)/.exec(code);
+    expect(assess, 'assess is a chunk loaded by a dynamic import').not.toBeNull();
+    const assessCode = readFileSync(join(ROOT, 'dist', 'cli', assess![1]), 'utf8');
+    expect(assessCode).toMatch(/import\(["']\.\/write-report-[\w-]+\.mjs["']\)/);
   });
 });
