@@ -1,4 +1,4 @@
-import { assessSite, SiteAssessor, type Site } from '../shared-core/site';
+import { assessSite, ProfileCache, runEstimate, SiteAssessor, type Site } from '../shared-core/site';
 import { loadDemo, META } from './demo';
 import { medianMs, ms, type Measured } from './harness';
 
@@ -12,6 +12,24 @@ function editedDischarge(site: Site, run: number): Site {
     throw new Error('the demo has no outfall with a numeric discharge');
   outfall.discharge *= 1 + 0.001 * (run + 1);
   return edited;
+}
+
+/** The slowest estimates of the demo, each timed warm with the profiles read (where the full assessment goes). */
+function slowestEstimates(site: Site, count: number): string {
+  const cache = new ProfileCache();
+  const times = site.estimates.map((e, i) => ({
+    id: e.id,
+    ms: medianMs(
+      RUNS,
+      () => undefined,
+      () => runEstimate(site, e, i, { bands: false }, cache),
+    ),
+  }));
+  return times
+    .sort((a, b) => b.ms - a.ms)
+    .slice(0, count)
+    .map((t) => `${t.id} ${ms(t.ms)}`)
+    .join(', ');
 }
 
 /**
@@ -41,6 +59,7 @@ export function benchSite(): Measured {
     lines: [
       `${'Demo reservoir, full assessment (no bands)'.padEnd(44)} ${ms(full).padStart(10)}   median of ${RUNS}, freshly loaded each (loading: ${ms(loadMs)}; ${estimates} estimates)`,
       `${'Demo reservoir, outfall discharge edited'.padEnd(44)} ${ms(edit).padStart(10)}   incremental SiteAssessor, ${recomputed} of ${estimates} estimates recomputed`,
+      `${''.padEnd(44)} ${''.padStart(10)}   slowest estimates (warm): ${slowestEstimates(demo, 4)}`,
     ],
   };
 }

@@ -82,9 +82,12 @@ export function verticalModesFromN2(column: N2Column, bottom: number, options: M
       'one N² per depth',
       'the N² column needs as many values as depths',
     );
-  column.n2.forEach((v, i) => requireInRange(`n2[${i}]`, v, '1/s2', { min: -1, max: 1 }));
+  // the field name is built only for a value that fails (a column holds hundreds)
+  column.n2.forEach((v, i) => {
+    if (!(v >= -1 && v <= 1)) requireInRange(`n2[${i}]`, v, '1/s2', { min: -1, max: 1 });
+  });
   const dz = H / cells;
-  const depth = Array.from({ length: cells + 1 }, (_, j) => j * dz);
+  const depth = uniformGrid(cells, dz);
   const warnings: Warning[] = [];
   const raw = interpolateSorted(column.depth, column.n2, depth);
   if (raw.some((v) => v < 0))
@@ -133,6 +136,13 @@ export function verticalModesFromN2(column: N2Column, bottom: number, options: M
   return { depth, n2, modes, surfaceCelerity: extra ? 1 / Math.sqrt(pairs[0].value) : undefined, surface, warnings };
 }
 
+/** Depths 0, dz, 2dz, … cells·dz [m]. */
+function uniformGrid(cells: number, dz: number): number[] {
+  const depth = new Array<number>(cells + 1);
+  for (let j = 0; j <= cells; j++) depth[j] = j * dz;
+  return depth;
+}
+
 function scaleToUnit(v: number[]): number[] {
   let big = 0;
   for (const x of v) if (Math.abs(x) > Math.abs(big)) big = x;
@@ -148,9 +158,12 @@ export function verticalModesFromProfile(p: Profile, options: ModeOptions = {}):
   const H = p.depth[p.depth.length - 1];
   const cells = options.cells ?? 800;
   const dz = H / cells;
-  const depth = Array.from({ length: cells + 1 }, (_, j) => j * dz);
+  const depth = uniformGrid(cells, dz);
   // density at the cell edges 0, dz/2, 3dz/2, …, H − dz/2, H; node j takes N² between edges j and j + 1
-  const edges = [0, ...Array.from({ length: cells }, (_, j) => (j + 0.5) * dz), H];
+  const edges = new Array<number>(cells + 2);
+  edges[0] = 0;
+  for (let j = 0; j < cells; j++) edges[j + 1] = (j + 0.5) * dz;
+  edges[cells + 1] = H;
   const rho = interpolateSorted(p.depth, p.density, edges);
   const n2 = depth.map((_, j) => {
     const ra = rho[j],

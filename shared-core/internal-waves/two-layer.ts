@@ -96,15 +96,23 @@ function wavenumber(wavelength: number | undefined): number {
  * @validity linear (small amplitude), inviscid, no shear between the layers
  */
 export function interfacialCelerityRigidLid(state: TwoLayer, wavelength?: number): Scalar {
-  const s = checkTwoLayer(state);
-  const k = wavenumber(wavelength);
+  return scalar(
+    INTERFACIAL_DISPERSION_RIGID_LID,
+    rigidLidCelerity(checkTwoLayer(state), wavenumber(wavelength)),
+    'm/s',
+    {},
+  );
+}
+
+/** The rigid-lid phase speed [m/s] of a checked two-layer state at wavenumber k [1/m] (0: long waves). */
+function rigidLidCelerity(s: TwoLayer, k: number): number {
   const dr = s.rhoLower - s.rhoUpper;
   const c2 =
     k === 0
       ? (GRAVITY * dr * s.upperThickness * s.lowerThickness) /
         (s.rhoUpper * s.lowerThickness + s.rhoLower * s.upperThickness)
       : (GRAVITY * dr) / (k * (s.rhoUpper * coth(k * s.upperThickness) + s.rhoLower * coth(k * s.lowerThickness)));
-  return scalar(INTERFACIAL_DISPERSION_RIGID_LID, Math.sqrt(c2), 'm/s', {});
+  return Math.sqrt(c2);
 }
 
 export const INTERFACIAL_DISPERSION_FREE_SURFACE: MethodInfo = {
@@ -137,8 +145,15 @@ export interface FreeSurfaceRoots {
  * @validity linear, inviscid, no shear
  */
 export function twoLayerFreeSurfaceCelerities(state: TwoLayer, wavelength?: number): FreeSurfaceRoots {
-  const s = checkTwoLayer(state);
-  const k = wavenumber(wavelength);
+  return {
+    ...freeSurfaceRoots(checkTwoLayer(state), wavenumber(wavelength)),
+    method: INTERFACIAL_DISPERSION_FREE_SURFACE.id,
+    warnings: [],
+  };
+}
+
+/** Both free-surface phase speeds [m/s] of a checked two-layer state at wavenumber k [1/m] (0: long waves). */
+function freeSurfaceRoots(s: TwoLayer, k: number): { interfacial: number; surface: number } {
   const { rhoUpper: r1, rhoLower: r2, upperThickness: h1, lowerThickness: h2 } = s;
   // In c² = ω²/k²: A c⁴ − (B/k) c² + C/k² = 0 with coth kh ≈ 1/(kh) folded in for k → 0 (all terms × k²).
   let A: number, B: number, C: number;
@@ -154,12 +169,7 @@ export function twoLayerFreeSurfaceCelerities(state: TwoLayer, wavelength?: numb
     C = (r2 - r1) * GRAVITY * GRAVITY;
   }
   const root = Math.sqrt(Math.max(0, B * B - 4 * A * C));
-  return {
-    interfacial: Math.sqrt((2 * C) / (B + root)),
-    surface: Math.sqrt((B + root) / (2 * A)),
-    method: INTERFACIAL_DISPERSION_FREE_SURFACE.id,
-    warnings: [],
-  };
+  return { interfacial: Math.sqrt((2 * C) / (B + root)), surface: Math.sqrt((B + root) / (2 * A)) };
 }
 
 /** One point of a dispersion curve. */
@@ -186,18 +196,15 @@ export function dispersionCurve(state: TwoLayer, points = 60, kMin?: number, kMa
   const lo = requireInRange('k_min', kMin ?? 0.01 / H, '1/m', { ...positive, max: 1e6 });
   const hi = requireInRange('k_max', kMax ?? 10 / H, '1/m', { min: lo, minExclusive: true, max: 1e7 });
   const n = Math.round(requireInRange('points', points, '1', { min: 2, max: 10000 }));
-  return Array.from({ length: n }, (_, i) => {
+  const curve: DispersionPoint[] = [];
+  for (let i = 0; i < n; i++) {
     const k = lo * Math.pow(hi / lo, i / (n - 1));
     const wavelength = (2 * Math.PI) / k;
-    const fs = twoLayerFreeSurfaceCelerities(s, wavelength);
-    return {
-      k,
-      wavelength,
-      rigidLid: interfacialCelerityRigidLid(s, wavelength).value,
-      interfacial: fs.interfacial,
-      surface: fs.surface,
-    };
-  });
+    // the state is checked once; each point takes k as the single methods do (2π over the wavelength)
+    const kw = (2 * Math.PI) / wavelength;
+    curve.push({ k, wavelength, rigidLid: rigidLidCelerity(s, kw), ...freeSurfaceRoots(s, kw) });
+  }
+  return curve;
 }
 
 export const SOLITARY_WAVE_KDV: MethodInfo = {

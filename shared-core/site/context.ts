@@ -5,9 +5,22 @@ import { twoLayerFit, n2Profile, type TwoLayerFit } from '../profile/stratificat
 import { interpolateAt, type Profile } from '../profile/profile';
 import type { Condition, Feature, QuantityInput, Site } from './schema';
 
+/** Quantities typed with a unit, already read ("98 ft" as m…): a live edit binds every estimate again, and reading a
+ * unit costs tens of microseconds. Read values only (a refusal names its field, so it is never kept); bounded. */
+const readQuantities = new Map<string, number>();
+const MAX_READ_QUANTITIES = 4096;
+
 /** A quantity of the site file in SI; the field path names its place in the file. */
 export function si(field: string, q: QuantityInput, unit: string): number {
-  return typeof q === 'number' ? q : parseQuantity(field, q, unit);
+  if (typeof q === 'number') return q;
+  const key = `${unit}\u0000${q}`;
+  let value = readQuantities.get(key);
+  if (value === undefined) {
+    value = parseQuantity(field, q, unit);
+    if (readQuantities.size >= MAX_READ_QUANTITIES) readQuantities.clear();
+    readQuantities.set(key, value);
+  }
+  return value;
 }
 
 export function siOptional(field: string, q: QuantityInput | undefined, unit: string): number | undefined {
@@ -35,6 +48,8 @@ type ReadProfile = { profile: Profile; fit: TwoLayerFit } | { error: unknown };
 export class ProfileCache {
   private byContent = new Map<string, ReadProfile>();
   private keys = new WeakMap<object, string>();
+  private ids = new Map<string, number>();
+  private nextId = 0;
 
   /** a key of the condition's profile table and equation of state (content, not identity) */
   key(c: Condition): string {
@@ -44,6 +59,14 @@ export class ProfileCache {
       this.keys.set(c.profile, k);
     }
     return `${c.eos ?? ''}|${k}`;
+  }
+
+  /** a short id of the condition's profile content, the same while the content is kept (the key can be long) */
+  id(c: Condition): number {
+    const key = this.key(c);
+    let id = this.ids.get(key);
+    if (id === undefined) this.ids.set(key, (id = this.nextId++));
+    return id;
   }
 
   read(c: Condition): ReadProfile {
@@ -65,6 +88,7 @@ export class ProfileCache {
   keepOnly(site: Site): void {
     const live = new Set(site.conditions.map((c) => this.key(c)));
     for (const k of this.byContent.keys()) if (!live.has(k)) this.byContent.delete(k);
+    for (const k of this.ids.keys()) if (!live.has(k)) this.ids.delete(k);
   }
 }
 

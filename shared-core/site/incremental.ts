@@ -45,7 +45,7 @@ export class SiteAssessor {
     try {
       const ctx = makeContext(site, e.condition, e.feature, this.profiles);
       const args = estimateArgs(method, ctx, e);
-      const profileKey = ctx.condition ? this.profiles.key(ctx.condition) : '';
+      const profileKey = ctx.condition ? this.profiles.id(ctx.condition) : '';
       const plain = Object.fromEntries(
         Object.entries(args).map(([k, v]) => [k, isProfile(v) ? `profile:${profileKey}` : v]),
       );

@@ -4,16 +4,16 @@ import type { MethodInfo } from '../core/method';
 import { LIMITS } from '../core/limits';
 import { caution, note, uniqueWarnings, type Warning } from '../core/warning';
 import type { Profile } from '../profile/profile';
-import type { OutflowColumn, PortOutflow } from './outflow';
+import { portOutflow, type OutflowColumn, type PortOutflow } from './outflow';
 import type { ProfileWithdrawalOptions } from './measured';
 import {
   combinedOutflows,
-  directOutflow,
   interferenceGroups,
   type InterferenceGroup,
   type InterferenceMode,
   type OutflowFunction,
 } from './interference';
+import { LayerMemo } from './port-layer';
 
 export const RELEASE_BLEND: MethodInfo = {
   id: 'release-blend-flow-weighted',
@@ -80,8 +80,11 @@ function releaseOutflows(
   ports: readonly Port[],
   flows: readonly number[],
   o: BlendOptions,
-  outflow: OutflowFunction,
+  layers: LayerMemo,
 ): { outs: PortOutflow[]; groups: InterferenceGroup[]; warnings: Warning[] } {
+  const outflow: OutflowFunction = (depth, flow) =>
+    portOutflow(layers.profile, depth, flow, o, 'all', layers.layer(depth, flow));
+  const limitsOf = (depth: number, flow: number) => layers.limits(depth, flow);
   const depths = ports.map((port) => port.depth);
   const name = (g: InterferenceGroup) =>
     g.ports
@@ -89,7 +92,7 @@ function releaseOutflows(
       .join(', ')
       .replace(/, ([^,]*)$/, ' and $1');
   if (o.interference === 'combined') {
-    const { outflows, groups } = combinedOutflows(depths, flows, outflow);
+    const { outflows, groups } = combinedOutflows(depths, flows, outflow, limitsOf);
     const warnings = groups
       .filter((g) => g.ports.length > 1)
       .map((g) =>
@@ -103,7 +106,7 @@ function releaseOutflows(
     return { outs: outflows, groups, warnings };
   }
   const outs = ports.map((port, i) => outflow(port.depth, flows[i]));
-  const groups = interferenceGroups(depths, flows, outflow, 1);
+  const groups = interferenceGroups(depths, flows, limitsOf, 1);
   const warnings = groups
     .filter((g) => g.ports.length > 1)
     .map((g) =>
@@ -118,14 +121,15 @@ function releaseOutflows(
 
 /**
  * Blended release for a given split among ports. Each flow must lie within its port's capacity.
- * @param flows [m3/s] per port; @returns flow-weighted temperature, density and every profile column
+ * @param flows [m3/s] per port; @param layers the port layers already worked out on this profile and sink
+ * @returns flow-weighted temperature, density and every profile column
  */
 export function blendRelease(
   p: Profile,
   ports: readonly Port[],
   flows: readonly number[],
   o: BlendOptions,
-  outflow: OutflowFunction = directOutflow(p, o),
+  layers = new LayerMemo(p, o),
 ): BlendResult {
   checkPorts(ports);
   if (flows.length !== ports.length)
@@ -139,7 +143,7 @@ export function blendRelease(
   flows.forEach((q, i) => requireInRange(`flows[${i + 1}]`, q, 'm3/s', { min: 0, max: ports[i].capacity }));
   const total = flows.reduce((a, b) => a + b, 0);
   if (!(total > 0)) throw new InputError('flows', total, 'm3/s', '> 0 m3/s in total', 'at least one port must be open');
-  const { outs, groups, warnings: interference } = releaseOutflows(ports, flows, o, outflow);
+  const { outs, groups, warnings: interference } = releaseOutflows(ports, flows, o, layers);
   const columns = outs[0].columns.map((c, k) => ({
     name: c.name,
     unit: c.unit,

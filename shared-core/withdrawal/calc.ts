@@ -11,6 +11,7 @@ import { WITHDRAWAL_VELOCITY, withdrawalVelocityProfile } from './outflow';
 import type { Profile } from '../profile/profile';
 import { checkPortCount, RELEASE_BLEND, type Port } from './blend';
 import { optimiseRelease, type OptimisedRelease } from './release-optimiser';
+import { LayerMemo } from './port-layer';
 import {
   groupFluxProfile,
   WITHDRAWAL_INTERFERENCE,
@@ -232,12 +233,14 @@ export const withdrawalCalcMethods: CalcMethod[] = [
       if (!p) throw new InputError('file', '(missing)', '', 'a CSV profile', 'a profile file is required');
       const ports = parsePorts(arg.text(a, 'ports'));
       const interference = arg.text<InterferenceMode>(a, 'interference');
+      const layers = new LayerMemo(p, { sink: 'point' });
       const r = optimiseRelease(
         p,
         ports,
         arg.num(a, 'release'),
         { temperature: arg.num(a, 'target_temperature') },
         { sink: 'point', interference },
+        layers,
       );
       const flows = ports.map((port, i) => `${formatShort(port.depth)} m: ${r.flows[i].toFixed(2)} m3/s`).join('; ');
       const warnings = [
@@ -255,7 +258,7 @@ export const withdrawalCalcMethods: CalcMethod[] = [
           port_flows: text(flows),
           feasible: text(r.feasible ? 'yes' : 'no'),
         },
-        series: releaseSeries(p, ports, r.flows, groups),
+        series: releaseSeries(p, ports, r.flows, groups, layers),
         model: { kind: 'withdrawal-zones', zones: withdrawalZones(ports, r, groups) },
         warnings,
         sources: [
@@ -272,13 +275,15 @@ export const withdrawalCalcMethods: CalcMethod[] = [
 
 /**
  * Chart curves of a release split: the flow of each port, and each open port's (or interfering group's) outflow per metre
- * of depth. `groups` are the combined withdrawals (empty: every port alone).
+ * of depth. `groups` are the combined withdrawals (empty: every port alone); `layers` the point-sink layers already
+ * worked out on the profile (by the optimiser of the split).
  */
 export function releaseSeries(
   p: Profile,
   ports: readonly Port[],
   flows: readonly number[],
   groups: readonly InterferenceGroup[] = [],
+  layers = new LayerMemo(p, { sink: 'point' }),
 ): Series[] {
   const out: Series[] = [
     {
@@ -298,7 +303,7 @@ export function releaseSeries(
   const inGroup = new Set(combined.flatMap((g) => g.ports));
   ports.forEach((port, i) => {
     if (!(flows[i] > 0) || inGroup.has(i)) return;
-    const v = withdrawalVelocityProfile(p, port.depth, flows[i], { sink: 'point' });
+    const v = withdrawalVelocityProfile(p, port.depth, flows[i], { sink: 'point' }, layers.layer(port.depth, flows[i]));
     out.push({
       kind: 'withdrawal-outflow',
       title: `Withdrawal at the port at ${formatShort(port.depth)} m`,
@@ -309,7 +314,7 @@ export function releaseSeries(
     });
   });
   for (const g of combined) {
-    const v = groupFluxProfile(p, depths, flows, g, { sink: 'point' });
+    const v = groupFluxProfile(p, depths, flows, g, { sink: 'point' }, layers);
     const names = g.ports.map((i) => `${formatShort(depths[i])} m`).join(', ');
     out.push({
       kind: 'withdrawal-outflow',

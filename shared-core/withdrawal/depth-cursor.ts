@@ -33,6 +33,16 @@ export class DepthCursor {
     return column[this.lo] + this.f * (column[this.lo + 1] - column[this.lo]);
   }
 
+  /** Adds w to the weights of the two samples around the last seek(), as value() would mix them. */
+  spread(w: number, weights: Float64Array): void {
+    if (this.n < 2 || this.f === 0) weights[this.lo] += w;
+    else if (this.f === 1) weights[this.lo + 1] += w;
+    else {
+      weights[this.lo] += w * (1 - this.f);
+      weights[this.lo + 1] += w * this.f;
+    }
+  }
+
   private at(lo: number, f: number): this {
     this.lo = lo;
     this.f = f;
@@ -50,4 +60,20 @@ export function firstIndex(list: readonly number[], after: (v: number) => boolea
     else lo = mid + 1;
   }
   return lo;
+}
+
+/** The distinct values of ascending lists, ascending: merged pairwise in linear time (no sort). */
+export function mergeAscending(lists: readonly (readonly number[])[]): number[] {
+  let merged: number[] = [];
+  for (const list of lists) {
+    const out: number[] = [];
+    let i = 0,
+      j = 0;
+    while (i < merged.length || j < list.length) {
+      const x = j >= list.length || (i < merged.length && merged[i] <= list[j]) ? merged[i++] : list[j++];
+      if (out.length === 0 || out[out.length - 1] !== x) out.push(x);
+    }
+    merged = out;
+  }
+  return merged;
 }

@@ -1,8 +1,9 @@
 import type { MethodInfo } from '../core/method';
 import type { Profile } from '../profile/profile';
-import { DepthCursor, firstIndex } from './depth-cursor';
+import { DepthCursor, firstIndex, mergeAscending } from './depth-cursor';
 import { portOutflow, withdrawalVelocityProfile, type OutflowColumns, type PortOutflow } from './outflow';
-import type { ProfileWithdrawalOptions } from './measured';
+import type { ProfileWithdrawal, ProfileWithdrawalOptions } from './measured';
+import { LayerMemo } from './port-layer';
 
 export const WITHDRAWAL_INTERFERENCE: MethodInfo = {
   id: 'withdrawal-interference-combined',
@@ -39,19 +40,24 @@ export interface InterferenceGroup {
 /** A port's outflow at a depth and flow; callers may memoise it (the optimiser evaluates the same flows often). */
 export type OutflowFunction = (depth: number, flow: number) => PortOutflow;
 
+/** The limits of a port's withdrawal layer at a depth and flow (all an interference test needs). */
+export type LimitsFunction = (depth: number, flow: number) => ProfileWithdrawal;
+
 export const directOutflow =
   (p: Profile, o: ProfileWithdrawalOptions): OutflowFunction =>
   (depth, flow) =>
     portOutflow(p, depth, flow, o);
 
 /**
- * A memoised outflow function for one profile and set of options (keyed by depth, then flow). The optimiser evaluates
- * many splits in which most ports keep their flow; their outflows are then looked up, not recomputed.
+ * A memoised outflow function for one profile and set of options (keyed by depth, then flow), drawing its layers from
+ * `layers` (of the same profile and sink). The optimiser evaluates many splits in which most ports keep their flow;
+ * their outflows are then looked up, not recomputed.
  */
 export function memoisedOutflow(
   p: Profile,
   o: ProfileWithdrawalOptions,
   which: OutflowColumns = 'all',
+  layers = new LayerMemo(p, o),
 ): OutflowFunction {
   const byDepth = new Map<number, Map<number, PortOutflow>>();
   return (depth, flow) => {
@@ -59,7 +65,7 @@ export function memoisedOutflow(
     if (!memo) byDepth.set(depth, (memo = new Map()));
     let out = memo.get(flow);
     if (!out) {
-      out = portOutflow(p, depth, flow, o, which);
+      out = portOutflow(p, depth, flow, o, which, layers.layer(depth, flow));
       memo.set(flow, out);
     }
     return out;
@@ -70,15 +76,16 @@ function envelope(
   depths: readonly number[],
   members: number[],
   flow: number,
-  outflow: OutflowFunction,
+  limitsOf: LimitsFunction,
 ): InterferenceGroup {
-  const limits = members.map((i) => outflow(depths[i], flow).limits);
-  return {
-    ports: members,
-    flow,
-    topDepth: Math.min(...limits.map((l) => l.topDepth)),
-    bottomDepth: Math.max(...limits.map((l) => l.bottomDepth)),
-  };
+  let topDepth = Infinity,
+    bottomDepth = -Infinity;
+  for (const i of members) {
+    const l = limitsOf(depths[i], flow);
+    topDepth = Math.min(topDepth, l.topDepth);
+    bottomDepth = Math.max(bottomDepth, l.bottomDepth);
+  }
+  return { ports: members, flow, topDepth, bottomDepth };
 }
 
 /**
@@ -90,14 +97,14 @@ function envelope(
 export function interferenceGroups(
   depths: readonly number[],
   flows: readonly number[],
-  outflow: OutflowFunction,
+  limitsOf: LimitsFunction,
   rounds = Infinity,
 ): InterferenceGroup[] {
   const open = depths
     .map((_, i) => i)
     .filter((i) => flows[i] > 0)
     .sort((a, b) => depths[a] - depths[b] || a - b);
-  let groups = open.map((i) => envelope(depths, [i], flows[i], outflow));
+  let groups = open.map((i) => envelope(depths, [i], flows[i], limitsOf));
   for (let round = 0; round < Math.min(rounds, open.length); round++) {
     const joined: InterferenceGroup[] = [];
     let changed = false;
@@ -115,7 +122,7 @@ export function interferenceGroups(
       } else joined.push(g);
     }
     if (!changed) break;
-    groups = joined.map((g) => (g.ports.length > 1 && rounds > 1 ? envelope(depths, g.ports, g.flow, outflow) : g));
+    groups = joined.map((g) => (g.ports.length > 1 && rounds > 1 ? envelope(depths, g.ports, g.flow, limitsOf) : g));
   }
   return groups;
 }
@@ -129,8 +136,9 @@ export function combinedOutflows(
   depths: readonly number[],
   flows: readonly number[],
   outflow: OutflowFunction,
+  limitsOf: LimitsFunction,
 ): { outflows: PortOutflow[]; groups: InterferenceGroup[] } {
-  const groups = interferenceGroups(depths, flows, outflow);
+  const groups = interferenceGroups(depths, flows, limitsOf);
   const groupFlow = depths.map(() => 0);
   for (const g of groups) for (const i of g.ports) groupFlow[i] = g.flow;
   const outflows = depths.map((d, i) =>
@@ -149,12 +157,13 @@ export function groupFluxProfile(
   flows: readonly number[],
   g: InterferenceGroup,
   o: ProfileWithdrawalOptions,
+  layers = new LayerMemo(p, o),
 ): { depth: number[]; fluxPerDepth: number[] } {
   const members = g.ports.map((i) => ({
     share: flows[i] / g.flow,
-    v: withdrawalVelocityProfile(p, depths[i], g.flow, o),
+    v: withdrawalVelocityProfile(p, depths[i], g.flow, o, layers.layer(depths[i], g.flow)),
   }));
-  const depth = [...new Set(members.flatMap((m) => m.v.depth))].sort((a, b) => a - b);
+  const depth = mergeAscending(members.map((m) => m.v.depth));
   const fluxPerDepth = depth.map(() => 0);
   // each member adds its piecewise-linear curve over its own span only (it is zero outside it)
   for (const m of members) {

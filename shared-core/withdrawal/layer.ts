@@ -107,6 +107,35 @@ export function halfThicknessPointSinkImbergerPatterson1990(
   return { halfThickness: d, totalThickness: 2 * d, regime: r > 1 ? 'inertial' : 'viscous', r, regimeAssumed: false };
 }
 
+/**
+ * The test a ≥ δ(N) of one sink and discharge, on a [m] and N² [1/s2] rather than N: the two formulas above with their
+ * roots raised away (inertial point sink δ = (Q/N)^⅓: a⁶N² ≥ Q²; viscous: a⁶N² ≥ (2.9³ (νκ)^½ L)²; inertial line sink
+ * δ = 2 (q/N)^½: a⁴N² ≥ 16 q²; viscous: a⁶N² ≥ (8νL)², inertial while N < q³/(ν²L²)). The layer-limit scan of a
+ * measured profile tests hundreds of distances per limit with it, free of square and cube roots; false for N² ≤ 0.
+ * @param discharge [m3/s] (point sink) or per unit width [m2/s] (line sink)
+ */
+export function reachesHalfThickness(
+  sink: SinkKind,
+  discharge: number,
+  length?: number,
+  nu = 1.0e-6,
+  kappa = 1.43e-7,
+): (a: number, n2: number) => boolean {
+  if (sink === 'point') {
+    // R₃ = Q/(Lν) does not depend on N: one regime for every distance
+    const inertial = length === undefined || discharge / (length * nu) > 1;
+    const k = inertial ? discharge : 2.9 ** 3 * Math.sqrt(nu * kappa) * length;
+    const k2 = k * k;
+    return (a, n2) => n2 > 0 && a * a * a * a * a * a * n2 >= k2;
+  }
+  const inertial2 = 16 * discharge * discharge;
+  if (length === undefined) return (a, n2) => n2 > 0 && a * a * a * a * n2 >= inertial2;
+  const nSwitch = discharge ** 3 / (nu * nu * length * length);
+  const viscous2 = (8 * nu * length) ** 2;
+  return (a, n2) =>
+    n2 > 0 && (n2 < nSwitch * nSwitch ? a * a * a * a * n2 >= inertial2 : a * a * a * a * a * a * n2 >= viscous2);
+}
+
 /** Validated withdrawal layer in linear stratification for either sink, with warnings. */
 export function withdrawalLayer(input: LayerInput): LayerResult {
   const n = requireInRange('buoyancy_frequency', input.n, '1/s', { ...positive, max: 1 });

@@ -5,10 +5,11 @@ import { GRAVITY } from '../quantities';
 import { brentRoot } from '../numerics/roots';
 import { caution, type Warning } from '../core/warning';
 import { profileBottom, type Profile } from '../profile/profile';
-import { DepthCursor } from './depth-cursor';
+import { DepthCursor, firstIndex } from './depth-cursor';
 import {
   halfThicknessLineSinkImberger1976,
   halfThicknessPointSinkImbergerPatterson1990,
+  reachesHalfThickness,
   type WithdrawalRegime,
 } from './layer';
 import type { SinkKind } from './two-layer';
@@ -67,6 +68,11 @@ export interface ProfileWithdrawal {
   warnings: Warning[];
 }
 
+const BED_DEPTH = { ...positive, max: 11000 };
+const DISCHARGE = { ...nonNegative, max: 1e5 };
+const SLOT_WIDTH = { ...positive, max: 1e5 };
+const RESERVOIR_LENGTH = { ...positive, max: 1e6 };
+
 /** Validated options shared by the profile methods. */
 export function checkProfileOptions(
   p: Profile,
@@ -74,15 +80,15 @@ export function checkProfileOptions(
   discharge: number,
   o: ProfileWithdrawalOptions,
 ): { bed: number } {
-  const bed = requireInRange('bottom_depth', o.bottomDepth ?? profileBottom(p), 'm', { ...positive, max: 11000 });
+  const bed = requireInRange('bottom_depth', o.bottomDepth ?? profileBottom(p), 'm', BED_DEPTH);
   requireInRange('port_depth', portDepth, 'm', { min: 0, max: bed });
-  requireInRange('discharge', discharge, 'm3/s', { ...nonNegative, max: 1e5 });
+  requireInRange('discharge', discharge, 'm3/s', DISCHARGE);
   if (o.sink === 'line') {
     if (o.width === undefined)
       throw new InputError('width', '(missing)', 'm', '> 0 m', 'a line sink needs the slot width across the channel');
-    requireInRange('width', o.width, 'm', { ...positive, max: 1e5 });
+    requireInRange('width', o.width, 'm', SLOT_WIDTH);
   }
-  if (o.length !== undefined) requireInRange('reservoir_length', o.length, 'm', { ...positive, max: 1e6 });
+  if (o.length !== undefined) requireInRange('reservoir_length', o.length, 'm', RESERVOIR_LENGTH);
   return { bed };
 }
 
@@ -142,17 +148,50 @@ function sideLimit(
     const d = linearHalfThickness(nAt(a), discharge, o).d;
     return Number.isFinite(d) ? a - d : -maxDistance;
   };
+  // the scan tests f(a) ≥ 0 in its root-free form; Brent's method then finds the root of f within the step
+  const reached =
+    o.sink === 'line'
+      ? reachesHalfThickness('line', discharge / (o.width as number), o.length, o.nu)
+      : reachesHalfThickness('point', discharge, o.length, o.nu, o.kappa);
   const steps = 400;
-  let prev = maxDistance * 1e-9;
-  for (let k = 1; k <= steps; k++) {
-    const a = (maxDistance * k) / steps;
-    if (f(a) >= 0) {
-      const root = brentRoot(f, prev, a, 1e-9 * maxDistance) ?? a;
-      return side(root, false);
-    }
-    prev = a;
+  const k = firstReachingStep(p.depth, portDepth, sign, maxDistance, steps, rhoPort, drho, reached);
+  if (k === 0) return side(maxDistance, true);
+  const a = (maxDistance * k) / steps,
+    prev = k === 1 ? maxDistance * 1e-9 : (maxDistance * (k - 1)) / steps;
+  return side(brentRoot(f, prev, a, 1e-9 * maxDistance) ?? a, false);
+}
+
+/**
+ * The first of `steps` equal steps of distance from the port (1 … steps) at which the layer reaches, a ≥ δ(N), or 0 when
+ * none does. Between two profile samples Δρ is linear in the distance, so over the steps inside one such stretch it is
+ * largest at one end; as a ≥ δ(N) grows with a and with N, a stretch that cannot reach with its largest N² (taken at its
+ * nearest step) at its farthest step is passed over whole, and the others are tested step by step.
+ */
+function firstReachingStep(
+  depths: readonly number[],
+  portDepth: number,
+  sign: -1 | 1,
+  maxDistance: number,
+  steps: number,
+  rhoPort: number,
+  drho: (a: number) => number,
+  reached: (a: number, n2: number) => boolean,
+): number {
+  const distanceAt = (k: number) => (maxDistance * k) / steps;
+  const n2At = (a: number, densityDifference = drho(a)) => (GRAVITY * densityDifference) / (rhoPort * a);
+  let j = sign > 0 ? firstIndex(depths, (d) => d > portDepth) : firstIndex(depths, (d) => d >= portDepth) - 1;
+  for (let k = 1; k <= steps;) {
+    const a0 = distanceAt(k);
+    while (j >= 0 && j < depths.length && sign * (depths[j] - portDepth) <= a0) j += sign;
+    const end = j >= 0 && j < depths.length ? sign * (depths[j] - portDepth) : Infinity;
+    let last = k;
+    while (last < steps && distanceAt(last + 1) <= end) last++;
+    const n2Max = n2At(a0, Math.max(drho(a0), drho(distanceAt(last))));
+    if (reached(distanceAt(last), n2Max)) {
+      for (; k <= last; k++) if (reached(distanceAt(k), n2At(distanceAt(k)))) return k;
+    } else k = last + 1;
   }
-  return side(maxDistance, true);
+  return 0;
 }
 
 /**

@@ -2,8 +2,9 @@ import type { MethodInfo } from '../core/method';
 import type { Warning } from '../core/warning';
 import { interpolateAt, type Profile } from '../profile/profile';
 import { DepthCursor } from './depth-cursor';
-import { LayerShape, layerNodes } from './layer-shape';
-import { withdrawalLimitsBohanGrace1973, type ProfileWithdrawal, type ProfileWithdrawalOptions } from './measured';
+import { LayerShape } from './layer-shape';
+import type { ProfileWithdrawal, ProfileWithdrawalOptions } from './measured';
+import { layerMean, portLayer, type PortLayer } from './port-layer';
 
 export const WITHDRAWAL_VELOCITY: MethodInfo = {
   id: 'withdrawal-velocity-bohan-grace1973',
@@ -33,19 +34,9 @@ export interface WithdrawalVelocityProfile {
   limits: ProfileWithdrawal;
 }
 
-/** The nodes of a layer and v/v_max there, with the density read by one cursor walk. */
-function shapeOnNodes(p: Profile, w: ProfileWithdrawal): { depth: number[]; rel: number[] } {
-  const depth = layerNodes(p, w);
-  const cursor = new DepthCursor(p.depth);
-  const shape = new LayerShape(w, cursor.seek(w.portDepth).value(p.density));
-  const rel = new Array<number>(depth.length);
-  for (let k = 0; k < depth.length; k++) rel[k] = shape.at(depth[k], cursor.seek(depth[k]).value(p.density));
-  return { depth, rel };
-}
-
 /**
  * Velocity distribution of one port's withdrawal layer on a measured profile, for charts and for the outflow quality.
- * @param p profile; @param portDepth [m]; @param discharge [m3/s]
+ * @param p profile; @param portDepth [m]; @param discharge [m3/s]; @param layer the port's layer, when already worked out
  * @returns depth [m], v/v_max [1], flux per depth [m2/s] (trapezoid integral = discharge)
  */
 export function withdrawalVelocityProfile(
@@ -53,20 +44,13 @@ export function withdrawalVelocityProfile(
   portDepth: number,
   discharge: number,
   o: ProfileWithdrawalOptions,
+  layer: PortLayer = portLayer(p, portDepth, discharge, o),
 ): WithdrawalVelocityProfile {
-  const limits = withdrawalLimitsBohanGrace1973(p, portDepth, discharge, o);
+  const { limits, depth, rel, area } = layer;
   if (!(limits.bottomDepth - limits.topDepth > 0))
     return { depth: [portDepth], relativeVelocity: [1], fluxPerDepth: [0], limits };
-  const { depth, rel } = shapeOnNodes(p, limits);
-  const area = trapezoid(depth, rel);
   const fluxPerDepth = rel.map((s) => (area > 0 ? (discharge * s) / area : 0));
   return { depth, relativeVelocity: rel, fluxPerDepth, limits };
-}
-
-function trapezoid(x: readonly number[], y: readonly number[]): number {
-  let s = 0;
-  for (let i = 1; i < x.length; i++) s += 0.5 * (y[i] + y[i - 1]) * (x[i] - x[i - 1]);
-  return s;
 }
 
 /** Flow-weighted value of one profile column in a port's outflow. */
@@ -110,7 +94,8 @@ function columnsOf(p: Profile, which: OutflowColumns): { name: string; unit: str
 
 /**
  * Flow-weighted quality of one port's outflow: c̄ = ∫ v c dd / ∫ v dd for every column of the profile (trapezoid rule
- * on the layer's nodes, one cursor walk). A closed port (discharge 0) reports the values at the port depth.
+ * on the layer's nodes, gathered into one weight per profile sample). A closed port (discharge 0) reports the values at
+ * the port depth. @param layer the port's layer, when already worked out
  */
 export function portOutflow(
   p: Profile,
@@ -118,30 +103,13 @@ export function portOutflow(
   discharge: number,
   o: ProfileWithdrawalOptions,
   which: OutflowColumns = 'all',
+  layer: PortLayer = portLayer(p, portDepth, discharge, o),
 ): PortOutflow {
-  const limits = withdrawalLimitsBohanGrace1973(p, portDepth, discharge, o);
-  const named = columnsOf(p, which);
-  const sums = new Array<number>(named.length).fill(0);
-  let weight = 0;
-  if (limits.bottomDepth - limits.topDepth > 0) {
-    const { depth, rel } = shapeOnNodes(p, limits);
-    weight = trapezoid(depth, rel);
-    const cursor = new DepthCursor(p.depth);
-    const prev = new Array<number>(named.length).fill(0);
-    for (let i = 0; i < depth.length; i++) {
-      cursor.seek(depth[i]);
-      for (let k = 0; k < named.length; k++) {
-        const y = rel[i] * cursor.value(named[k].values);
-        if (i > 0) sums[k] += 0.5 * (y + prev[k]) * (depth[i] - depth[i - 1]);
-        prev[k] = y;
-      }
-    }
-  }
   const atPort = new DepthCursor(p.depth).seek(portDepth);
-  const columns = named.map((c, k) => ({
+  const columns = columnsOf(p, which).map((c) => ({
     name: c.name,
     unit: c.unit,
-    value: weight > 0 ? sums[k] / weight : atPort.value(c.values),
+    value: layer.area > 0 ? layerMean(layer, c.values) : atPort.value(c.values),
   }));
   return {
     portDepth,
@@ -149,7 +117,7 @@ export function portOutflow(
     temperature: columns[0].value,
     density: columns.find((c) => c.name === 'density')!.value,
     columns,
-    limits,
-    warnings: limits.warnings,
+    limits: layer.limits,
+    warnings: layer.limits.warnings,
   };
 }

@@ -3,7 +3,8 @@ import { positive, requireInRange } from '../core/range';
 import { caution } from '../core/warning';
 import type { Profile } from '../profile/profile';
 import { blendRelease, checkPorts, type BlendOptions, type BlendResult, type Port } from './blend';
-import { combinedOutflows, memoisedOutflow, type OutflowFunction } from './interference';
+import { combinedOutflows, memoisedOutflow, type LimitsFunction, type OutflowFunction } from './interference';
+import { LayerMemo } from './port-layer';
 import { goldenMax, meetGoal } from './search';
 
 /** Target of the optimiser: one temperature, or a band [min, max] [degC]. */
@@ -30,12 +31,18 @@ const clamp = (x: number, lo: number, hi: number) => Math.min(hi, Math.max(lo, x
  * The release temperature of a split. Only the ports whose flow (or, combined, whose group's flow) changed are
  * recomputed: the others come from the memo.
  */
-function releaseTemperature(ports: readonly Port[], release: number, o: BlendOptions, outflow: OutflowFunction) {
+function releaseTemperature(
+  ports: readonly Port[],
+  release: number,
+  o: BlendOptions,
+  outflow: OutflowFunction,
+  limitsOf: LimitsFunction,
+) {
   const depths = ports.map((port) => port.depth);
   return (f: number[]): number => {
     const outs =
       o.interference === 'combined'
-        ? combinedOutflows(depths, f, outflow).outflows
+        ? combinedOutflows(depths, f, outflow, limitsOf).outflows
         : ports.map((port, i) => outflow(port.depth, f[i]));
     return outs.reduce((s, out, i) => s + f[i] * out.temperature, 0) / release;
   };
@@ -167,7 +174,8 @@ function targetBand(target: ReleaseTarget): { min: number; max: number } {
  * flow is moved between pairs of ports near each other in depth from the closest split to find another crossing. When the
  * target cannot be met, `feasible` is false and the closest achievable split is returned. The work grows linearly with the
  * number of ports: a bounded number of evaluations, each recomputing only the ports whose flow changed.
- * @param release [m3/s] total release; @returns the split, its blend, feasibility and the achievable range [degC]
+ * @param release [m3/s] total release; @param layers port layers of this profile and sink (the caller may chart from them)
+ * @returns the split, its blend, feasibility and the achievable range [degC]
  */
 export function optimiseRelease(
   p: Profile,
@@ -175,13 +183,14 @@ export function optimiseRelease(
   release: number,
   target: ReleaseTarget,
   o: BlendOptions,
+  layers = new LayerMemo(p, o),
 ): OptimisedRelease {
   checkPorts(ports);
   const capacity = ports.reduce((s, port) => s + port.capacity, 0);
   requireInRange('release', release, 'm3/s', { ...positive, max: capacity });
   const band = targetBand(target);
-  const outflow = memoisedOutflow(p, o, 'temperature-density');
-  const temperatureOf = releaseTemperature(ports, release, o, outflow);
+  const outflow = memoisedOutflow(p, o, 'temperature-density', layers);
+  const temperatureOf = releaseTemperature(ports, release, o, outflow, (d, q) => layers.limits(d, q));
   const cold = extremeSplit(ports, release, temperatureOf, outflow, -1),
     warm = extremeSplit(ports, release, temperatureOf, outflow, 1);
   const tCold = temperatureOf(cold),
@@ -203,7 +212,7 @@ export function optimiseRelease(
       jump = other === undefined;
     }
   }
-  const blend = blendRelease(p, ports, flows, o, memoisedOutflow(p, o));
+  const blend = blendRelease(p, ports, flows, o, layers);
   const feasible = blend.temperature >= band.min - tol && blend.temperature <= band.max + tol;
   const warnings = [...blend.warnings];
   if (!feasible) {

@@ -169,7 +169,7 @@ describe('combined interference invariants', () => {
     expect(alone.warnings.find((w) => w.code === 'interference-ignored')?.message).toMatch(
       /12 m and 16 m overlap, but each is computed as if/,
     );
-    expect(interferenceGroups([12, 16], [10, 0], directOutflow(p, combined))).toHaveLength(1);
+    expect(interferenceGroups([12, 16], [10, 0], (d, q) => directOutflow(p, combined)(d, q).limits)).toHaveLength(1);
   });
 
   it('release-blend combines interfering ports by default and charts the combined withdrawal', () => {
