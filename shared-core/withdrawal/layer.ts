@@ -13,21 +13,22 @@ export const WITHDRAWAL_LINE_SINK: MethodInfo = {
   source:
     'Imberger, J., Thompson, R., Fandry, C. (1976). Selective withdrawal from a finite rectangular tank. J. Fluid Mech. 78, 489–512 ' +
     '(steady layer: δ = 2L F^½ when R = F Gr^⅓ > 1, δ = 2L Gr^−⅙ when R < 1; F = q/(NL²), Gr = N²L⁴/ν²); as summarised in ' +
-    'Fischer, H.B., List, E.J., Koh, R.C.Y., Imberger, J., Brooks, N.H. (1979). Mixing in Inland and Coastal Waters, Academic Press, Ch. 6 ' +
-    '(chapter from memory); viscous–diffusive layer: Koh, R.C.Y. (1966). Viscous stratified flow towards a sink. J. Fluid Mech. 24, 555–575.',
+    'Fischer, H.B., List, E.J., Koh, R.C.Y., Imberger, J., Brooks, N.H. (1979). Mixing in Inland and Coastal Waters, Academic Press, Ch. 6; ' +
+    'viscous–diffusive layer: Koh, R.C.Y. (1966). Viscous stratified flow towards a sink. J. Fluid Mech. 24, 555–575.',
   equation:
     'δ = half-thickness (port to one limit); inertial: δ = 2 (q/N)^½; viscous: δ = 2 L Gr^−⅙ = 2 (νL/N)^⅓; R = F Gr^⅓ = q/(N^⅓ ν^⅔ L^⅔) ' +
     'chooses (R > 1 inertial); the two formulas join at R = 1; total thickness 2δ when neither surface nor bed cuts the layer',
   validity: {
     R: { min: 0.01, max: 1e6, unit: '1', note: 'laboratory range of the regime parameter' },
   },
+  provenance: 'The chapter of Fischer et al. (1979) summarising the line-sink layer was not compared with the book.',
 };
 
 export const WITHDRAWAL_POINT_SINK: MethodInfo = {
   id: 'withdrawal-point-sink-imberger-patterson1990',
   title: 'Withdrawal-layer half-thickness for a point sink in linear stratification',
   source:
-    'Imberger, J., Patterson, J.C. (1990). Physical limnology. Adv. Appl. Mech. 27, 303–475, §VIII Outflow (from memory: ' +
+    'Imberger, J., Patterson, J.C. (1990). Physical limnology. Adv. Appl. Mech. 27, 303–475, §VIII Outflow (' +
     'δ = L F₃^⅓ = (Q/N)^⅓ when R₃ = F₃ Gr^½ > 1; δ = 2.9 (νκ)^⅙ (L/N)^⅓ when R₃ ≤ 1, after Lawrence, G.A., Imberger, J. (1979), ' +
     'Selective withdrawal through a point sink in a continuously stratified fluid with a pycnocline, Univ. W. Australia Rep. ED-79-002); ' +
     'scaling δ ∝ (Q/N)^⅓: Ivey, G.N., Blake, S. (1985). J. Fluid Mech. 161, 115–137.',
@@ -36,6 +37,9 @@ export const WITHDRAWAL_POINT_SINK: MethodInfo = {
   validity: {
     R: { min: 0.01, max: 1e6, unit: '1', note: 'laboratory range of the regime parameter' },
   },
+  provenance: 'The chapter of Fischer et al. (1979) summarising the line-sink layer was not compared with the book.',
+  provenance:
+    'The point-sink coefficients are as quoted in Imberger & Patterson (1990) after Lawrence & Imberger (1979); not compared with the original report.',
 };
 
 export interface LayerInput {

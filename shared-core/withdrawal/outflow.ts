@@ -11,11 +11,13 @@ export const WITHDRAWAL_VELOCITY: MethodInfo = {
   title: 'Velocity distribution in the withdrawal layer and flow-weighted outflow quality',
   source:
     'Bohan, J.P., Grace, J.L. Jr. (1973). Selective withdrawal from man-made lakes. Tech. Rep. H-73-4, U.S. Army Engineer ' +
-    'Waterways Experiment Station (normalised velocity v/v_max = 1 − (Δρ/Δρ_limit)² on each side of the port; form from memory). ' +
+    'Waterways Experiment Station (normalised velocity v/v_max = 1 − (Δρ/Δρ_limit)² on each side of the port). ' +
     'Outflow quality: conservation of mass and of each constituent, c̄ = ∫ v c dd / ∫ v dd (Fischer et al. 1979, Ch. 6).',
   equation:
     'v/v_max = 1 − max((Δρ/Δρ_limit)², (a/a_limit)²), Δρ = |ρ(d) − ρ_port|, a = |d − d_port| (the two terms coincide in linear stratification); a side cut by the surface or the bed: v/v_max = 1 − (a/δ)²; c̄ = ∫ v c dd / ∫ v dd',
   validity: {},
+  provenance:
+    'The velocity shape is as commonly quoted from Bohan & Grace (1973); not compared with the original report.',
 };
 
 /** v/v_max in [0, 1] at depth d [m] of a port's withdrawal layer (the shape of LayerShape). */
