@@ -37,7 +37,6 @@ export const WITHDRAWAL_POINT_SINK: MethodInfo = {
   validity: {
     R: { min: 0.01, max: 1e6, unit: '1', note: 'laboratory range of the regime parameter' },
   },
-  provenance: 'The chapter of Fischer et al. (1979) summarising the line-sink layer was not compared with the book.',
   provenance:
     'The point-sink coefficients are as quoted in Imberger & Patterson (1990) after Lawrence & Imberger (1979); not compared with the original report.',
 };
