@@ -54,9 +54,9 @@ describe('the workspace speaks in words', () => {
     expect(await identifiersIn(page.getByRole('navigation', { name: 'site outline' }).innerText())).toEqual([]);
     expect(await identifiersIn(page.locator('.readouts').innerText())).toEqual([]);
     const found: string[] = [];
-    await eachDetail(async (id) =>
-      found.push(...(await identifiersIn(detail().innerText())).map((n) => `${id}: ${n}`)),
-    );
+    await eachDetail(async (id) => {
+      found.push(...(await identifiersIn(detail().innerText())).map((n) => `${id}: ${n}`));
+    });
     expect(found).toEqual([]);
   });
 
@@ -115,9 +115,10 @@ describe('what the cards say about their results', () => {
     let dashed = 0;
     for (let i = 0; i < n; i++) {
       const card = cards.nth(i);
-      const style = await card.evaluate((el) => getComputedStyle(el).borderLeftStyle);
+      // the callback runs in the page; getComputedStyle is the page's own
+      const style = await card.evaluate((el) => (globalThis as any).getComputedStyle(el).borderLeftStyle as string);
       const says = await card.getByTestId('outside-validity').count();
-      expect(style === 'dashed', await card.getAttribute('data-estimate')).toBe(says === 1);
+      expect(style === 'dashed', (await card.getAttribute('data-estimate')) ?? '').toBe(says === 1);
       dashed += says;
     }
     expect(dashed).toBeGreaterThan(0);
