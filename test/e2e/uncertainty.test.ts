@@ -13,6 +13,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Page } from 'playwright-core';
 import { loadSite, runEstimate, type Site } from '../../shared-core/site';
 import { openWorkspaceSession, ROOT, type WorkspaceSession } from './shell-process';
+import { nameText } from '../../shared-core/core/vocabulary';
 
 // 1 international foot = 0.3048 m exactly (NIST SP 811, 2008, Appendix B.8)
 const FOOT = 0.3048;
@@ -95,7 +96,8 @@ describe('uncertainty bands in the workspace', () => {
     const [low, median, high] = (await block.locator('tr[data-name="plunge_depth"] td').allTextContents()).map(Number);
     const band = expectedBand('plunge-summer', 'plunge_depth');
     expect(roundsTo(low, band.low) && roundsTo(median, band.median) && roundsTo(high, band.high)).toBe(true);
-    expect(await block.textContent()).toContain('discharge');
+    // the varied input, named as the workspace names it
+    expect(await block.textContent()).toContain(nameText('discharge', 'plunge-depth', 'input'));
     expect(await block.textContent()).toContain(
       'The band covers the stated input uncertainties only, not the error of the method itself.',
     );
@@ -118,11 +120,14 @@ describe('uncertainty bands in the workspace', () => {
   });
 
   it('computes a band for an uncertainty typed in the editor, and names the field of one that cannot be read', async () => {
-    await page.getByRole('button', { name: /^ammonia-dilution/ }).click();
+    await page
+      .getByRole('navigation', { name: 'site outline' })
+      .getByRole('button', { name: /^Dilution required to meet a criterion/ })
+      .click();
     await expect
       .poll(() => page.getByRole('heading', { name: 'Input uncertainty (one standard deviation)' }).count())
       .toBe(1);
-    const effluent = page.getByLabel('± effluent', { exact: true });
+    const effluent = page.getByLabel(/^± Effluent concentration/);
     expect(await effluent.getAttribute('placeholder')).toContain('10%');
     await effluent.fill('10%');
     await expect.poll(() => bandLine('ammonia-dilution').textContent(), { timeout: 20_000 }).toMatch(/% band/);
@@ -130,7 +135,7 @@ describe('uncertainty bands in the workspace', () => {
     const band = expectedBand('ammonia-dilution', 'dilution', { effluent: '10%' });
     expect(roundsTo(shown.low, band.low) && roundsTo(shown.high, band.high)).toBe(true);
 
-    const ambient = page.getByLabel('± ambient', { exact: true });
+    const ambient = page.getByLabel(/^± Ambient concentration/);
     await ambient.fill('abc');
     await expect
       .poll(() => bandLine('ammonia-dilution').textContent(), { timeout: 20_000 })
@@ -150,26 +155,38 @@ describe('uncertainty bands in the workspace', () => {
 
   it('never makes a newer band wait behind a long one', async () => {
     // release-blend optimises the port split on every draw: its band takes minutes, far longer than this test waits
-    await page.getByRole('button', { name: /^release-summer/ }).click();
-    await page.getByLabel(/^± release \(/).fill('5%');
+    await page
+      .getByRole('navigation', { name: 'site outline' })
+      .getByRole('button', { name: /^Port split meeting/ })
+      .click();
+    await page.getByLabel(/^± Total release \(/).fill('5%');
     await expect.poll(() => bandLine('release-summer').textContent()).toContain('computing band…');
     await page.waitForTimeout(1000); // the long band is running in the worker now
-    await page.getByRole('button', { name: /^ammonia-dilution/ }).click();
-    await page.getByLabel('± criterion', { exact: true }).fill('0.1');
+    await page
+      .getByRole('navigation', { name: 'site outline' })
+      .getByRole('button', { name: /^Dilution required to meet a criterion/ })
+      .click();
+    await page.getByLabel(/^± Criterion concentration/).fill('0.1');
     await expect.poll(() => bandLine('ammonia-dilution').textContent(), { timeout: 10_000 }).toMatch(/% band/);
     expect(await bandLine('release-summer').textContent()).toContain('computing band…');
     const shown = parseBandLine((await bandLine('ammonia-dilution').textContent())!);
     const band = expectedBand('ammonia-dilution', 'dilution', { effluent: '10%', criterion: '0.1' });
     expect(roundsTo(shown.low, band.low) && roundsTo(shown.high, band.high)).toBe(true);
     // removing the uncertainty removes the band (and stops its computation)
-    await page.getByRole('button', { name: /^release-summer/ }).click();
-    await page.getByLabel(/^± release \(/).fill('');
+    await page
+      .getByRole('navigation', { name: 'site outline' })
+      .getByRole('button', { name: /^Port split meeting/ })
+      .click();
+    await page.getByLabel(/^± Total release \(/).fill('');
     await expect.poll(() => bandLine('release-summer').count()).toBe(0);
   });
 
   it('an edit undone at once finds its band again, never stuck computing', async () => {
-    await page.getByRole('button', { name: /^ammonia-dilution/ }).click();
-    const criterion = page.getByLabel('± criterion', { exact: true });
+    await page
+      .getByRole('navigation', { name: 'site outline' })
+      .getByRole('button', { name: /^Dilution required to meet a criterion/ })
+      .click();
+    const criterion = page.getByLabel(/^± Criterion concentration/);
     await expect.poll(() => bandLine('ammonia-dilution').textContent(), { timeout: 20_000 }).toMatch(/% band/);
     const before = await bandLine('ammonia-dilution').textContent();
     await criterion.fill('0.2');
@@ -178,8 +195,11 @@ describe('uncertainty bands in the workspace', () => {
   });
 
   it('a band can be stopped and computed again on request', async () => {
-    await page.getByRole('button', { name: /^ammonia-dilution/ }).click();
-    await page.getByLabel('± criterion', { exact: true }).fill('0.15');
+    await page
+      .getByRole('navigation', { name: 'site outline' })
+      .getByRole('button', { name: /^Dilution required to meet a criterion/ })
+      .click();
+    await page.getByLabel(/^± Criterion concentration/).fill('0.15');
     const line = bandLine('ammonia-dilution');
     await line.getByRole('button', { name: 'stop computing the band' }).click();
     await expect.poll(() => line.textContent()).toContain('band stopped');
