@@ -89,3 +89,9 @@ export interface JetState {
   /** Q(T_jet − T_ref) [m3 K/s] */
   Th: number;
 }
+
+/**
+ * Allowed exit velocity of a port [m/s]: below 1 µm/s there is no discharge to follow (and the integral
+ * model's fluxes underflow); above 100 m/s no outfall runs.
+ */
+export const EXIT_VELOCITY = { min: 1e-6, max: 100 } as const;

@@ -1,6 +1,7 @@
 import { requireInRange, positive, nonNegative } from '../core/range';
 import { validityWarnings, type MethodInfo } from '../core/method';
 import type { Warning } from '../core/warning';
+import { EXIT_VELOCITY } from './closure';
 
 export const JET_LENGTH_SCALES: MethodInfo = {
   id: 'jet-length-scales',
@@ -70,7 +71,7 @@ const fmt = (x: number) => (x >= 100 ? x.toFixed(0) : x >= 10 ? x.toFixed(1) : x
  */
 export function jetLengthScales(d: JetDischarge): JetLengthScales {
   const D = requireInRange('diameter', d.diameter, 'm', { ...positive, max: 20 });
-  const U = requireInRange('velocity', d.velocity, 'm/s', { ...positive, max: 100 });
+  const U = requireInRange('velocity', d.velocity, 'm/s', EXIT_VELOCITY);
   const g = requireInRange('g_prime', d.gPrime, 'm/s2', { min: -5, max: 5 });
   const ua = requireInRange('current', d.current ?? 0, 'm/s', { ...nonNegative, max: 10 });
   const N = requireInRange('buoyancy_frequency', d.buoyancyFrequency ?? 0, '1/s', { ...nonNegative, max: 2 });

@@ -7,6 +7,7 @@ import { ambientTables, type AmbientTables, type AmbientWater, type Current } fr
 import type { JetGeometry, JetState } from './closure';
 import { jetGaugesInto, jetRhsFor, newJetGauges, scaledState, type JetEquations, type JetGauges } from './equations';
 import { jetLengthScales, type JetLengthScales } from './length-scales';
+import { EXIT_VELOCITY } from './closure';
 
 /** What a jet run needs from its caller (see BuoyantJetInput for the meaning of each field). */
 export interface JetRunInput {
@@ -82,7 +83,7 @@ export const JET_DEFAULT_MAX_PATH = 10000;
 /** Validates a run's input and sets up the ambient tables and the port state. */
 export function prepareJetRun(input: JetRunInput): JetRun {
   const D = requireInRange('diameter', input.diameter, 'm', { ...positive, max: 20 });
-  const U = requireInRange('velocity', input.velocity, 'm/s', { ...positive, max: 100 });
+  const U = requireInRange('velocity', input.velocity, 'm/s', EXIT_VELOCITY);
   const phi = requireInRange('angle', input.angle, 'deg', { min: -90, max: 90 }) * deg;
   const theta = requireInRange('horizontal_angle', input.horizontalAngle ?? 0, 'deg', { min: -180, max: 180 }) * deg;
   const H = requireInRange('port_depth', input.portDepth, 'm', { ...positive, max: 11000 });
