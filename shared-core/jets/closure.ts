@@ -6,13 +6,13 @@ import type { MethodInfo } from '../core/method';
  * converted with α_top-hat = √2 α_Gauss (b_top-hat = √2 b_Gauss, same volume and momentum fluxes).
  */
 export const ENTRAINMENT = {
-  /** Gaussian jet coefficient 0.0535 ± 0.0025 (Fischer et al. 1979, Table 9.1; from memory) → top-hat */
+  /** Gaussian jet coefficient 0.0535 ± 0.0025 (Fischer et al. 1979, Table 9.1 — see BUOYANT_JET.provenance) → top-hat */
   alphaJet: Math.SQRT2 * 0.0535,
-  /** Gaussian plume coefficient 0.0833 ± 0.0042 (Fischer et al. 1979, Table 9.1; from memory) → top-hat */
+  /** Gaussian plume coefficient 0.0833 ± 0.0042 (Fischer et al. 1979, Table 9.1 — see BUOYANT_JET.provenance) → top-hat */
   alphaPlume: Math.SQRT2 * 0.0833,
-  /** top-hat crossflow ("forced") entrainment coefficient (Hoult, Fay & Forney 1969; from memory) */
+  /** top-hat crossflow ("forced") entrainment coefficient (Hoult, Fay & Forney 1969 — see BUOYANT_JET.provenance) */
   betaCrossflow: 0.6,
-  /** concentration-to-velocity width ratio λ of Gaussian profiles (Fischer et al. 1979 §9.1; from memory) */
+  /** concentration-to-velocity width ratio λ of Gaussian profiles (Fischer et al. 1979 §9.1 — see BUOYANT_JET.provenance) */
   lambda: 1.19,
 } as const;
 
@@ -24,10 +24,10 @@ export const RICHARDSON_PLUME = (8 * ENTRAINMENT.alphaPlume) / 5;
  * Gaussian coefficients converted with the same √2 (b_top-hat = √(π/2) b_Gauss, u_top-hat = u_max/√2).
  */
 export const PLANE_ENTRAINMENT = {
-  /** Gaussian plane-jet coefficient 0.052 (Fischer et al. 1979, Table 9.1; from memory) → top-hat */
+  /** Gaussian plane-jet coefficient 0.052 (Fischer et al. 1979, Table 9.1 — see BUOYANT_JET.provenance) → top-hat */
   alphaJet: Math.SQRT2 * 0.052,
   /** Gaussian plane-plume coefficient 0.11 (consensus value of Richardson & Hunt 2022, J. Fluid Mech. 934, A11, 0.11 ± 15 %;
-   *  taken as the Gaussian-profile value, which also follows from the plane-plume spreading rate of Fischer et al. 1979; from memory) → top-hat */
+   *  taken as the Gaussian-profile value, which also follows from the plane-plume spreading rate of Fischer et al. 1979 — see BUOYANT_JET.provenance) → top-hat */
   alphaPlume: Math.SQRT2 * 0.11,
 } as const;
 
@@ -40,7 +40,7 @@ export type JetGeometry = 'round' | 'plane';
 /** Centreline dilution = flux-average dilution × λ²/(1+λ²) for round Gaussian profiles of width ratio λ. */
 export const CENTRELINE_TO_AVERAGE = ENTRAINMENT.lambda ** 2 / (1 + ENTRAINMENT.lambda ** 2);
 
-/** concentration-to-velocity width ratio λ of a plane plume's Gaussian profiles (Fischer et al. 1979, Table 9.1; from memory) */
+/** concentration-to-velocity width ratio λ of a plane plume's Gaussian profiles (Fischer et al. 1979, Table 9.1 — see BUOYANT_JET.provenance) */
 export const PLANE_LAMBDA = 1.24;
 
 /**
@@ -71,6 +71,10 @@ export const BUOYANT_JET: MethodInfo = {
     froude: { min: 1, unit: '1', note: 'port densimetric Froude number; below 1 the port may not run full' },
     angle: { min: -90, max: 90, unit: 'deg' },
   },
+  provenance:
+    'The entrainment coefficients (Gaussian 0.0535 jet, 0.0833 plume, 0.052 plane jet; λ = 1.19 round, 1.24 plane; ' +
+    'crossflow 0.6) are as commonly quoted from Fischer et al. (1979) Table 9.1 and Hoult, Fay & Forney (1969); ' +
+    'they were not compared with the original publications.',
 };
 
 /** State vector of the model, in SI. */

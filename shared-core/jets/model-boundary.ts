@@ -1,5 +1,6 @@
 import type { EstimateModel } from '../calc/model';
 import { InputError } from '../core/errors';
+import type { JetTrajectory } from './buoyant-jet';
 import { dilutionAtBoundary, type BoundaryDilution, type MixingZoneBoundary } from '../mixing-zone/boundary';
 
 /** The boundary dilution of a computed model and the path that gave it. */
@@ -9,6 +10,8 @@ export interface ModelBoundaryDilution extends BoundaryDilution {
    * (the merged path, when the plumes merge) or 'single-port plume'
    */
   path: 'jet' | 'merged plumes' | 'single-port plume';
+  /** the trajectory the dilution was read from */
+  trajectory: JetTrajectory;
 }
 
 /**
@@ -19,7 +22,8 @@ export interface ModelBoundaryDilution extends BoundaryDilution {
  * @throws InputError for a model without a jet path
  */
 export function boundaryDilutionOfModel(model: EstimateModel, boundary: MixingZoneBoundary): ModelBoundaryDilution {
-  if (model.kind === 'jet') return { ...dilutionAtBoundary(model.trajectory, boundary), path: 'jet' };
+  if (model.kind === 'jet')
+    return { ...dilutionAtBoundary(model.trajectory, boundary), path: 'jet', trajectory: model.trajectory };
   if (model.kind !== 'diffuser')
     throw new InputError(
       'model',
@@ -32,6 +36,6 @@ export function boundaryDilutionOfModel(model: EstimateModel, boundary: MixingZo
   const merged = dilutionAtBoundary(d.merged, boundary),
     single = dilutionAtBoundary(d.isolated, boundary);
   return merged.dilutionCentreline <= single.dilutionCentreline
-    ? { ...merged, path: d.merge ? 'merged plumes' : 'single-port plume' }
-    : { ...single, path: 'single-port plume' };
+    ? { ...merged, path: d.merge ? 'merged plumes' : 'single-port plume', trajectory: d.merged }
+    : { ...single, path: 'single-port plume', trajectory: d.isolated };
 }

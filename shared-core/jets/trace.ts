@@ -3,28 +3,15 @@ import { requireInRange, positive } from '../core/range';
 import { integrateOde, type OdeEventSet, type OdeStatus } from '../numerics/ode';
 import { interpolateAt } from '../profile/profile';
 import { GRAVITY } from '../quantities';
-import { ambientTables, type AmbientTables, type AmbientWater, type Current } from './ambient';
+import { ambientTables, type AmbientTables } from './ambient';
+import type { BuoyantJetInput } from './buoyant-jet';
 import type { JetGeometry, JetState } from './closure';
 import { jetGaugesInto, jetRhsFor, newJetGauges, scaledState, type JetEquations, type JetGauges } from './equations';
 import { jetLengthScales, type JetLengthScales } from './length-scales';
 import { EXIT_VELOCITY } from './closure';
 
-/** What a jet run needs from its caller (see BuoyantJetInput for the meaning of each field). */
-export interface JetRunInput {
-  diameter: number;
-  velocity: number;
-  angle: number;
-  horizontalAngle?: number;
-  portDepth: number;
-  effluentDensity: number;
-  effluentTemperature?: number;
-  ambient: AmbientWater;
-  current?: Current;
-  bedDepth?: number;
-  portSpacing?: number;
-  maxPath?: number;
-  maxSteps?: number;
-}
+/** What a jet run needs from its caller: the model's input without the compliance choice. */
+export type JetRunInput = Omit<BuoyantJetInput, 'denseJetDilution'>;
 
 /** Validated input and the constants of one run, shared by the round-jet and the merged-diffuser models. */
 export interface JetRun {

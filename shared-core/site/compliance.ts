@@ -1,7 +1,8 @@
 import type { EstimateModel } from '../calc/model';
 import { formatShort, InputError } from '../core/errors';
 import type { JetTrajectory } from '../jets/buoyant-jet';
-import { dilutionAtBoundary, type BoundaryDilution } from '../mixing-zone/boundary';
+import type { BoundaryDilution } from '../mixing-zone/boundary';
+import { boundaryDilutionOfModel, type ModelBoundaryDilution } from '../jets/model-boundary';
 import { complianceTable, type Constituent as RegulatedConstituent } from '../mixing-zone/compliance';
 import { si, siOptional } from './context';
 import type { ComplianceRow, EstimateOutcome } from './assess';
@@ -70,18 +71,10 @@ function zoneDistance(f: Outfall, index: number, zone: Zone): number | undefined
   return zid.depthMultiple * si(`features[${index}].portDepth`, f.portDepth, 'm');
 }
 
-/** The path whose dilution governs (a diffuser: the smaller of merged and single-port), with its name. */
-function governingPath(
-  model: EstimateModel | undefined,
-  edge: number,
-): { path: JetTrajectory; name: string } | undefined {
-  if (model?.kind === 'jet') return { path: model.trajectory, name: 'single-port plume' };
-  if (model?.kind !== 'diffuser') return undefined;
-  const d = model.diffuser;
-  const at = (t: JetTrajectory) => dilutionAtBoundary(t, { distance: edge, measure: 'horizontal' }).dilutionCentreline;
-  return at(d.merged) <= at(d.isolated) && d.merge
-    ? { path: d.merged, name: 'merged plumes' }
-    : { path: d.isolated, name: 'single-port plume' };
+/** The governing path's dilution at the boundary, read from a computed jet or diffuser model (undefined for others). */
+function governingPath(model: EstimateModel | undefined, edge: number): ModelBoundaryDilution | undefined {
+  if (model?.kind !== 'jet' && model?.kind !== 'diffuser') return undefined;
+  return boundaryDilutionOfModel(model, { distance: edge, measure: 'horizontal' });
 }
 
 /** Width of the wastefield where the near field ends [m]: the plume's diameter, plus the diffuser's length. */
@@ -112,16 +105,16 @@ export function farFieldEstimates(site: Site, outcomes: readonly EstimateOutcome
         const edge = zoneDistance(f, index, zone);
         const g = edge === undefined ? undefined : governingPath(near.model, edge);
         if (edge === undefined || !g) continue;
-        const x = g.path.path.horizontalDistance;
+        const x = g.trajectory.path.horizontalDistance;
         const beyond = edge - x[x.length - 1];
-        if (beyond <= 0 || dilutionAtBoundary(g.path, { distance: edge, measure: 'horizontal' }).reached) continue;
+        if (beyond <= 0 || g.reached) continue;
         out.push({
           id: farFieldId(f, c.id, zone),
           method: 'far-field',
           feature: f.id,
           condition: c.id,
           title: `Far-field dilution of ${f.name} (${c.name}) to the ${zone === 'acute' ? 'zone of initial dilution' : 'mixing-zone boundary'}`,
-          params: { width: wastefieldWidth(near.model, g.path), current, distance: beyond },
+          params: { width: wastefieldWidth(near.model, g.trajectory), current, distance: beyond },
         });
       }
     });
@@ -234,21 +227,21 @@ function zoneRowsFor(
     return fail(`the near-field estimate ${id} did not compute: ${near?.error ?? 'missing'}`);
   const g = governingPath(near.model, edge);
   if (!g) return fail(`the estimate ${id} holds no near-field path`);
-  const atEdge = dilutionAtBoundary(g.path, { distance: edge, measure: 'horizontal' });
+  const atEdge: BoundaryDilution = g;
   const far = outcomes.find((o) => o.id === farFieldId(f, conditionId, zone));
   const factor =
     far?.status === 'ok' && typeof far.results.dilution?.value === 'number' ? far.results.dilution.value : undefined;
-  const xEnd = g.path.path.horizontalDistance[g.path.path.horizontalDistance.length - 1];
+  const xEnd = g.trajectory.path.horizontalDistance[g.trajectory.path.horizontalDistance.length - 1];
   const farNote =
     factor === undefined
       ? ''
-      : `the near field ends (${g.path.outcome}) ${formatShort(xEnd)} m from the port; the far field (4/3-law) ` +
+      : `the near field ends (${g.trajectory.outcome}) ${formatShort(xEnd)} m from the port; the far field (4/3-law) ` +
         `from there to the boundary multiplies its dilution by ${formatShort(factor)}`;
   const dilution: BoundaryDilution =
     factor === undefined
       ? atEdge
       : { ...atEdge, dilutionCentreline: atEdge.dilutionCentreline * factor, reached: true, note: farNote };
-  const nearName = `${near.method} (${id}${near.model?.kind === 'diffuser' ? `, ${g.name}` : ''})`;
+  const nearName = `${near.method} (${id}${near.model?.kind === 'diffuser' ? `, ${g.path}` : ''})`;
   const models = factor === undefined ? nearName : `${nearName} × far-field (${far!.id})`;
   const noCurrent =
     !atEdge.reached && !condition.current ? '; no ambient current is given, so the far field is not computed' : '';
