@@ -1,6 +1,7 @@
 import { existsSync, readdirSync, readFileSync, statSync } from 'node:fs';
 import { join, relative, resolve } from 'node:path';
 import { describe, expect, it } from 'vitest';
+import { checkRecordProblems, type Check } from '../helpers/check-values';
 
 const ROOT = resolve(import.meta.dirname, '..', '..');
 
@@ -37,10 +38,56 @@ describe('every published method has check values (style.md §5; empty allow-lis
       const data = JSON.parse(readFileSync(path, 'utf8'));
       expect(data.method).toBe(m.id);
       expect(data.checks.length).toBeGreaterThan(0);
-      for (const c of data.checks) {
-        expect(c.source.length).toBeGreaterThan(10);
-        expect(c.cases.length).toBeGreaterThan(0);
-      }
+      for (const c of data.checks) expect(checkRecordProblems(c), c.source).toEqual([]);
     });
   }
+});
+
+describe('a check record claims no more than it shows (validation, known bias, consistency)', () => {
+  const base = { source: 'Author (2000), Table 1', cases: [{ inputs: { x: 1 }, expected: 1.6 }] };
+  it('accepts a validation within its published scatter', () =>
+    expect(
+      checkRecordProblems({
+        ...base,
+        kind: 'validation',
+        tolerance: { rel: 0.1 },
+        scatter: { rel: 0.15, basis: 'lab' },
+      }),
+    ).toEqual([]));
+  it('refuses a validation tolerance larger than the published scatter', () =>
+    expect(
+      checkRecordProblems({
+        ...base,
+        kind: 'validation',
+        tolerance: { rel: 0.55 },
+        scatter: { rel: 0.15, basis: 'lab' },
+      }),
+    ).toEqual([expect.stringMatching(/exceeds the stated scatter/)]));
+  it('refuses a validation without a stated scatter, or one with a bias', () => {
+    expect(checkRecordProblems({ ...base, kind: 'validation', tolerance: { rel: 0.1 } } as Check)).toHaveLength(1);
+    expect(
+      checkRecordProblems({
+        ...base,
+        kind: 'validation',
+        tolerance: { rel: 0.1 },
+        scatter: { rel: 0.1, basis: 'lab' },
+        bias: { rel: -0.5 },
+      }),
+    ).toHaveLength(1);
+  });
+  it('a known-bias record states its bias, and a tolerance that covers the bias is refused', () => {
+    expect(checkRecordProblems({ ...base, kind: 'known-bias', tolerance: { rel: 0.03 } })).toHaveLength(1);
+    expect(checkRecordProblems({ ...base, kind: 'known-bias', tolerance: { rel: 0.03 }, bias: { rel: -0.5 } })).toEqual(
+      [],
+    );
+    expect(checkRecordProblems({ ...base, kind: 'known-bias', tolerance: { rel: 0.55 }, bias: { rel: -0.5 } })).toEqual(
+      [expect.stringMatching(/covers the stated bias/)],
+    );
+  });
+  it('a consistency check (the coded formula against itself) is held close', () => {
+    expect(checkRecordProblems({ ...base, kind: 'consistency', tolerance: { rel: 1e-12 } })).toEqual([]);
+    expect(checkRecordProblems({ ...base, kind: 'consistency', tolerance: { abs: 0.2 } })).toHaveLength(1);
+  });
+  it('a record without a kind is refused', () =>
+    expect(checkRecordProblems({ ...base, tolerance: { rel: 0.1 } } as unknown as Check)).toHaveLength(1));
 });
