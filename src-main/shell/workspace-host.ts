@@ -1,4 +1,4 @@
-import { lstatSync, mkdirSync, readdirSync, realpathSync, statSync } from 'node:fs';
+import { existsSync, lstatSync, mkdirSync, readdirSync, realpathSync, statSync } from 'node:fs';
 import { basename, dirname, isAbsolute, join, relative, resolve, sep } from 'node:path';
 import type { ShellHost } from '../services/channel-handlers';
 import { ServiceError } from '../services/service-error';
@@ -32,7 +32,7 @@ function realpathOfExisting(abs: string, asked: string): string {
  * The browser shell has no native dialogs: every file lives in one workspace folder. Every path it
  * touches (open, save, save as, the report folder, the file list) goes through one containment check that
  * resolves links: the real path must lie inside the workspace. 'site.open' takes a file name of the
- * folder, 'site.saveAs' writes the suggested name there, reports go to <workspace>/reports/.
+ * folder, 'site.saveAs' writes the suggested name there, each report goes to a new folder of <workspace>/reports/.
  */
 export function workspaceHost(workspaceDir: string, now: () => Date = () => new Date()): ShellHost {
   mkdirSync(workspaceDir, { recursive: true });
@@ -67,11 +67,13 @@ export function workspaceHost(workspaceDir: string, now: () => Date = () => new 
     allowDir: (path) => contained(path, 'folders'),
     pickOpenPath: async (req) => (req.name ? containedFile(join(root, basename(req.name))) : null),
     pickSavePath: async (suggestedName) => containedFile(join(root, safeSiteFileName(suggestedName))),
-    pickExportDir: async (siteName) =>
-      contained(
-        join(root, 'reports', `${safeSiteFileName(siteName).slice(0, -SITE_EXTENSION.length)}-${timestamp(now())}`),
-        'folders',
-      ),
+    pickExportDir: async (siteName) => {
+      // one new folder per export: a second export within the same second gets -2, -3 … (never overwrites)
+      const base = `${safeSiteFileName(siteName).slice(0, -SITE_EXTENSION.length)}-${timestamp(now())}`;
+      let dir = contained(join(root, 'reports', base), 'folders');
+      for (let k = 2; existsSync(dir); k++) dir = contained(join(root, 'reports', `${base}-${k}`), 'folders');
+      return dir;
+    },
     writeClipboardImage: async () => {
       throw new ServiceError(
         'unsupported',

@@ -1,5 +1,6 @@
 import { mount } from 'svelte';
 import './app.css';
+import './print.css';
 import App from './App.svelte';
 
 mount(App, { target: document.getElementById('app')! });
