@@ -3,8 +3,11 @@ import { waterCalcMethods } from '../water/calc';
 import { profileCalcMethods } from '../profile/calc';
 import { gravityCurrentCalcMethods } from '../gravity-currents/calc';
 import { estuaryCalcMethods } from '../estuaries/calc';
+import { lockCalcMethods } from '../estuaries/lock-calc';
 import { internalWaveCalcMethods } from '../internal-waves/calc';
+import { lakeCalcMethods } from '../internal-waves/lake-calc';
 import { hydraulicsCalcMethods } from '../hydraulics/calc';
+import { sillCalcMethods } from '../hydraulics/sill-calc';
 import { withdrawalCalcMethods } from '../withdrawal/calc';
 import { inflowCalcMethods } from '../inflows/calc';
 import { jetCalcMethods } from '../jets/calc';
@@ -19,8 +22,11 @@ export const CALC_METHODS: readonly CalcMethod[] = [
   ...profileCalcMethods,
   ...gravityCurrentCalcMethods,
   ...estuaryCalcMethods,
+  ...lockCalcMethods,
   ...internalWaveCalcMethods,
+  ...lakeCalcMethods,
   ...hydraulicsCalcMethods,
+  ...sillCalcMethods,
   ...withdrawalCalcMethods,
   ...inflowCalcMethods,
   ...jetCalcMethods,

@@ -161,6 +161,20 @@ const NAMES: Record<string, NameWords> = {
   ambient: w('Ambient concentration', 'C_a'),
   criterion: w('Criterion concentration', 'C_c'),
   alpha: w('4/3-law coefficient', 'α'),
+  salinity_difference: w('Salinity difference across the gate', 'ΔS'),
+  open_time: w('Time the gate stands open'),
+  exchanged_volume: w('Volume exchanged each way'),
+  salt_mass: w('Salt carried into the fresh side'),
+  exchanged_fraction: w('Share of the chamber exchanged'),
+  traverse_time: w('Time for the fronts to reach the chamber ends', 'L/U'),
+  hypsography: w('Area against depth (hypsographic curve)'),
+  lake_number: w('Lake number', 'L_N'),
+  schmidt_stability: w('Schmidt stability', 'S_t'),
+  centre_of_volume_height: w('Height of the centre of volume above the deepest point', 'z_g'),
+  stability_statement: w('What the Lake number means'),
+  interface_above_crest: w('Interface height above the crest', 'Y'),
+  crest_thickness: w('Dense-layer thickness at the crest', 'h_c', '2Y/3'),
+  crest_velocity: w('Dense-layer velocity at the crest'),
 };
 
 /** Where one method uses a name in a sense of its own: `method.name`, or `method.result.name` / `method.input.name`. */
@@ -191,6 +205,10 @@ const IN_METHOD: Record<string, NameWords> = {
   'withdrawal-two-layer.width': w('Slot width'),
   'withdrawal-layer.width': w('Slot width'),
   'skimming-withdrawal.width': w('Width of the opening'),
+  'navigation-lock.length': w('Chamber length', 'L'),
+  'navigation-lock.width': w('Chamber width', 'B'),
+  'navigation-lock.depth': w('Water depth in the chamber', 'H'),
+  'sill-overflow.width': w('Crest width'),
   'withdrawal-layer.regime': w('Withdrawal regime'),
 };
 

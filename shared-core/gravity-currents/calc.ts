@@ -13,9 +13,11 @@ import { kinematicViscosityWater } from '../water/transport';
 import {
   BENJAMIN_1968,
   HUPPERT_SIMPSON_1980_FRONT,
+  SHIN_2004,
   VON_KARMAN_1940,
   frontSpeedBenjamin1968,
   frontSpeedHuppertSimpson1980,
+  frontSpeedShinDalzielLinden2004,
   frontSpeedVonKarman1940,
   type FrontSpeed,
 } from './front-speed';
@@ -23,6 +25,7 @@ import { HUPPERT_1982, type SpreadingGeometry } from './viscous';
 import { LOCK_RELEASE_HS1980, lockReleaseHuppertSimpson1980 } from './release';
 import { formatNumber, InputError } from '../core/errors';
 import { note, type Warning } from '../core/warning';
+import { qty } from '../core/quantity-text';
 
 const G_PRIME = {
   kind: 'number',
@@ -101,7 +104,7 @@ function frontReport(
   };
 }
 
-type FrontModel = 'benjamin' | 'huppert-simpson' | 'von-karman';
+type FrontModel = 'benjamin' | 'huppert-simpson' | 'shin-dalziel-linden' | 'von-karman';
 
 /** The gravity-currents methods of `gprime calc`. */
 export const gravityCurrentCalcMethods: CalcMethod[] = [
@@ -129,8 +132,9 @@ export const gravityCurrentCalcMethods: CalcMethod[] = [
       {
         kind: 'choice',
         name: 'model',
-        description: 'front condition',
-        choices: ['benjamin', 'huppert-simpson', 'von-karman'],
+        description:
+          'front condition (shin-dalziel-linden: the slumping current of a lock twice as deep as the current, Shin et al. 2004)',
+        choices: ['benjamin', 'huppert-simpson', 'shin-dalziel-linden', 'von-karman'],
         default: 'benjamin',
       },
     ],
@@ -151,6 +155,24 @@ export const gravityCurrentCalcMethods: CalcMethod[] = [
           r.warnings.push(
             note('input-ignored', 'total_depth is ignored by the deep-ambient von Kármán speed.', 'total_depth'),
           );
+      } else if (model === 'shin-dalziel-linden') {
+        // Shin, Dalziel & Linden (2004): the slumping current is half the lock depth deep, so D = 2h
+        if (H !== undefined && 2 * h > H)
+          throw new InputError(
+            'current_depth',
+            h,
+            'm',
+            `≤ ${qty(H / 2, 'm')}`,
+            `the lock that makes a current ${qty(h, 'm')} deep is ${qty(2 * h, 'm')} deep, more than total_depth = ${qty(H, 'm')} (Shin et al. 2004: the current is half the lock depth)`,
+          );
+        r = frontSpeedShinDalzielLinden2004(g, 2 * h, H);
+        source = SHIN_2004.source;
+        r.warnings.push(
+          note(
+            'lock-depth-from-current',
+            `Shin et al. (2004) describe the slumping current of a lock ${qty(2 * h, 'm')} deep (twice the current depth) released into the channel.`,
+          ),
+        );
       } else if (model === 'huppert-simpson') {
         r = frontSpeedHuppertSimpson1980(g, h, H);
         source = HUPPERT_SIMPSON_1980_FRONT.source;

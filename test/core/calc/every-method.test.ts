@@ -52,6 +52,10 @@ const PRACTICAL: Record<string, [number, number]> = {
   diffuser_length: [5, 200],
 };
 const WHOLE = new Set(['ports', 'modes']);
+/** Text parameters other than port lists: a few valid values and one refused (the demo basin is 38 m deep). */
+const TEXT: Record<string, string[]> = {
+  hypsography: ['0:2e6,10:1.2e6,25:4e5,38:0', '0:5e5,38:1e5', '0:1e6,20:5e5,38:1e4', '5:40,30:40'],
+};
 /** Inputs given one way or another, never both (the methods refuse both and neither with a named error). */
 const ONE_OF: Record<string, string[][]> = {
   'buoyant-jet': [['file'], ['ambient_density']],
@@ -71,11 +75,15 @@ function spanArb(lo: number, hi: number): fc.Arbitrary<number> {
   return fc.double({ min: lo, max: hi, noNaN: true });
 }
 
-function numberArb(spec: Extract<ParamSpec, { kind: 'number' }>, practical: boolean): fc.Arbitrary<number> {
+function numberArb(
+  method: CalcMethod,
+  spec: Extract<ParamSpec, { kind: 'number' }>,
+  practical: boolean,
+): fc.Arbitrary<number> {
   const r = spec.range ?? {};
   let lo = r.minExclusive ? nextUp(r.min ?? -1e3) : (r.min ?? -1e3);
   let hi = r.maxExclusive ? -nextUp(-(r.max ?? 1e3)) : (r.max ?? 1e3);
-  const p = practical ? PRACTICAL[spec.name] : undefined;
+  const p = practical ? (method.everyday?.[spec.name] ?? PRACTICAL[spec.name]) : undefined;
   if (p) [lo, hi] = [Math.max(lo, p[0]), Math.min(hi, p[1])];
   return WHOLE.has(spec.name) ? fc.integer({ min: Math.ceil(lo), max: Math.floor(hi) }) : spanArb(lo, hi);
 }
@@ -108,13 +116,13 @@ function paramsArb(
     const maybe = <T extends RawArg>(a: fc.Arbitrary<T>) => (optional(p) ? fc.option(a, { nil: undefined }) : a);
     switch (p.kind) {
       case 'number':
-        return [p.name, maybe(numberArb(p, practical))];
+        return [p.name, maybe(numberArb(method, p, practical))];
       case 'choice':
         return [p.name, fc.constantFrom(...p.choices)];
       case 'profile':
         return [p.name, maybe(fc.constant(PROFILE))];
       case 'text':
-        return [p.name, fc.constantFrom('5:40,30:40', '2:10', '1:5,10:5,20:5')];
+        return [p.name, fc.constantFrom(...(TEXT[p.name] ?? ['5:40,30:40', '2:10', '1:5,10:5,20:5']))];
     }
   });
   return fc.record(Object.fromEntries(entries));
