@@ -175,6 +175,9 @@ const NAMES: Record<string, NameWords> = {
   interface_above_crest: w('Interface height above the crest', 'Y'),
   crest_thickness: w('Dense-layer thickness at the crest', 'h_c', '2Y/3'),
   crest_velocity: w('Dense-layer velocity at the crest'),
+  approach_velocity: w('Velocity head of the approaching layer'),
+  contraction: w('Contraction coefficient under the lip', 'C_c'),
+  approach_head_ratio: w('Change of the limit by the approach velocity head'),
 };
 
 /** Where one method uses a name in a sense of its own: `method.name`, or `method.result.name` / `method.input.name`. */

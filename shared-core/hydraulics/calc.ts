@@ -215,6 +215,23 @@ export const hydraulicsCalcMethods: CalcMethod[] = [
         default: 1,
         range: { ...positive, max: 1e5 },
       },
+      {
+        kind: 'choice',
+        name: 'approach_velocity',
+        description:
+          'included: the withdrawn layer approaches at q/(its thickness) and its velocity head adds to the energy (the structure spans the approach channel); neglected: the approach flow is much wider or deeper than the opening',
+        choices: ['included', 'neglected'],
+        default: 'included',
+      },
+      {
+        kind: 'number',
+        name: 'contraction',
+        unit: '1',
+        description:
+          'contraction coefficient C_c of the flow under a curtain-wall lip (curtain wall only): 0.598–0.611 for a sharp-edged lip, 0.61 recommended (Henderson 1966); 1 for a well-rounded lip',
+        default: 1,
+        range: { min: 0.5, max: 1 },
+      },
     ],
     results: [
       {
@@ -223,6 +240,11 @@ export const hydraulicsCalcMethods: CalcMethod[] = [
         description: 'largest discharge per width that takes water of the near layer only',
       },
       { name: 'max_discharge', unit: 'm3/s', description: 'the same times the width' },
+      {
+        name: 'approach_head_ratio',
+        unit: '1',
+        description: 'largest discharge with the approach velocity head over that without it',
+      },
     ],
     run(a) {
       const weir = arg.text(a, 'structure') === 'weir';
@@ -232,12 +254,27 @@ export const hydraulicsCalcMethods: CalcMethod[] = [
         arg.num(a, 'interface_distance'),
         arg.num(a, 'width'),
       ];
+      const approachVelocity = arg.text(a, 'approach_velocity') === 'included';
+      const contraction = arg.num(a, 'contraction');
       const r = weir
-        ? weirSkimmingWithdrawalMax(g, opening, interfaceDistance)
-        : curtainWallWithdrawalMax(g, opening, interfaceDistance);
+        ? weirSkimmingWithdrawalMax(g, opening, interfaceDistance, { approachVelocity })
+        : curtainWallWithdrawalMax(g, opening, interfaceDistance, { approachVelocity, contraction });
+      const warnings = [...r.warnings];
+      if (weir && contraction !== 1)
+        warnings.push(
+          note(
+            'input-ignored',
+            'contraction applies to the flow under a curtain-wall lip; a weir crest ignores it.',
+            'contraction',
+          ),
+        );
       return {
-        results: { max_discharge_per_width: num(r.value, 'm2/s'), max_discharge: num(r.value * width, 'm3/s') },
-        warnings: r.warnings,
+        results: {
+          max_discharge_per_width: num(r.value, 'm2/s'),
+          max_discharge: num(r.value * width, 'm3/s'),
+          approach_head_ratio: num(r.approachHeadRatio, '1'),
+        },
+        warnings,
         sources: [(weir ? WEIR_SKIMMING_WITHDRAWAL : CURTAIN_WALL_WITHDRAWAL).source],
       };
     },

@@ -1,6 +1,7 @@
 import { requireInRange } from '../core/range';
 import { caution, note, type Warning } from '../core/warning';
 import { scalar, validityWarnings, type MethodInfo, type Scalar } from '../core/method';
+import { qty } from '../core/quantity-text';
 
 /** Two-layer hydraulics, Boussinesq, rigid lid unless said otherwise. Layer 1 on top, layer 2 below. */
 
@@ -150,23 +151,62 @@ export const CURTAIN_WALL_WITHDRAWAL: MethodInfo = {
   source:
     'Reduced-gravity energy (Bernoulli) equation for the withdrawn layer with the interface at the wall lip, deep quiescent upper ' +
     'layer: Craya, A. (1949). Recherches théoriques sur l’écoulement de couches superposées de fluides de densités différentes. ' +
-    'La Houille Blanche 4, 44–55; at a = 2Y/3 it equals critical flow q = √(g′a³) (Turner 1973, §3.2).',
-  equation: 'q_max = a √(2 g′ (Y − a)), a the lip height above the bed, Y the upstream interface height (Y > a)',
-  validity: {},
+    'La Houille Blanche 4, 44–55; at a = 2Y/3 it equals critical flow q = √(g′a³) (Turner 1973, §3.2). Approach velocity head ' +
+    'and contraction under the lip as for a sluice gate: q = C_c a √(2g′Y/(1 + C_c a/Y)), C_c = 0.598–0.611 for a sharp-edged ' +
+    'vertical gate, 0.61 recommended (Henderson, F.M. 1966. Open Channel Flow, Macmillan).',
+  equation:
+    'q_max = C_c a √(2g′(Y − C_c a)) without the approach velocity head, C_c a √(2g′Y/(1 + C_c a/Y)) with it; a the lip height above the bed, Y the upstream interface height (Y > a)',
+  validity: {
+    contraction: {
+      min: 0.59,
+      max: 1,
+      unit: '1',
+      note: 'from 0.598–0.611 for a sharp-edged lip (Henderson 1966) to 1 for a well-rounded one',
+    },
+  },
+  provenance:
+    'The contraction range 0.598–0.611 and the recommended 0.61 are as quoted from Henderson (1966) in Ponce, Online Channel ' +
+    'calculator notes (San Diego State University); not compared with the printed page.',
 };
+
+/** How the skimming limits treat the flow approaching the structure and the contraction under a lip. */
+export interface SkimmingOptions {
+  /** contraction coefficient C_c of the flow under a curtain-wall lip [1]; default 1 (no contraction) */
+  contraction?: number;
+  /** include the velocity head q²/(2g′Y²) of the withdrawn layer approaching the structure; default false */
+  approachVelocity?: boolean;
+}
+
+/** A skimming limit with the discharge the other treatment of the approach flow would give. */
+export interface SkimmingLimit extends Scalar {
+  /** q_max with the approach velocity head included over q_max without it [1] */
+  approachHeadRatio: number;
+}
+
+/** The change of the discharge by the approach velocity head above which a neglected head gets a caution. */
+export const APPROACH_HEAD_CAUTION = 0.05;
 
 /**
  * Lower-layer discharge per unit width under a curtain wall when the interface has just been drawn down to the lip.
+ * Without the approach velocity head, q = C_c a √(2g′(Y − C_c a)); with it (the withdrawn layer Y thick approaching at
+ * q/Y), the sluice-gate form q = C_c a √(2g′Y/(1 + C_c a/Y)).
  * @param gPrime [m/s2]; @param lipHeight [m] a, opening below the wall; @param interfaceHeight [m] Y, upstream interface above the bed
+ * @param options contraction C_c [1] (default 1) and whether the approach velocity head is included (default not)
  * @returns q_max [m2/s]
- * @source Craya (1949); Turner (1973) §3.2
- * @validity no contraction or losses at the lip, upstream velocity small, deep upper layer; laboratory checks: none in this program
+ * @source Craya (1949); Turner (1973) §3.2; Henderson (1966) sluice-gate form
+ * @validity C_c 0.59–1; deep upper layer; no losses at the lip; laboratory checks of the stratified case: none in this program
  */
-export function curtainWallWithdrawalMax(gPrime: number, lipHeight: number, interfaceHeight: number): Scalar {
+export function curtainWallWithdrawalMax(
+  gPrime: number,
+  lipHeight: number,
+  interfaceHeight: number,
+  options: SkimmingOptions = {},
+): SkimmingLimit {
   const g = requireInRange('g_prime', gPrime, 'm/s2', GP);
   const Y = requireInRange('interface_height', interfaceHeight, 'm', DEPTH);
   const a = requireInRange('lip_height', lipHeight, 'm', { min: 1e-3, max: Y, maxExclusive: true });
-  const warnings =
+  const cc = requireInRange('contraction', options.contraction ?? 1, '1', { min: 0.5, max: 1 });
+  const warnings: Warning[] =
     a > (2 * Y) / 3
       ? [
           note(
@@ -176,5 +216,21 @@ export function curtainWallWithdrawalMax(gPrime: number, lipHeight: number, inte
           ),
         ]
       : [];
-  return scalar(CURTAIN_WALL_WITHDRAWAL, a * Math.sqrt(2 * g * (Y - a)), 'm2/s', {}, warnings);
+  const ca = cc * a;
+  const without = ca * Math.sqrt(2 * g * (Y - ca)),
+    withHead = ca * Math.sqrt((2 * g * Y) / (1 + ca / Y));
+  const ratio = withHead / without;
+  if (!options.approachVelocity && ratio - 1 > APPROACH_HEAD_CAUTION)
+    warnings.push(approachHeadCaution(ratio, Y, 'interface_distance'));
+  const q = options.approachVelocity ? withHead : without;
+  return { ...scalar(CURTAIN_WALL_WITHDRAWAL, q, 'm2/s', { contraction: cc }, warnings), approachHeadRatio: ratio };
+}
+
+/** The caution when a neglected approach velocity head changes the limit by more than APPROACH_HEAD_CAUTION. */
+export function approachHeadCaution(ratio: number, interfaceDistance: number, input: string): Warning {
+  return caution(
+    'approach-head-neglected',
+    `With the interface only ${qty(interfaceDistance, 'm')} from the surface or bed, the withdrawn layer approaches fast: its velocity head raises the limit to ${ratio.toPrecision(3)} times this value. Include it unless the approach flow is much wider or deeper than the opening.`,
+    input,
+  );
 }

@@ -29,7 +29,11 @@ runCheckValues('hydraulics', 'internal-hydraulic-jump', (i) => {
 runCheckValues(
   'hydraulics',
   'curtain-wall-withdrawal',
-  (i) => curtainWallWithdrawalMax(n(i, 'g_prime'), n(i, 'lip_height'), n(i, 'interface_height')).value,
+  (i) =>
+    curtainWallWithdrawalMax(n(i, 'g_prime'), n(i, 'lip_height'), n(i, 'interface_height'), {
+      approachVelocity: i.approach === 'included',
+      contraction: i.contraction === undefined ? 1 : n(i, 'contraction'),
+    }).value,
 );
 runCheckValues('hydraulics', 'stratified-obstacle-flow', (i) => {
   const r = stratifiedObstacleFlow(

@@ -13,7 +13,10 @@ const n = (i: Record<string, number | string>, k: string) => Number(i[k]);
 runCheckValues(
   'hydraulics',
   'weir-skimming-withdrawal',
-  (i) => weirSkimmingWithdrawalMax(n(i, 'g_prime'), n(i, 'crest_depth'), n(i, 'interface_depth')).value,
+  (i) =>
+    weirSkimmingWithdrawalMax(n(i, 'g_prime'), n(i, 'crest_depth'), n(i, 'interface_depth'), {
+      approachVelocity: i.approach === 'included',
+    }).value,
 );
 
 describe('skimming over a weir', () => {
@@ -75,9 +78,34 @@ describe('hydraulics calc methods', () => {
   it('skimming-withdrawal runs both structures and scales with width', () => {
     const m = findCalcMethod('skimming-withdrawal')!;
     const weir = runCalc(m, { g_prime: '0.02', structure: 'weir', opening: '1', interface_distance: '3', width: '10' });
-    expect(weir.results.max_discharge.value).toBeCloseTo(10 * weirSkimmingWithdrawalMax(0.02, 1, 3).value, 12);
+    expect(weir.results.max_discharge.value).toBeCloseTo(
+      10 * weirSkimmingWithdrawalMax(0.02, 1, 3, { approachVelocity: true }).value,
+      12,
+    );
     const wall = runCalc(m, { g_prime: '0.02', structure: 'curtain-wall', opening: '2', interface_distance: '5' });
-    expect(wall.results.max_discharge_per_width.value).toBeCloseTo(curtainWallWithdrawalMax(0.02, 2, 5).value, 12);
+    expect(wall.results.max_discharge_per_width.value).toBeCloseTo(
+      curtainWallWithdrawalMax(0.02, 2, 5, { approachVelocity: true }).value,
+      12,
+    );
+  });
+  it('skimming-withdrawal states the approach velocity head and cautions when a neglected one matters', () => {
+    const m = findCalcMethod('skimming-withdrawal')!;
+    const args = { g_prime: '0.02', structure: 'curtain-wall', opening: '2', interface_distance: '3' };
+    const neglected = runCalc(m, { ...args, approach_velocity: 'neglected' });
+    expect(neglected.results.max_discharge_per_width.value).toBeCloseTo(0.4, 12); // a√(2g′(Y − a))
+    expect(neglected.results.approach_head_ratio.value).toBeCloseTo(Math.sqrt(1.8), 12); // √(Y/((1 + a/Y)(Y − a)))
+    expect(neglected.warnings.map((w) => w.code)).toContain('approach-head-neglected');
+    const deep = runCalc(m, { ...args, interface_distance: '40', approach_velocity: 'neglected' });
+    expect(deep.warnings.map((w) => w.code)).not.toContain('approach-head-neglected');
+  });
+  it('a sharp-edged lip (C_c = 0.61, Henderson 1966) lowers the limit; a weir ignores the contraction with a note', () => {
+    const m = findCalcMethod('skimming-withdrawal')!;
+    const args = { g_prime: '0.02', structure: 'curtain-wall', opening: '1', interface_distance: '5' };
+    const sharp = runCalc(m, { ...args, contraction: '0.61' }).results.max_discharge_per_width.value as number;
+    const round = runCalc(m, args).results.max_discharge_per_width.value as number;
+    expect(sharp).toBeLessThan(round);
+    const weir = runCalc(m, { ...args, structure: 'weir', interface_distance: '3', contraction: '0.61' });
+    expect(weir.warnings.map((w) => w.code)).toContain('input-ignored');
   });
   it('internal-jump uses the finite-depth form only when total_depth is given', () => {
     const m = findCalcMethod('internal-jump')!;
