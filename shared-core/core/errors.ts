@@ -1,19 +1,31 @@
-/** A bad input: names the field, the value, its unit and the allowed range. */
+import { qty } from './quantity-text';
+
+/** A number with its unit for a message: a quantity token (shown in the reader's units), a plain number without a unit. */
+export function valueText(x: number, unit: string, digits = 6): string {
+  return unit && unit !== '1' ? qty(x, unit, digits) : formatNumber(x);
+}
+
+/**
+ * A bad input: names the field, the value, its unit and the allowed range. A numeric value is a quantity
+ * token (the edges show it in the reader's units); a text value is quoted as typed, without a unit after it.
+ */
 export class InputError extends Error {
   readonly field: string;
   readonly value: unknown;
   readonly unit: string;
   readonly allowed: string;
+  /** why the value is refused, when it is not only outside the range ("it is not a number") */
+  readonly detail?: string;
 
   constructor(field: string, value: unknown, unit: string, allowed: string, detail?: string) {
-    const shown = typeof value === 'number' ? formatNumber(value) : JSON.stringify(value);
-    const unitText = unit && unit !== '1' ? ` ${unit}` : '';
-    super(`${field} = ${shown}${unitText} is not allowed: ${detail ?? `allowed range is ${allowed}`}`);
+    const shown = typeof value === 'number' ? valueText(value, unit) : JSON.stringify(value);
+    super(`${field} = ${shown} is not allowed: ${detail ?? `allowed range is ${allowed}`}`);
     this.name = 'InputError';
     this.field = field;
     this.value = value;
     this.unit = unit;
     this.allowed = allowed;
+    if (detail !== undefined) this.detail = detail;
   }
 }
 

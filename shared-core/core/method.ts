@@ -1,4 +1,4 @@
-import { formatNumber } from './errors';
+import { valueText } from './errors';
 import { inRange, type Range } from './range';
 import { outsideValidity, type Warning } from './warning';
 
@@ -43,13 +43,13 @@ export function validityWarnings(info: MethodInfo, inputs: Record<string, number
   for (const [name, range] of Object.entries(info.validity)) {
     const x = inputs[name];
     if (x === undefined || inRange(x, range)) continue;
-    const u = range.unit && range.unit !== '1' ? ` ${range.unit}` : '';
-    const lo = range.min === undefined ? '−∞' : formatNumber(range.min);
-    const hi = range.max === undefined ? '∞' : formatNumber(range.max);
+    const lo = range.min === undefined ? undefined : valueText(range.min, range.unit);
+    const hi = range.max === undefined ? undefined : valueText(range.max, range.unit);
+    const span = lo && hi ? `the range ${lo} … ${hi}` : lo ? `the range from ${lo} up` : `the range up to ${hi}`;
     out.push(
       outsideValidity(
         'validity-range',
-        `${name} = ${formatNumber(x)}${u} is outside the range ${lo} … ${hi}${u} of ${info.title}` +
+        `${name} = ${valueText(x, range.unit)} is outside ${span} of ${info.title}` +
           (range.note ? ` (${range.note})` : '') +
           '; the result is an extrapolation.',
         name,

@@ -1,4 +1,4 @@
-import { InputError, formatNumber } from './errors';
+import { InputError, valueText } from './errors';
 
 /** A closed or half-open interval in SI units; an open end is marked exclusive. */
 export interface Range {
@@ -9,14 +9,12 @@ export interface Range {
   maxExclusive?: boolean;
 }
 
+/** The range in words, each bound a quantity token: "≥ ⟦-3|degC⟧ and ≤ ⟦60|degC⟧" (shown "≥ −3 °C and ≤ 60 °C"). */
 export function describeRange(r: Range, unit: string): string {
-  const u = unit && unit !== '1' ? ` ${unit}` : '';
-  const lo = r.min === undefined ? undefined : `${r.minExclusive ? '>' : '≥'} ${formatNumber(r.min)}`;
-  const hi = r.max === undefined ? undefined : `${r.maxExclusive ? '<' : '≤'} ${formatNumber(r.max)}`;
-  if (lo && hi) return `${lo} and ${hi}${u}`;
-  if (lo) return `${lo}${u}`;
-  if (hi) return `${hi}${u}`;
-  return 'any finite number';
+  const lo = r.min === undefined ? undefined : `${r.minExclusive ? '>' : '≥'} ${valueText(r.min, unit)}`;
+  const hi = r.max === undefined ? undefined : `${r.maxExclusive ? '<' : '≤'} ${valueText(r.max, unit)}`;
+  if (lo && hi) return `${lo} and ${hi}`;
+  return lo ?? hi ?? 'any finite number';
 }
 
 export function inRange(x: number, r: Range): boolean {

@@ -1,4 +1,4 @@
-import { formatNumber } from '../core/errors';
+import { qty } from '../core/quantity-text';
 import { caution, type Warning } from '../core/warning';
 import type { OdeStatus } from '../numerics/ode';
 import { interpolateAt } from '../profile/profile';
@@ -160,7 +160,7 @@ function withDenseJetLab(t: JetTrajectory, run: JetRun, choice: DenseJetDilution
     warnings.push(
       caution(
         'dense-jet-lab-reaches-surface',
-        `Laboratory jets of this Froude number rise ${formatNumber(Number(lab.maxRise.toPrecision(3)))} m, as far as the surface ${formatNumber(run.H)} m above the port: the jet may strike the surface, where neither the model nor the correlations apply.`,
+        `Laboratory jets of this Froude number rise ${qty(lab.maxRise, 'm', 3)}, as far as the surface ${qty(run.H, 'm')} above the port: the jet may strike the surface, where neither the model nor the correlations apply.`,
         'port_depth',
       ),
     );

@@ -3,7 +3,7 @@ import { InputError } from '../core/errors';
 import { positive, nonNegative } from '../core/range';
 import { JET_PATH_COLUMNS, type BuoyantJetInput, type JetPath, type JetTrajectory } from './buoyant-jet';
 import type { DiffuserInput } from './diffuser';
-import { EXIT_VELOCITY } from './closure';
+import { EXIT_VELOCITY, PORT_DIAMETER } from './closure';
 
 /** Calc parameters and results of the buoyant-jet and diffuser-plume methods: inputs from arguments, chart curves. */
 
@@ -76,7 +76,7 @@ export function jetPathSeries(t: JetTrajectory): Series[] {
 
 /** Parameters of one port and its ambient, shared by buoyant-jet and diffuser-plume. */
 export const jetPortParams: ParamSpec[] = [
-  { kind: 'number', name: 'diameter', unit: 'm', description: 'port diameter', range: { ...positive, max: 20 } },
+  { kind: 'number', name: 'diameter', unit: 'm', description: 'port diameter', range: PORT_DIAMETER },
   { kind: 'number', name: 'velocity', unit: 'm/s', description: 'exit velocity', range: EXIT_VELOCITY },
   {
     kind: 'number',

@@ -2,7 +2,7 @@ import { num, text } from '../calc/resolve';
 import { arg, type CalcArgs, type CalcMethod, type CalcOutput } from '../calc/types';
 import { positive, nonNegative } from '../core/range';
 import { JET_LENGTH_SCALES, jetLengthScales } from './length-scales';
-import { BUOYANT_JET, EXIT_VELOCITY } from './closure';
+import { BUOYANT_JET, EXIT_VELOCITY, PORT_DIAMETER } from './closure';
 import { JET_PATH_COLUMNS } from './buoyant-jet';
 import { buoyantJetCalcMethod, incompleteOf } from './buoyant-jet-calc';
 import { diffuserInputFromArgs, jetPathSeries, jetPortParams } from './calc-inputs';
@@ -71,7 +71,7 @@ export const jetCalcMethods: CalcMethod[] = [
     title: JET_LENGTH_SCALES.title,
     topic: 'jets',
     params: [
-      { kind: 'number', name: 'diameter', unit: 'm', description: 'port diameter', range: { ...positive, max: 20 } },
+      { kind: 'number', name: 'diameter', unit: 'm', description: 'port diameter', range: PORT_DIAMETER },
       { kind: 'number', name: 'velocity', unit: 'm/s', description: 'exit velocity', range: EXIT_VELOCITY },
       {
         kind: 'number',

@@ -99,3 +99,9 @@ export interface JetState {
  * model's fluxes underflow); above 100 m/s no outfall runs.
  */
 export const EXIT_VELOCITY = { min: 1e-6, max: 100 } as const;
+
+/**
+ * Allowed port diameter [m]: below 0.1 mm no outfall or laboratory jet runs (and the fluxes and length scales
+ * underflow to zero); above 20 m no port is built. Common practice, no source.
+ */
+export const PORT_DIAMETER = { min: 1e-4, max: 20 } as const;

@@ -1,7 +1,8 @@
-import { requireInRange, positive, nonNegative } from '../core/range';
+import { qty } from '../core/quantity-text';
+import { requireInRange, nonNegative } from '../core/range';
 import { validityWarnings, type MethodInfo } from '../core/method';
 import type { Warning } from '../core/warning';
-import { EXIT_VELOCITY } from './closure';
+import { EXIT_VELOCITY, PORT_DIAMETER } from './closure';
 
 export const JET_LENGTH_SCALES: MethodInfo = {
   id: 'jet-length-scales',
@@ -57,7 +58,8 @@ export interface JetLengthScales {
   warnings: Warning[];
 }
 
-const fmt = (x: number) => (x >= 100 ? x.toFixed(0) : x >= 10 ? x.toFixed(1) : x.toPrecision(2));
+/** a length scale in a sentence, to two figures, shown in the reader's units */
+const about = (x: number) => qty(x, 'm', 2);
 
 /**
  * Fluxes and length scales of a round buoyant jet (Fischer et al. 1979 §9.1–9.3).
@@ -70,7 +72,7 @@ const fmt = (x: number) => (x >= 100 ? x.toFixed(0) : x >= 10 ? x.toFixed(1) : x
  * @validity Fr ≥ 1 (fully turbulent, port running full)
  */
 export function jetLengthScales(d: JetDischarge): JetLengthScales {
-  const D = requireInRange('diameter', d.diameter, 'm', { ...positive, max: 20 });
+  const D = requireInRange('diameter', d.diameter, 'm', PORT_DIAMETER);
   const U = requireInRange('velocity', d.velocity, 'm/s', EXIT_VELOCITY);
   const g = requireInRange('g_prime', d.gPrime, 'm/s2', { min: -5, max: 5 });
   const ua = requireInRange('current', d.current ?? 0, 'm/s', { ...nonNegative, max: 10 });
@@ -103,39 +105,53 @@ export function jetLengthScales(d: JetDischarge): JetLengthScales {
   };
 }
 
-/** Which process dominates where, in plain words (no class codes). */
+/**
+ * Which process dominates where, in plain words (no class codes). A scale that is not finite (the process is
+ * absent, or so weak that the scale overflows) is never printed: the sentence says the process does not act.
+ */
 function describeRegime(g: number, lQ: number, lM: number, lm: number, lb: number, lMN: number): string[] {
-  const out = [`Within about ${fmt(lQ)} m of the port the flow still remembers the port's shape.`];
-  if (g === 0) out.push('The effluent has the ambient density: it behaves as a pure momentum jet.');
+  const has = Number.isFinite;
+  const out = [
+    has(lQ) && lQ > 0
+      ? `Within about ${about(lQ)} of the port the flow still remembers the port's shape.`
+      : "The port is so small that the flow forgets the port's shape at once.",
+  ];
+  const buoyant = g !== 0 && has(lM);
+  if (!buoyant)
+    out.push(
+      g === 0
+        ? 'The effluent has the ambient density: it behaves as a pure momentum jet.'
+        : 'The density difference is too small to matter: the effluent behaves as a pure momentum jet.',
+    );
   else if (g > 0) {
     out.push(
       lM <= 5 * lQ
-        ? `Buoyancy takes over almost at once (within about ${fmt(lM)} m): the discharge rises as a plume.`
-        : `The discharge mixes as a momentum jet for about ${fmt(lM)} m, then rises as a buoyant plume.`,
+        ? `Buoyancy takes over almost at once (within about ${about(lM)}): the discharge rises as a plume.`
+        : `The discharge mixes as a momentum jet for about ${about(lM)}, then rises as a buoyant plume.`,
     );
   } else {
     out.push(
-      `The effluent is denser than the water around it: its momentum carries it about ${fmt(lM)} m before its weight turns it back towards the bed.`,
+      `The effluent is denser than the water around it: its momentum carries it about ${about(lM)} before its weight turns it back towards the bed.`,
     );
   }
-  if (Number.isFinite(lm)) {
+  if (has(lm) && lm > 0) {
     out.push(
-      lm < lM
-        ? `The current bends the jet over after about ${fmt(lm)} m, before buoyancy takes over.`
-        : `The current bends the jet over after about ${fmt(lm)} m.`,
+      buoyant && lm < lM
+        ? `The current bends the jet over after about ${about(lm)}, before buoyancy takes over.`
+        : `The current bends the jet over after about ${about(lm)}.`,
     );
-    if (g !== 0) {
+    if (buoyant && has(lb) && lb > 0) {
       out.push(
         lb < lM
-          ? `The current is strong: beyond about ${fmt(lb)} m it carries the plume along faster than buoyancy can lift or sink it.`
-          : `Buoyancy keeps control of the vertical motion for about ${fmt(lb)} m; further on the current carries the plume along.`,
+          ? `The current is strong: beyond about ${about(lb)} it carries the plume along faster than buoyancy can lift or sink it.`
+          : `Buoyancy keeps control of the vertical motion for about ${about(lb)}; further on the current carries the plume along.`,
       );
     }
-  } else out.push('There is no current: the jet is not deflected sideways.');
-  if (Number.isFinite(lMN)) {
+  } else out.push('There is no current to speak of: the jet is not deflected sideways.');
+  if (has(lMN)) {
     out.push(
-      lMN < Math.min(lM, lm)
-        ? `The density layering stops the rise early, after a few times ${fmt(lMN)} m, while the jet still has momentum.`
+      lMN < Math.min(lM, lm) || !buoyant
+        ? `The density layering stops the rise early, after a few times ${about(lMN)}, while the jet still has momentum.`
         : 'The density layering limits the rise after the jet has turned into a plume (scale (B/N³)^¼).',
     );
   } else out.push('The ambient is unstratified: nothing stops the plume below the surface.');

@@ -1,3 +1,4 @@
+import { qty } from '../core/quantity-text';
 import { caution, note, outsideValidity, type Warning } from '../core/warning';
 import type { OdeStatus } from '../numerics/ode';
 import type { JetEvent, JetPath } from './buoyant-jet';
@@ -7,7 +8,8 @@ import type { JetLengthScales } from './length-scales';
 export type JetOutcome =
   'surfaces' | 'trapped' | 'reaches bed' | 'returns to port level' | 'falls back on itself' | 'unfinished' | 'failed';
 
-const m = (x: number) => (Math.abs(x) >= 100 ? x.toFixed(0) : Math.abs(x) >= 10 ? x.toFixed(1) : x.toFixed(2));
+/** a length in a sentence, to three figures, shown in the reader's units */
+const len = (x: number) => qty(x, 'm', 3);
 const s = (x: number) => (x >= 100 ? x.toFixed(0) : x.toFixed(1));
 
 /** The outcome of a trajectory and a sentence that states it. */
@@ -25,17 +27,17 @@ export function describeOutcome(
   if (status === 'step-failed' || status === 'max-steps') {
     return {
       kind: 'failed',
-      text: `The integration stopped early (${status}) ${m(path.s[last])} m along the path; the results are incomplete.`,
+      text: `The integration stopped early (${status}) ${len(path.s[last])} along the path; the results are incomplete.`,
     };
   }
   const retText = ret
-    ? ` It falls back through port level ${m(ret.horizontalDistance)} m from the port with a centreline dilution of ${s(ret.dilutionCentreline)}.`
+    ? ` It falls back through port level ${len(ret.horizontalDistance)} from the port with a centreline dilution of ${s(ret.dilutionCentreline)}.`
     : '';
-  const rise = `The centreline rises at most ${m(maxRise)} m above the port.`;
+  const rise = `The centreline rises at most ${len(maxRise)} above the port.`;
   if (!end) {
     return {
       kind: 'unfinished',
-      text: `${rise}${retText} Within the ${m(path.s[last])} m of path followed it neither reached the surface or the bed nor became trapped; the near field continues beyond.`,
+      text: `${rise}${retText} Within the ${len(path.s[last])} of path followed it neither reached the surface or the bed nor became trapped; the near field continues beyond.`,
     };
   }
   const prev = events[events.length - 2];
@@ -43,7 +45,7 @@ export function describeOutcome(
     case 'surface contact':
       return {
         kind: 'surfaces',
-        text: `The plume reaches the surface ${m(end.horizontalDistance)} m from the port with a centreline dilution of ${s(end.dilutionCentreline)} (average ${s(end.dilutionAverage)}); from there it spreads along the surface, which this model does not follow.`,
+        text: `The plume reaches the surface ${len(end.horizontalDistance)} from the port with a centreline dilution of ${s(end.dilutionCentreline)} (average ${s(end.dilutionAverage)}); from there it spreads along the surface, which this model does not follow.`,
       };
     case 'maximum rise':
     case 'lowest point':
@@ -51,19 +53,19 @@ export function describeOutcome(
       if (prev.kind === 'momentum spent' && !neutral) {
         return {
           kind: 'falls back on itself',
-          text: `The jet is stopped ${m(end.z)} m above the port with a centreline dilution of ${s(end.dilutionCentreline)} and falls back onto itself (a fountain); the integral model ends there.`,
+          text: `The jet is stopped ${len(end.z)} above the port with a centreline dilution of ${s(end.dilutionCentreline)} and falls back onto itself (a fountain); the integral model ends there.`,
         };
       }
       return {
         kind: 'trapped',
         text:
-          `The density layering traps the plume below the surface: it becomes neutrally buoyant ${m(neutral?.z ?? end.z)} m above the port (depth ${m(neutral?.depth ?? end.depth)} m), ` +
-          `overshoots to ${m(end.z)} m and will spread sideways near the neutral level; the centreline dilution at the turning point is ${s(end.dilutionCentreline)}.`,
+          `The density layering traps the plume below the surface: it becomes neutrally buoyant ${len(neutral?.z ?? end.z)} above the port (depth ${len(neutral?.depth ?? end.depth)}), ` +
+          `overshoots to ${len(end.z)} and will spread sideways near the neutral level; the centreline dilution at the turning point is ${s(end.dilutionCentreline)}.`,
       };
     case 'bed contact':
       return {
         kind: 'reaches bed',
-        text: `${rise}${retText} The centreline reaches the bed ${m(end.horizontalDistance)} m from the port with a centreline dilution of ${s(end.dilutionCentreline)}; beyond it the effluent spreads as a density current on the bed.`,
+        text: `${rise}${retText} The centreline reaches the bed ${len(end.horizontalDistance)} from the port with a centreline dilution of ${s(end.dilutionCentreline)}; beyond it the effluent spreads as a density current on the bed.`,
       };
     case 'return to port level':
       return {
@@ -111,7 +113,7 @@ export function pathWarnings(c: WarningContext): Warning[] {
     w.push(
       caution(
         'plume-edge-surfaces',
-        `The plume's edge touches the surface ${m(surf.horizontalDistance)} m from the port, before its centreline does: surface interaction is not modelled beyond that point.`,
+        `The plume's edge touches the surface ${len(surf.horizontalDistance)} from the port, before its centreline does: surface interaction is not modelled beyond that point.`,
       ),
     );
   const bedEdge = find('edge reaches bed');
@@ -119,7 +121,7 @@ export function pathWarnings(c: WarningContext): Warning[] {
     w.push(
       caution(
         'near-field-bed-contact',
-        `The plume's lower edge touches the bed ${m(bedEdge.horizontalDistance)} m from the port: it may attach to the bed, which a free-jet model does not describe.`,
+        `The plume's lower edge touches the bed ${len(bedEdge.horizontalDistance)} from the port: it may attach to the bed, which a free-jet model does not describe.`,
       ),
     );
   if (c.dense && c.angleDeg < 15)
@@ -135,14 +137,14 @@ export function pathWarnings(c: WarningContext): Warning[] {
     w.push(
       caution(
         'plumes-merge-single-port',
-        `Neighbouring plumes merge ${m(merge.s)} m along the path (centreline dilution ${s(merge.dilutionCentreline)}): beyond it the single-port dilution is too high; use the merged-diffuser estimate.`,
+        `Neighbouring plumes merge ${len(merge.s)} along the path (centreline dilution ${s(merge.dilutionCentreline)}): beyond it the single-port dilution is too high; use the merged-diffuser estimate.`,
       ),
     );
   if (merge && c.merged)
     w.push(
       note(
         'plumes-merge',
-        `Neighbouring plumes merge ${m(merge.s)} m along the path (centreline dilution ${s(merge.dilutionCentreline)}); beyond it the path is that of a line plume with the merged fluxes per unit diffuser length.`,
+        `Neighbouring plumes merge ${len(merge.s)} along the path (centreline dilution ${s(merge.dilutionCentreline)}); beyond it the path is that of a line plume with the merged fluxes per unit diffuser length.`,
       ),
     );
   if (c.current > c.velocity)
@@ -162,7 +164,7 @@ export function pathWarnings(c: WarningContext): Warning[] {
       ),
       caution(
         'dense-jet-rise-low',
-        'The model’s rise is low: laboratory dense jets rise higher than integral models predict (Lai & Lee 2012 found 10–15 % for theirs; this one is about 20 % below Roberts, Ferrier & Daviero 1997). Do not rely on the model’s rise to show that the jet stays below the surface or an intake; compare the laboratory rise (max_rise_lab).',
+        'The model’s rise is low: laboratory dense jets rise higher than integral models predict (Lai & Lee 2012 found 10–15 % for theirs; this one is about 20 % below Roberts, Ferrier & Daviero 1997). Do not rely on the model’s rise to show that the jet stays below the surface or an intake; compare the terminal rise from the laboratory correlations.',
         'angle',
       ),
     );
@@ -171,7 +173,7 @@ export function pathWarnings(c: WarningContext): Warning[] {
     w.push(
       caution(
         'path-length-reached',
-        `The path followed ends (max_path_length = ${m(c.pathLength)} m) before the near field does: the dilution at its end is a lower bound.`,
+        `The path followed ends (longest path followed ${len(c.pathLength)}) before the near field does: the dilution at its end is a lower bound.`,
         'max_path_length',
       ),
     );
@@ -179,7 +181,7 @@ export function pathWarnings(c: WarningContext): Warning[] {
     w.push(
       caution(
         'port-below-profile',
-        `The port (depth ${m(c.portDepth)} m) lies below the deepest profile sample (${m(c.profileBottom)} m): the ambient there is extrapolated.`,
+        `The port (depth ${len(c.portDepth)}) lies below the deepest profile sample (${len(c.profileBottom)}): the ambient there is extrapolated.`,
         'port_depth',
       ),
     );

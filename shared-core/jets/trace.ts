@@ -1,3 +1,4 @@
+import { qty } from '../core/quantity-text';
 import { InputError } from '../core/errors';
 import { requireInRange, positive } from '../core/range';
 import { integrateOde, type OdeEventSet, type OdeStatus } from '../numerics/ode';
@@ -8,7 +9,7 @@ import type { BuoyantJetInput } from './buoyant-jet';
 import type { JetGeometry, JetState } from './closure';
 import { jetGaugesInto, jetRhsFor, newJetGauges, scaledState, type JetEquations, type JetGauges } from './equations';
 import { jetLengthScales, type JetLengthScales } from './length-scales';
-import { EXIT_VELOCITY } from './closure';
+import { EXIT_VELOCITY, PORT_DIAMETER } from './closure';
 
 /** What a jet run needs from its caller: the model's input without the compliance choice. */
 export type JetRunInput = Omit<BuoyantJetInput, 'denseJetDilution'>;
@@ -69,7 +70,7 @@ export const JET_DEFAULT_MAX_PATH = 10000;
 
 /** Validates a run's input and sets up the ambient tables and the port state. */
 export function prepareJetRun(input: JetRunInput): JetRun {
-  const D = requireInRange('diameter', input.diameter, 'm', { ...positive, max: 20 });
+  const D = requireInRange('diameter', input.diameter, 'm', PORT_DIAMETER);
   const U = requireInRange('velocity', input.velocity, 'm/s', EXIT_VELOCITY);
   const phi = requireInRange('angle', input.angle, 'deg', { min: -90, max: 90 }) * deg;
   const theta = requireInRange('horizontal_angle', input.horizontalAngle ?? 0, 'deg', { min: -180, max: 180 }) * deg;
@@ -79,7 +80,7 @@ export function prepareJetRun(input: JetRunInput): JetRun {
   // a profile or water depth shallower than the port means the port sits on the bed
   const bed = input.bedDepth === undefined && amb.bedDepth !== undefined ? Math.max(amb.bedDepth, H) : amb.bedDepth;
   if (bed !== undefined && bed < H)
-    throw new InputError('bed_depth', bed, 'm', `≥ port_depth (${H} m)`, 'the bed must not be above the port');
+    throw new InputError('bed_depth', bed, 'm', `≥ port depth (${qty(H, 'm')})`, 'the bed must not be above the port');
   const spacing =
     input.portSpacing === undefined ? undefined : requireInRange('port_spacing', input.portSpacing, 'm', positive);
   const tE =
@@ -279,7 +280,7 @@ export function traceStretch(run: JetRun, o: StretchOptions): Stretch {
 
 /** The integrator's stop in the words of the path: where and why it stopped early. */
 function stopMessage(status: OdeStatus, message: string, s: number, maxSteps: number): string {
-  const at = `s = ${Number(s.toPrecision(4))} m`;
+  const at = `${qty(s, 'm', 4)} along the path`;
   if (status === 'max-steps') return `the path integration stopped at its step limit of ${maxSteps} steps at ${at}`;
   if (status === 'step-failed')
     return `the path integration stopped on a failed step at ${at} (${message.replace(/ at t = .*$/, '')})`;

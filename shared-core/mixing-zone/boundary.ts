@@ -1,3 +1,4 @@
+import { qty } from '../core/quantity-text';
 import { requireInRange, nonNegative } from '../core/range';
 import type { JetTrajectory } from '../jets/buoyant-jet';
 
@@ -33,7 +34,7 @@ export function dilutionAtBoundary(t: JetTrajectory, boundary: MixingZoneBoundar
     ...d,
     dilutionCentreline: Math.max(1, d.dilutionCentreline * f),
     dilutionAverage: Math.max(1, d.dilutionAverage * f),
-    note: `${d.note}; beyond the return point the model's dilution is scaled by ${f.toPrecision(3)} to the ${dense.choice === 'lab' ? 'laboratory' : 'cautious'} return dilution (dense_jet_dilution = ${dense.choice})`,
+    note: `${d.note}; beyond the return point the model's dilution is scaled by ${f.toPrecision(3)} to the ${dense.choice === 'lab' ? 'laboratory' : 'cautious'} return dilution (dense-jet dilution used: ${dense.choice})`,
   };
 }
 
@@ -51,7 +52,7 @@ function modelDilutionAtBoundary(t: JetTrajectory, boundary: MixingZoneBoundary)
         dilutionAverage: lerp(t.path.dilutionAverage),
         reached: true,
         pathDistance: lerp(t.path.s),
-        note: `at the boundary, ${R} m ${boundary.measure === 'horizontal' ? 'from the port' : 'along the path'}`,
+        note: `at the boundary, ${qty(R, 'm')} ${boundary.measure === 'horizontal' ? 'from the port' : 'along the path'}`,
       };
     }
   }

@@ -1,3 +1,4 @@
+import { qty } from '../core/quantity-text';
 import { create, erfDependencies } from 'mathjs';
 import type { MethodInfo } from '../core/method';
 import { nonNegative, positive, requireInRange } from '../core/range';
@@ -98,7 +99,7 @@ export function farFieldSpreadingBrooks1960(
     warnings.push(
       outsideValidity(
         'slack-current',
-        `A current of ${u} m/s is too weak for a steady wastefield (slack water or tidal reversal, below about ${SLACK_CURRENT} m/s: common practice, no source); the far-field dilution is an extrapolation.`,
+        `A current of ${qty(u, 'm/s', 3)} is too weak for a steady wastefield (slack water or tidal reversal, below about ${qty(SLACK_CURRENT, 'm/s')}: common practice, no source); the far-field dilution is an extrapolation.`,
         'current',
       ),
     );
@@ -108,7 +109,7 @@ export function farFieldSpreadingBrooks1960(
     warnings.push(
       outsideValidity(
         'far-field-long-travel',
-        `The travel time ${(x / u / 3600).toFixed(1)} h exceeds half a tidal period: the current cannot be taken as steady and the 4/3-law's validity is doubtful (common practice, no source).`,
+        `The travel time ${qty(x / u / 3600, 'h', 2)} exceeds half a tidal period: the current cannot be taken as steady and the 4/3-law's validity is doubtful (common practice, no source).`,
         'distance',
       ),
     );

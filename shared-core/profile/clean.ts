@@ -21,7 +21,7 @@ export function depthOrder(depth: readonly number[], rowNumber: readonly number[
     warnings.push(
       caution(
         'rows-above-surface',
-        `Dropped ${describeRows(rowNumbers(above, rowNumber))}: above the water surface (depth below 0 m, e.g. the instrument in air).`,
+        `Dropped ${describeRows(rowNumbers(above, rowNumber))}: above the water surface (a negative depth, e.g. the instrument in air).`,
         'file',
       ),
     );

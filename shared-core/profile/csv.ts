@@ -1,3 +1,4 @@
+import { qty } from '../core/quantity-text';
 import { InputError } from '../core/errors';
 import { note, caution, type Warning } from '../core/warning';
 import type { EquationOfState } from '../water/density';
@@ -205,7 +206,7 @@ function withFreshWaterDepthCaution(p: Profile): Profile {
   if (percent < 0.5) return p;
   const w = caution(
     'depth-from-pressure-fresh',
-    `The depth-from-pressure formula assumes ocean water (1028 kg/m³); at this profile's mean density (${mean.toFixed(1)} kg/m³) the true depths are about ${percent.toFixed(1)} % greater.`,
+    `The depth-from-pressure formula assumes ocean water (${qty(1028, 'kg/m3')}); at this profile's mean density (${qty(mean, 'kg/m3', 5)}) the true depths are about ${percent.toFixed(1)} % greater.`,
     'file',
   );
   return { ...p, warnings: [...p.warnings, w] };

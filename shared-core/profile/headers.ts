@@ -95,7 +95,8 @@ export function columnConversion(h: ParsedHeader, role: Role, issues: ProfileIss
     const scale = convertToSi(h.name, 1, unit, ROLE_UNIT[role]) - offset;
     return (v) => scale * v + offset;
   } catch (e) {
-    issues.push({ row: 0, column: h.name, message: e instanceof InputError ? e.message : String(e) });
+    // the column is named by the issue; its message says why the unit does not fit
+    issues.push({ row: 0, column: h.name, message: e instanceof InputError ? (e.detail ?? e.message) : String(e) });
     return () => NaN;
   }
 }

@@ -1,3 +1,4 @@
+import { qty } from '../core/quantity-text';
 import { InputError } from '../core/errors';
 import { LIMITS } from '../core/limits';
 import { uniqueWarnings, type Warning } from '../core/warning';
@@ -53,16 +54,17 @@ export interface ProfileIssue {
   message: string;
 }
 
+/** One issue in words: "row 4, column "temperature": …", "the header: …" (never a bracketed placeholder). */
+function issueText(i: ProfileIssue): string {
+  if (i.column === '(header)') return `the header: ${i.message}`;
+  if (i.column === '(row)') return `row ${i.row}: ${i.message}`;
+  return i.row > 0 ? `row ${i.row}, column "${i.column}": ${i.message}` : `column "${i.column}": ${i.message}`;
+}
+
 export class ProfileError extends Error {
   readonly issues: ProfileIssue[];
   constructor(issues: ProfileIssue[]) {
-    super(
-      issues
-        .map((i) =>
-          i.row > 0 ? `row ${i.row}, column "${i.column}": ${i.message}` : `column "${i.column}": ${i.message}`,
-        )
-        .join('\n'),
-    );
+    super(issues.map(issueText).join('\n'));
     this.name = 'ProfileError';
     this.issues = issues;
   }
@@ -92,7 +94,7 @@ function checkColumn(
       issues.push({
         row: i + 1,
         column: name,
-        message: `${v} ${unit} is physically impossible here (allowed ${min} … ${max} ${unit})`,
+        message: `${qty(v, unit, 6)} is physically impossible here (allowed ${qty(min, unit)} … ${qty(max, unit)})`,
       });
   });
 }
@@ -124,12 +126,13 @@ export function makeProfile(input: ProfileInput): Profile {
   for (let i = 1; i < n; i++) {
     const a = input.depth[i - 1],
       b = input.depth[i];
-    if (a === b) issues.push({ row: i + 1, column: 'depth', message: `duplicate depth ${b} m (same as row ${i})` });
+    if (a === b)
+      issues.push({ row: i + 1, column: 'depth', message: `duplicate depth ${qty(b, 'm', 6)} (same as row ${i})` });
     else if (b < a)
       issues.push({
         row: i + 1,
         column: 'depth',
-        message: `depth ${b} m is shallower than the row above (${a} m); depths must increase`,
+        message: `depth ${qty(b, 'm', 6)} is shallower than the row above (${qty(a, 'm', 6)}); depths must increase`,
       });
   }
   for (const col of input.extra ?? []) {

@@ -7,6 +7,7 @@ import { SCREENING_CAUTION } from '../core/caution';
 import { uniqueWarnings, type Warning } from '../core/warning';
 import { ProfileError } from '../profile/profile';
 import { boundArgs } from './bindings';
+import { namesAsWords, siteMessage } from './words';
 import { makeContext, ProfileCache, type EstimateContext } from './context';
 import type { Estimate, Site } from './schema';
 import { complianceEstimates, farFieldEstimates, siteCompliance, withRequiredDilution } from './compliance';
@@ -180,7 +181,12 @@ export function runEstimate(
     ...(found ? { feature: { id: found.id, name: found.name, kind: found.kind } } : {}),
     ...(condition ? { condition: { id: condition.id, name: condition.name } } : {}),
   };
-  const fail = (error: string): EstimateOutcome => ({ ...base, ...where, status: 'error', error });
+  const fail = (error: string): EstimateOutcome => ({
+    ...base,
+    ...where,
+    status: 'error',
+    error: siteMessage(error, site, e.method),
+  });
   if (!method) return fail(`estimates[${index}].method: "${e.method}" is not a gprime method (see gprime calc --list)`);
   if (e.feature && !found) return fail(`estimates[${index}].feature: no feature with id "${e.feature}"`);
   if (e.condition && !condition) return fail(`estimates[${index}].condition: no condition with id "${e.condition}"`);
@@ -200,7 +206,10 @@ export function runEstimate(
         k in e.params ? 'typed' : raw[k] !== undefined ? 'site' : 'default',
       ]),
     );
-    const warnings = uniqueWarnings([...(ctx.profile?.warnings ?? []), ...out.warnings]);
+    const warnings = uniqueWarnings([...(ctx.profile?.warnings ?? []), ...out.warnings]).map((w) => ({
+      ...w,
+      message: namesAsWords(w.message, method.id),
+    }));
     const wantsBand = options.bands !== false && e.uncertainty && Object.keys(e.uncertainty).length > 0;
     const uncertainty = wantsBand
       ? bandsFromTyped(method, raw, e.uncertainty!, { progress: options.bandProgress })
@@ -209,7 +218,7 @@ export function runEstimate(
       ...base,
       ...where,
       status: out.incomplete ? 'incomplete' : 'ok',
-      ...(out.incomplete ? { incomplete: out.incomplete } : {}),
+      ...(out.incomplete ? { incomplete: namesAsWords(out.incomplete, method.id) } : {}),
       inputs,
       origins,
       results: out.results,

@@ -1,3 +1,4 @@
+import { qty } from '../core/quantity-text';
 import type { EstimateModel } from '../calc/model';
 import { formatShort, InputError } from '../core/errors';
 import type { JetTrajectory } from '../jets/buoyant-jet';
@@ -235,7 +236,7 @@ function zoneRowsFor(
   const farNote =
     factor === undefined
       ? ''
-      : `the near field ends (${g.trajectory.outcome}) ${formatShort(xEnd)} m from the port; the far field (4/3-law) ` +
+      : `the near field ends (${g.trajectory.outcome}) ${qty(xEnd, 'm', 4)} from the port; the far field (4/3-law) ` +
         `from there to the boundary multiplies its dilution by ${formatShort(factor)}`;
   const dilution: BoundaryDilution =
     factor === undefined
@@ -246,7 +247,7 @@ function zoneRowsFor(
   const noCurrent =
     !atEdge.reached && !condition.current ? '; no ambient current is given, so the far field is not computed' : '';
   const extrapolated = [near, ...(factor === undefined ? [] : [far!])].flatMap((o) =>
-    o.warnings.filter((w) => w.severity === 'outside-validity').map((w) => `${o.id}: ${w.message}`),
+    o.warnings.filter((w) => w.severity === 'outside-validity').map((w) => `${o.title}: ${w.message}`),
   );
   // the far field only adds dilution: a near field that meets on its own meets with the band (see VERDICT_RULE)
   const nearAlone = (req: number | undefined) => req !== undefined && atEdge.dilutionCentreline >= req * (1 + BAND);

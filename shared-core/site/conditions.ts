@@ -1,3 +1,4 @@
+import { siteMessage } from './words';
 import type { Series } from '../calc/types';
 import type { Warning } from '../core/warning';
 import { profileSeries } from '../profile/calc';
@@ -29,7 +30,12 @@ export function assessConditions(site: Site, cache: ProfileCache): ConditionOutc
     if ('error' in read) {
       const message = read.error instanceof Error ? read.error.message : String(read.error);
       const issues = read.error instanceof ProfileError ? read.error.issues : [];
-      return { ...base, status: 'error', issues, error: `conditions[${i}] (“${c.name}”) profile: ${message}` };
+      return {
+        ...base,
+        status: 'error',
+        issues,
+        error: siteMessage(`conditions[${i}] (“${c.name}”) profile: ${message}`, site),
+      };
     }
     const p = read.profile;
     return {

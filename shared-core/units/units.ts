@@ -146,11 +146,43 @@ export function normaliseUnitText(text: string): string {
   );
 }
 
-function toMathUnit(field: string, text: string, value: number): Unit {
+/** What a quantity in an SI unit is, and units a user may type for it, for refusals in words. */
+const QUANTITY_KIND: Record<string, [string, string]> = {
+  m: ['a length', 'ft, in, km'],
+  s: ['a time', 'min, h, day'],
+  'm/s': ['a speed', 'ft/s, knot, mph'],
+  'm/s2': ['an acceleration', 'ft/s2'],
+  'm2/s': ['a diffusivity or kinematic viscosity', 'ft2/s, cm2/s'],
+  'm3/s': ['a discharge', 'cfs, MGD, ML/d, L/s'],
+  'kg/m3': ['a density or concentration', 'lb/ft3, g/L, mg/L'],
+  degC: ['a temperature', 'degF, K'],
+  K: ['a temperature difference', 'degF'],
+  dbar: ['a pressure', 'bar, Pa'],
+  m2: ['an area', 'ft2, km2'],
+  m3: ['a volume', 'ft3, gal'],
+  '1/s': ['a frequency', '1/min'],
+  deg: ['an angle', 'rad'],
+};
+
+/** The unit a field expects, in words: "a length in m or a unit convertible to it (ft, in, km)". */
+export function expectedQuantity(siUnit: string): string {
+  if (siUnit === 'PSU') return 'a salinity in PSU (or ppt, g/kg)';
+  if (DIMENSIONLESS.has(siUnit)) return 'a plain number without a unit';
+  const [kind, others] = QUANTITY_KIND[siUnit] ?? ['a quantity', ''];
+  return `${kind} in ${siUnit} or a unit convertible to it${others ? ` (${others})` : ''}`;
+}
+
+function toMathUnit(field: string, text: string, value: number, siUnit: string): Unit {
   try {
     return math().unit(value, normaliseUnitText(text));
   } catch {
-    throw new InputError(field, `${value} ${text}`, text, 'a known unit', `the unit "${text}" is not known`);
+    throw new InputError(
+      field,
+      `${value} ${text}`,
+      siUnit,
+      expectedQuantity(siUnit),
+      `the unit "${text}" is not known; give ${expectedQuantity(siUnit)}`,
+    );
   }
 }
 
@@ -176,21 +208,22 @@ export function convertToSi(field: string, value: number, fromUnit: string, siUn
       field,
       `${value} ${fromUnit}`,
       siUnit,
-      siUnit === 'PSU' ? 'PSU (or ppt, g/kg)' : 'a plain number',
-      `a ${siUnit === 'PSU' ? 'salinity' : 'dimensionless number'} takes no unit "${fromUnit}"`,
+      expectedQuantity(siUnit),
+      `"${fromUnit}" is not a unit of ${siUnit === 'PSU' ? 'salinity' : 'a dimensionless number'}; give ${expectedQuantity(siUnit)}`,
     );
   }
   const target = MATHJS_NAME[siUnit] ?? siUnit;
-  const u = toMathUnit(field, fromUnit, value);
+  const u = toMathUnit(field, fromUnit, value, siUnit);
   try {
     return u.toNumber(target);
   } catch {
+    const kind = QUANTITY_KIND[siUnit]?.[0];
     throw new InputError(
       field,
       `${value} ${fromUnit}`,
       siUnit,
-      `a quantity convertible to ${siUnit}`,
-      `"${fromUnit}" cannot be converted to ${siUnit}`,
+      expectedQuantity(siUnit),
+      `"${fromUnit}" ${kind ? `is not a unit of ${kind.replace(/^an? /, '')}` : `cannot be converted to ${siUnit}`}; give ${expectedQuantity(siUnit)}`,
     );
   }
 }
@@ -210,8 +243,8 @@ export function parseQuantity(field: string, text: string, siUnit: string): numb
       field,
       text,
       siUnit,
-      `a number with an optional unit (e.g. "12 ${siUnit === '1' ? '' : siUnit}")`,
-      'it is not a number',
+      expectedQuantity(siUnit),
+      `it is not a number; give ${expectedQuantity(siUnit)}`,
     );
   const feetInches = /^(?:'|’|′|ft|feet|foot)\s*(\d+(?:\.\d+)?)\s*(?:"|''|”|″|in|inch|inches)?$/i.exec(m.rest);
   if (feetInches) {

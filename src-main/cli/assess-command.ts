@@ -1,14 +1,19 @@
 import { assessSite, SiteFileError, type Assessment } from '../../shared-core/site';
 import { formatNumber } from '../../shared-core/core/errors';
 import { keyResultName } from '../../shared-core/calc/types';
+import { sentenceIn } from '../../shared-core/units/sentence';
+import type { UnitSystem } from '../../shared-core/units/units';
+import { quantityText } from './format';
+import { withSentencesIn } from './shown';
 import { readSiteFile, GPRIME_VERSION } from '../services/site-file';
 import { checkOutFolder } from './out-folder';
 import { EXIT_NOT_ALL_OK, treatAsBadInput, UsageError, type CommandResult } from './errors';
 
 treatAsBadInput(SiteFileError);
 
-/** A short plain-text summary: per estimate its key result and warnings count. */
-export function summariseAssessment(a: Assessment): string {
+/** A short plain-text summary: per estimate its key result and warnings count, in the unit system given. */
+export function summariseAssessment(a: Assessment, system: UnitSystem = 'si'): string {
+  const say = (text: string) => sentenceIn(text, system);
   const lines = [
     `${a.project.name} — ${a.waterBody}`,
     `gprime ${a.gprimeVersion}, site file sha256 ${a.siteHash.slice(0, 16)}…`,
@@ -17,20 +22,22 @@ export function summariseAssessment(a: Assessment): string {
   for (const e of a.estimates) {
     const where = [e.feature?.name, e.condition?.name].filter(Boolean).join(', ');
     if (e.status === 'error') {
-      lines.push(`✗ ${e.id} (${e.method}${where ? `; ${where}` : ''}): ${e.error}`);
+      lines.push(`✗ ${e.id} (${e.method}${where ? `; ${where}` : ''}): ${say(e.error ?? '')}`);
       continue;
     }
     if (e.status === 'incomplete')
-      lines.push(`… ${e.id} (${e.method}${where ? `; ${where}` : ''}): incomplete, ${e.incomplete ?? 'stopped early'}`);
+      lines.push(
+        `… ${e.id} (${e.method}${where ? `; ${where}` : ''}): incomplete, ${say(e.incomplete ?? 'stopped early')}`,
+      );
     const key = keyResultName(e.results) ?? '';
     const r = e.results[key] ?? { value: '', unit: '' };
-    const value = typeof r.value === 'number' ? formatNumber(r.value) : r.value;
+    const value = typeof r.value === 'number' ? quantityText(r.value, r.unit, system) : say(r.value);
     const band = e.uncertainty?.bands.find((b) => b.name === key);
     const bandText = band
-      ? ` (${Math.round(e.uncertainty!.coverage * 100)} % band ${formatNumber(band.low)} … ${formatNumber(band.high)})`
+      ? ` (${Math.round(e.uncertainty!.coverage * 100)} % band ${quantityText(band.low, band.unit, system)} … ${quantityText(band.high, band.unit, system)})`
       : '';
     lines.push(
-      `• ${e.id} (${e.method}${where ? `; ${where}` : ''}): ${key} = ${value}${r.unit && r.unit !== '1' ? ' ' + r.unit : ''}${bandText}` +
+      `• ${e.id} (${e.method}${where ? `; ${where}` : ''}): ${key} = ${value}${bandText}` +
         (e.warnings.length ? `  [${e.warnings.length} warning${e.warnings.length > 1 ? 's' : ''}]` : ''),
     );
   }
@@ -106,6 +113,9 @@ export async function assessCommand(args: string[], json: boolean): Promise<Comm
   const loaded = readSiteFile(opts.file);
   const assessment = assessSite(loaded.site, { gprimeVersion: GPRIME_VERSION, siteHash: loaded.hash });
   const exit = assessmentExit(assessment);
+  // the summary speaks the units of the report it goes with: --units, else the site's own
+  const system = opts.units ?? loaded.site.units;
+  const shownJson = (extra: object = {}) => JSON.stringify(withSentencesIn({ ...assessment, ...extra }, system));
   if (opts.out) {
     const { writeReport } = await import('../report/write-report');
     const written = await writeReport(loaded, assessment, {
@@ -114,10 +124,10 @@ export async function assessCommand(args: string[], json: boolean): Promise<Comm
       units: opts.units ?? loaded.site.units,
     });
     const summary =
-      summariseAssessment(assessment) +
+      summariseAssessment(assessment, system) +
       `\n\nWrote ${written.length} files to ${opts.out}:\n` +
       written.map((w) => `  ${w}`).join('\n');
-    return { stdout: json ? JSON.stringify({ ...assessment, written }) : summary, ...exit };
+    return { stdout: json ? shownJson({ written }) : summary, ...exit };
   }
-  return { stdout: json ? JSON.stringify(assessment) : summariseAssessment(assessment), ...exit };
+  return { stdout: json ? shownJson() : summariseAssessment(assessment, system), ...exit };
 }

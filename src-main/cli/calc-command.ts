@@ -10,6 +10,7 @@ import { bandsFromTyped, type UncertaintyResult } from '../../shared-core/uncert
 import { describeMethods, formatCalcText, formatUncertaintyText } from './format';
 import { calcPairs, uncertaintyFlags } from './calc-args';
 import { UsageError, type CommandResult } from './errors';
+import { takeUnits, withSentencesIn } from './shown';
 
 /** Reads a CSV profile from disk for a 'profile' parameter. */
 export function loadProfileFile(field: string, path: string) {
@@ -40,18 +41,22 @@ function runWithUnitHelp(method: CalcMethod, raw: Record<string, RawArg>) {
     if (!(e instanceof InputError) || spec?.kind !== 'number' || typeof raw[spec.name] !== 'string') throw e;
     if (typeof e.value !== 'string') throw e; // read, but out of range: the message names the range already
     const range = describeRange(spec.range ?? {}, spec.unit);
-    const expected = spec.unit === '1' ? 'a plain number' : `${spec.unit} or a unit convertible to it`;
     const explained = new InputError(e.field, e.value, e.unit, range);
-    explained.message = `${e.message}; ${spec.name} takes ${expected}, allowed ${range}`;
+    explained.message = `${e.message}; allowed range is ${range}`;
     throw explained;
   }
 }
 
-/** `gprime calc <method> name=value … [--json]` and `gprime calc --list [--json]`. */
-export function calcCommand(args: string[], json: boolean): CommandResult {
+/**
+ * `gprime calc <method> name=value … [--units si|us] [--json]` and `gprime calc --list [--json]`. With `--units us`
+ * the text shows results and sentences in US customary units; JSON keeps SI numbers, its sentences in the system.
+ */
+export function calcCommand(argv: string[], json: boolean): CommandResult {
+  const { rest: args, units } = takeUnits(argv);
+  const system = units ?? 'si';
   if (args.includes('--list')) {
     const list = describeMethods(CALC_METHODS);
-    if (json) return { stdout: JSON.stringify({ methods: list }, null, 2) };
+    if (json) return { stdout: JSON.stringify(withSentencesIn({ methods: list }, system), null, 2) };
     return {
       stdout: list
         .map(
@@ -72,15 +77,24 @@ export function calcCommand(args: string[], json: boolean): CommandResult {
   const band = sigmas.length ? bandsFromTyped(method, raw, Object.fromEntries(sigmas), options) : undefined;
   if (json)
     return {
-      stdout: JSON.stringify({
-        method: method.id,
-        results: out.results,
-        warnings: out.warnings,
-        sources: out.sources,
-        ...(band ? { uncertainty: uncertaintyJson(band) } : {}),
-      }),
+      stdout: JSON.stringify(
+        withSentencesIn(
+          {
+            method: method.id,
+            results: out.results,
+            warnings: out.warnings,
+            sources: out.sources,
+            ...(band ? { uncertainty: uncertaintyJson(band) } : {}),
+          },
+          system,
+        ),
+      ),
     };
-  return { stdout: formatCalcText(method, out, band && formatUncertaintyText(band)) };
+  const inputUnit = (name: string) => {
+    const spec = method.params.find((p) => p.name === name);
+    return spec?.kind === 'number' ? spec.unit : '1';
+  };
+  return { stdout: formatCalcText(method, out, band && formatUncertaintyText(band, system, inputUnit), system) };
 }
 
 function uncertaintyJson(r: UncertaintyResult) {

@@ -2,18 +2,24 @@ import { InputError } from '../../shared-core/core/errors';
 import { ProfileError } from '../../shared-core/profile/profile';
 import { calcCommand } from './calc-command';
 import { isBadInput, treatAsBadInput, UsageError, type CommandResult } from './errors';
+import { sentenceIn } from '../../shared-core/units/sentence';
+import { unitsAskedFor } from './shown';
 
 treatAsBadInput(InputError, ProfileError);
 
 const USAGE = `gprime — screening estimates for stratified flows and density currents
 
 Usage:
-  gprime calc <method> name=value … [--json]   run one estimate (values in SI or with units: depth=30ft)
+  gprime calc <method> name=value … [--units si|us] [--json]
+                                                run one estimate (values in SI or with units: depth=30ft);
+                                                --units us shows results and messages in US customary units
   gprime calc <method> … --sigma name=u [--sigma …] [--samples N] [--seed N] [--coverage p]
                                                 add an uncertainty band (u: one standard deviation,
                                                 e.g. g_prime=0.002, depth=1ft, velocity=10%)
   gprime calc --list [--json]                   list every method, its parameters and results
-  gprime assess <site file> [--json]            evaluate every estimate of a site file
+  gprime assess <site file> [--units si|us] [--json]
+                                                evaluate every estimate of a site file (summary in the
+                                                site's units unless --units is given)
   gprime assess <site file> --out <folder> [--format pdf,png,svg,csv,xlsx] [--units si|us]
                                                 write the calc sheet, charts and tables
   gprime help                                   this text
@@ -51,7 +57,7 @@ export async function main(argv: string[]): Promise<number> {
     return result.exitCode ?? 0;
   } catch (e) {
     const bad = isBadInput(e);
-    const message = e instanceof Error ? e.message : String(e);
+    const message = sentenceIn(e instanceof Error ? e.message : String(e), unitsAskedFor(args));
     if (json) {
       const field = e instanceof InputError ? e.field : undefined;
       process.stdout.write(JSON.stringify({ error: { kind: bad ? 'input' : 'internal', field, message } }) + '\n');

@@ -53,15 +53,19 @@ describe('gprime calc refuses what it used to take silently', () => {
     refused(
       ['calc', 'water-density', 'temperature=20furlongs'],
       'the unit "furlongs" is not known',
-      /degC or a unit/,
-      '≥ -3 and ≤ 60 degC',
+      /a temperature in degC or a unit/,
+      'allowed range is ≥ −3 °C and ≤ 60 °C',
     );
-    refused(['calc', 'water-density', 'temperature=20kg'], 'cannot be converted to degC', '≥ -3 and ≤ 60 degC');
+    refused(['calc', 'water-density', 'temperature=20kg'], '"kg" is not a unit of temperature', '≥ −3 °C and ≤ 60 °C');
     refused(
       ['calc', 'reduced-gravity', 'rho_upper=998', 'rho_lower=1000x'],
       'kg/m3 or a unit',
-      '≥ 500 and ≤ 3000 kg/m3',
+      '≥ 500 kg/m³ and ≤ 3000 kg/m³',
     );
+    // the value as typed carries its unit once (never "30 parsecs" parsecs)
+    refused(['calc', 'water-density', 'temperature=30parsecs'], 'temperature = "30 parsecs" is not allowed');
+    // in US units the range is shown in °F (NIST SP 811, App. B: °F = 1.8 °C + 32)
+    refused(['calc', 'water-density', 'temperature=20kg', '--units', 'us'], '≥ 26.6 °F and ≤ 140 °F');
   });
 });
 

@@ -52,7 +52,7 @@ describe('gprime calc (spine methods, real CLI)', () => {
   it('exit 2 with a message naming parameter, value and range; no NaN ever printed', () => {
     const r = runGprime(['calc', 'water-density', 'temperature=300', '--json']);
     expect(r.code).toBe(2);
-    expect(r.stderr).toMatch(/temperature = 300 degC is not allowed: allowed range is ≥ -3 and ≤ 60 degC/);
+    expect(r.stderr).toMatch(/temperature = 300 °C is not allowed: allowed range is ≥ −3 °C and ≤ 60 °C/);
     expect(runGprime(['calc', 'water-density']).code).toBe(2);
     expect(runGprime(['calc', 'water-density', 'temperature=abc']).stderr).toMatch(/temperature/);
     expect(runGprime(['calc', 'water-density', 'temperature=10', 'colour=red']).stderr).toMatch(

@@ -75,7 +75,7 @@ describe('dense-jet laboratory correlations beside the integral model', () => {
     const far = { measure: 'horizontal', distance: 50 } as const;
     const beyond = dilutionAtBoundary(t, far);
     expect(beyond.dilutionCentreline).toBeCloseTo(dj.returnDilution, 9);
-    expect(beyond.note).toMatch(/dense_jet_dilution = lab/);
+    expect(beyond.note).toMatch(/dense-jet dilution used: lab/);
     expect(dilutionAtBoundary(plain, far).dilutionCentreline).toBe(dj.modelReturnDilution);
     const near = { measure: 'path', distance: dj.returnPathDistance / 2 } as const;
     expect(dilutionAtBoundary(t, near).dilutionCentreline).toBe(dilutionAtBoundary(plain, near).dilutionCentreline);

@@ -41,7 +41,7 @@ describe('typed models on the calc output', () => {
     expect(t.status).toBe('max-steps');
     expect(t.outcome).toBe('failed');
     expect(incompleteOf(t).incomplete).toMatch(
-      /^the path integration stopped at its step limit of 4 steps at s = [\d.]+ m$/,
+      /^the path integration stopped at its step limit of 4 steps at ⟦[\d.e+-]+\|m\|4⟧ along the path$/,
     );
     expect(t.warnings.find((w) => w.code === 'integration-incomplete')?.message).toMatch(/step limit/);
   });

@@ -61,9 +61,11 @@ describe('CSV import', () => {
       expect(msg).not.toMatch(/row 3/); // a blank cell skips its row with a warning instead
     }
     expect(() => parseProfileCsv('depth (m),temperature (degC)\n0,20\n1,99\n')).toThrow(
-      /row 2, column "temperature": 99 degC is physically impossible/,
+      /row 2, column "temperature": ⟦99\|degC\|6⟧ is physically impossible/,
     );
-    expect(() => parseProfileCsv('depth (kg),temperature (degC)\n0,20\n5,19\n')).toThrow(/cannot be converted to m/);
+    expect(() => parseProfileCsv('depth (kg),temperature (degC)\n0,20\n5,19\n')).toThrow(
+      /column "depth": "kg" is not a unit of length; give a length in m/,
+    );
     expect(() => parseProfileCsv('height,colour\n0,1\n1,2\n')).toThrow(/no temperature column/);
   });
 

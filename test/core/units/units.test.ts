@@ -80,7 +80,7 @@ describe('quantities with units (NIST SP 811, Appendix B)', () => {
       expect(() => parseQuantity('discharge', text, 'm3/s')).toThrow(InputError);
     }
     expect(() => parseQuantity('depth', '1,500 m', 'm')).toThrow(
-      /depth = "1,500 m" m is not allowed: "1,500" reads as 1500 \(thousands separator\) or as 1\.5 \(decimal comma\)/,
+      /depth = "1,500 m" is not allowed: "1,500" reads as 1500 \(thousands separator\) or as 1\.5 \(decimal comma\)/,
     );
   });
 
@@ -91,10 +91,16 @@ describe('quantities with units (NIST SP 811, Appendix B)', () => {
 
   it('refuses mismatched or unknown units with the field named', () => {
     expect(() => parseQuantity('depth', '3 kg', 'm')).toThrow(
-      /depth = "3 kg" m is not allowed: "kg" cannot be converted to m/,
+      /depth = "3 kg" is not allowed: "kg" is not a unit of length; give a length in m or a unit convertible to it \(ft, in, km\)/,
     );
-    expect(() => parseQuantity('depth', '3 furlongz', 'm')).toThrow(/unit "furlongz" is not known/);
-    expect(() => parseQuantity('depth', 'deep', 'm')).toThrow(/it is not a number/);
+    // the unit appears once, inside the value as typed, and the expected unit is named in words
+    expect(() => parseQuantity('depth', '30 parsecs', 'm')).toThrow(
+      /^depth = "30 parsecs" is not allowed: the unit "parsecs" is not known; give a length in m or a unit convertible to it/,
+    );
+    expect(() => parseQuantity('depth', 'deep', 'm')).toThrow(/it is not a number; give a length in m/);
+    expect(() => parseQuantity('salinity', '3 m', 'PSU')).toThrow(
+      /^salinity = "3 m" is not allowed: "m" is not a unit of salinity; give a salinity in PSU/,
+    );
   });
 
   it('display conversions round-trip (property)', () => {

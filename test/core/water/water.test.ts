@@ -123,7 +123,7 @@ describe('water properties: bad input', () => {
 
   it('names field, value, unit and range in the message', () => {
     expect(() => densitySeawaterEos80(35, 99)).toThrow(
-      /temperature = 99 degC is not allowed: allowed range is ≥ -3 and ≤ 60 degC/,
+      /temperature = ⟦99\|degC\|6⟧ is not allowed: allowed range is ≥ ⟦-3\|degC\|6⟧ and ≤ ⟦60\|degC\|6⟧/,
     );
     expect(() => waterDensity({ temperature: 10, salinity: 5, eos: 'fresh' })).toThrow(/salinity/);
     expect(() => densimetricFroude(1, 0, 1)).toThrow(/g_prime/);
