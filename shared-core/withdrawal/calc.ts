@@ -1,11 +1,12 @@
 import { num, text } from '../calc/resolve';
 import type { WithdrawalZone } from '../calc/model';
 import { arg, type CalcMethod, type Series } from '../calc/types';
-import { note } from '../core/warning';
+import { caution, note } from '../core/warning';
+import { qty } from '../core/quantity-text';
 import { formatShort, InputError } from '../core/errors';
 import { positive } from '../core/range';
 import { criticalDischargeCraya1949, CRAYA_1949, SINK_POSITIONS, type SinkKind, type SinkPosition } from './two-layer';
-import { withdrawalLayer, WITHDRAWAL_LINE_SINK, WITHDRAWAL_POINT_SINK } from './layer';
+import { halfThicknessSpreadLineSink, withdrawalLayer, WITHDRAWAL_LINE_SINK, WITHDRAWAL_POINT_SINK } from './layer';
 import { WITHDRAWAL_MEASURED_PROFILE } from './measured';
 import { WITHDRAWAL_VELOCITY, withdrawalVelocityProfile } from './outflow';
 import type { Profile } from '../profile/profile';
@@ -96,9 +97,22 @@ export const withdrawalCalcMethods: CalcMethod[] = [
         choices: SINK_POSITIONS,
         default: 'wall',
       },
+      {
+        kind: 'number',
+        name: 'planned_discharge',
+        unit: 'm3/s',
+        description: 'planned release through the intake, to compare with the critical discharge (optional)',
+        optional: true,
+        range: { ...positive, max: 1e5 },
+      },
     ],
     results: [
       { name: 'critical_discharge', unit: 'm3/s', description: 'discharge at which the far layer starts to be drawn' },
+      {
+        name: 'discharge_ratio',
+        unit: '1',
+        description: 'planned discharge over the critical discharge (present when a planned discharge is given)',
+      },
     ],
     run(a) {
       const r = criticalDischargeCraya1949(
@@ -108,9 +122,22 @@ export const withdrawalCalcMethods: CalcMethod[] = [
         arg.text<SinkPosition>(a, 'position'),
         arg.optNum(a, 'width'),
       );
+      const planned = arg.optNum(a, 'planned_discharge');
+      const warnings = [...r.warnings];
+      if (planned !== undefined && planned > r.value)
+        warnings.push(
+          caution(
+            'planned-above-critical',
+            `The planned release ${qty(planned, 'm3/s')} exceeds the critical discharge ${qty(r.value, 'm3/s')} (${(planned / r.value).toPrecision(3)} times): water of the far layer is drawn into the intake.`,
+            'planned_discharge',
+          ),
+        );
       return {
-        results: { critical_discharge: num(r.value, 'm3/s') },
-        warnings: r.warnings,
+        results: {
+          critical_discharge: num(r.value, 'm3/s'),
+          ...(planned === undefined ? {} : { discharge_ratio: num(planned / r.value, '1') }),
+        },
+        warnings,
         sources: [CRAYA_1949.source],
       };
     },
@@ -158,7 +185,23 @@ export const withdrawalCalcMethods: CalcMethod[] = [
         name: 'thickness',
         unit: 'm',
         description:
-          'total thickness of the withdrawal layer (twice the half-thickness; before any cut by surface or bed)',
+          'TOTAL thickness of the withdrawal layer, 2δ: from its upper to its lower limit (before any cut by surface or bed)',
+      },
+      {
+        name: 'half_thickness',
+        unit: 'm',
+        description: 'HALF-thickness δ: from the port to one limit of the layer',
+      },
+      {
+        name: 'thickness_low',
+        unit: 'm',
+        description:
+          'lowest total thickness of the published coefficients (inertial line sink: Yih 1958 / Kao 1970, Debler 1959, Imberger et al. 1976)',
+      },
+      {
+        name: 'thickness_high',
+        unit: 'm',
+        description: 'highest total thickness of the published coefficients',
       },
       { name: 'regime', unit: '', description: 'inertial or viscous' },
     ],
@@ -173,8 +216,37 @@ export const withdrawalCalcMethods: CalcMethod[] = [
       });
       const regime = r.regimeAssumed ? 'inertial (assumed: no reservoir length)' : r.regime;
       const portDepth = arg.optNum(a, 'port_depth');
+      const warnings = [...r.warnings];
+      let spread = { low: r.totalThickness, high: r.totalThickness };
+      if (sink === 'line' && r.regime === 'inertial') {
+        const half = halfThicknessSpreadLineSink(
+          arg.num(a, 'discharge') / arg.num(a, 'width'),
+          arg.num(a, 'buoyancy_frequency'),
+        );
+        spread = { low: 2 * half.low, high: 2 * half.high };
+        warnings.push(
+          note(
+            'published-coefficient-spread',
+            `The published inertial line-sink coefficients give a total thickness from ${qty(spread.low, 'm', 3)} (Yih 1958 / Kao 1970, q/(Nδ²) = 1/π) to ${qty(spread.high, 'm', 3)} (Imberger et al. 1976, reported); Debler's (1959) measurements lie between.`,
+          ),
+        );
+      } else
+        warnings.push(
+          note(
+            'single-published-coefficient',
+            sink === 'point'
+              ? 'One published point-sink coefficient is coded (Imberger & Patterson 1990): the low and high thickness equal the reported one; no spread is stated.'
+              : 'One published viscous line-sink coefficient is coded (Imberger et al. 1976): the low and high thickness equal the reported one; Koh (1966) measured layers about 30 % thicker to the first zero of the velocity.',
+          ),
+        );
       return {
-        results: { thickness: num(r.totalThickness, 'm'), regime: text(regime) },
+        results: {
+          thickness: num(r.totalThickness, 'm'),
+          half_thickness: num(r.halfThickness, 'm'),
+          thickness_low: num(spread.low, 'm'),
+          thickness_high: num(spread.high, 'm'),
+          regime: text(regime),
+        },
         // the layer drawn around the port; it cannot rise above the surface (the bed is not known here)
         ...(portDepth === undefined
           ? {}
@@ -186,7 +258,7 @@ export const withdrawalCalcMethods: CalcMethod[] = [
                 bottom: portDepth + r.halfThickness,
               },
             }),
-        warnings: r.warnings,
+        warnings,
         sources: [(sink === 'line' ? WITHDRAWAL_LINE_SINK : WITHDRAWAL_POINT_SINK).source],
       };
     },

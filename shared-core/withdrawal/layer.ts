@@ -139,6 +139,32 @@ export function reachesHalfThickness(
     n2 > 0 && (n2 < nSwitch * nSwitch ? a * a * a * a * n2 >= inertial2 : a * a * a * a * a * a * n2 >= viscous2);
 }
 
+/**
+ * Published coefficients C of the inertial line-sink half-thickness δ = C (q/N)^½, from the critical Froude number
+ * q/(N δ²) = 1/C² of each: inviscid theory 1/π (Yih 1958; Kao 1970 free-streamline theory), Debler's (1959)
+ * measured 0.28 and Imberger, Thompson & Fandry's (1976) steady layer, C = 2 (the one coded above). Values from memory.
+ */
+export const LINE_SINK_INERTIAL_COEFFICIENTS = [
+  {
+    source:
+      'Yih (1958); Kao, T.W. (1970). Free-streamline theory for inviscid stratified flow into a line sink. Phys. Fluids 13, 558–564: q/(Nδ²) = 1/π',
+    c: Math.sqrt(Math.PI),
+  },
+  {
+    source:
+      'Debler, W.R. (1959). Stratified flow into a line sink. J. Eng. Mech. Div. ASCE 85, 51–65: measured q/(Nδ²) ≈ 0.28',
+    c: 1 / Math.sqrt(0.28),
+  },
+  { source: 'Imberger, Thompson & Fandry (1976): δ = 2 (q/N)^½', c: 2 },
+] as const;
+
+/** The lowest and highest published inertial line-sink half-thickness [m] for q [m2/s] and N [1/s]. */
+export function halfThicknessSpreadLineSink(q: number, n: number): { low: number; high: number } {
+  const cs = LINE_SINK_INERTIAL_COEFFICIENTS.map((k) => k.c);
+  const scale = Math.sqrt(q / n);
+  return { low: Math.min(...cs) * scale, high: Math.max(...cs) * scale };
+}
+
 /** Validated withdrawal layer in linear stratification for either sink, with warnings. */
 export function withdrawalLayer(input: LayerInput): LayerResult {
   const n = requireInRange('buoyancy_frequency', input.n, '1/s', { ...positive, max: 1 });
