@@ -8,6 +8,12 @@ import { z } from 'zod';
 const empty = z.object({}).strict();
 const siteText = z.string().min(2).max(50_000_000);
 const filePath = z.string().min(1).max(4096);
+/** a document's recovery key: letters, digits, "-" and "_" (the renderer makes one per opened document) */
+const documentKey = z
+  .string()
+  .min(1)
+  .max(64)
+  .regex(/^[A-Za-z0-9_-]+$/, 'letters, digits, "-" or "_"');
 const exportFormat = z.enum(['pdf', 'png', 'svg', 'csv', 'xlsx']);
 
 export const CHANNELS = {
@@ -29,20 +35,35 @@ export const CHANNELS = {
     request: z.object({ path: filePath, text: siteText }).strict(),
     response: z.object({ path: filePath }),
   },
-  /** native save dialog then atomic save; null when cancelled */
+  /**
+   * native save dialog then atomic save; null when cancelled. An existing file is replaced only when the
+   * user agreed: in the native dialog's own confirmation (Electron), or by resending with `overwrite: true`
+   * after the refusal coded 'exists' (the browser shell, whose dialog is ours).
+   */
   'site.saveAs': {
-    request: z.object({ text: siteText, suggestedName: z.string().max(255) }).strict(),
+    request: z
+      .object({ text: siteText, suggestedName: z.string().max(255), overwrite: z.boolean().optional() })
+      .strict(),
     response: z.object({ path: filePath }).nullable(),
   },
   'site.recent': { request: empty, response: z.object({ paths: z.array(filePath) }) },
-  /** autosave of the unsaved document to the recovery file */
-  'recovery.write': { request: z.object({ text: siteText, path: filePath.nullable() }).strict(), response: empty },
-  /** the recovery file left by a session that did not end cleanly, or null */
+  /**
+   * autosave of an unsaved document to its own recovery file: `document` tells documents (and windows)
+   * apart, so two never overwrite each other's autosave; without it, one shared file
+   */
+  'recovery.write': {
+    request: z.object({ text: siteText, path: filePath.nullable(), document: documentKey.optional() }).strict(),
+    response: empty,
+  },
+  /** the recovery files left by sessions that did not end cleanly, newest first (empty when none) */
   'recovery.check': {
     request: empty,
-    response: z.object({ text: siteText, path: filePath.nullable(), savedAt: z.string() }).nullable(),
+    response: z.array(
+      z.object({ document: documentKey, text: siteText, path: filePath.nullable(), savedAt: z.string() }),
+    ),
   },
-  'recovery.clear': { request: empty, response: empty },
+  /** removes one document's recovery file (after a save, or when the user declined the offer) */
+  'recovery.clear': { request: z.object({ document: documentKey.optional() }).strict(), response: empty },
   /** writes the report of a site (text of the site document) into a folder; returns the files written */
   'report.export': {
     request: z
@@ -70,7 +91,10 @@ export type RequestOf<C extends Channel> = z.infer<(typeof CHANNELS)[C]['request
 export type ResponseOf<C extends Channel> = z.infer<(typeof CHANNELS)[C]['response']>;
 
 export interface ContractError {
-  /** 'invalid-request' | 'forbidden' | 'not-found' | 'io' | 'site-file' | 'internal' */
+  /**
+   * 'invalid-request' | 'forbidden' | 'not-found' | 'exists' (save as onto an existing file without
+   * `overwrite`) | 'io' | 'site-file' | 'internal' | 'unreachable' (the renderer found no shell to ask)
+   */
   code: string;
   message: string;
 }

@@ -18,6 +18,8 @@ export function electronHost(
   recent: () => string[],
 ): ShellHost & { grant(path: string): string } {
   const granted = new Set<string>();
+  /** paths the native save dialog returned as chosen: the dialog itself asked before replacing them */
+  const confirmed = new Set<string>();
   let openDocument: string | null = null;
   const grant = (path: string) => {
     const abs = resolve(path);
@@ -42,6 +44,7 @@ export function electronHost(
     allowFile,
     allowDir: (path) =>
       granted.has(resolve(path)) ? resolve(path) : refuse(path, 'write reports into folders chosen in a dialog'),
+    overwriteConfirmed: (path) => confirmed.has(resolve(path)),
     noteOpenDocument: (path) => {
       openDocument = resolve(path);
     },
@@ -56,14 +59,19 @@ export function electronHost(
         title: 'Save the site as',
         defaultPath: safeSiteFileName(suggestedName),
         filters: SITE_FILTERS,
+        // the native dialog asks before replacing an existing file (Linux needs it asked for; macOS and
+        // Windows always ask)
+        properties: ['showOverwriteConfirmation' as const, 'createDirectory' as const],
       };
       const win = parent();
       const r = win ? await dialog.showSaveDialog(win, options) : await dialog.showSaveDialog(options);
       if (r.canceled || !r.filePath) return null;
-      const path = r.filePath.toLowerCase().endsWith(`.${SITE_FILE_EXTENSION}`)
-        ? r.filePath
-        : `${r.filePath}.${SITE_FILE_EXTENSION}`;
-      return grant(path);
+      const named = r.filePath.toLowerCase().endsWith(`.${SITE_FILE_EXTENSION}`);
+      const path = grant(named ? r.filePath : `${r.filePath}.${SITE_FILE_EXTENSION}`);
+      // an extension added here names a file the dialog never asked about: that one is asked in the workspace
+      if (named) confirmed.add(path);
+      else confirmed.delete(path);
+      return path;
     },
     pickExportDir: async () => {
       const options = {

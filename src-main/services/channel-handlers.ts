@@ -35,6 +35,12 @@ export interface ShellHost {
   writeClipboardImage(png: Buffer): Promise<void>;
   /** files the user may reopen beyond the recent list (the browser shell's workspace folder) */
   listFiles?(): string[];
+  /**
+   * true when the user already agreed to replace this existing file in the host's own dialog (the native
+   * save dialog's confirmation); otherwise Save as refuses an existing file until asked again with
+   * `overwrite`
+   */
+  overwriteConfirmed?(path: string): boolean;
   /** told of the document the renderer opened or saved (the Electron shell lets it be saved again) */
   noteOpenDocument?(path: string): void;
 }
@@ -54,7 +60,8 @@ export function createChannelHandlers({ host, dataDir, version }: HandlerOptions
   const recent = new RecentFiles(dataDir);
   const recovery = new RecoveryStore(dataDir);
   // saves killed part-way leave temporary files beside their targets: remove them at the start
-  for (const dir of new Set([dataDir, ...recent.list().map((p) => dirname(p))])) removeStaleTemporaryFiles(dir);
+  for (const dir of new Set([dataDir, recovery.dir, ...recent.list().map((p) => dirname(p))]))
+    removeStaleTemporaryFiles(dir);
   const opened = (path: string) => {
     const r = readSiteText(path);
     recent.add(path);
@@ -85,19 +92,25 @@ export function createChannelHandlers({ host, dataDir, version }: HandlerOptions
     'site.save': async (req) => saved(host.allowFile(req.path, 'write'), req.text),
     'site.saveAs': async (req) => {
       const path = await host.pickSavePath(req.suggestedName);
-      return path === null ? null : saved(path, req.text);
+      if (path === null) return null;
+      if (existsSync(path) && req.overwrite !== true && host.overwriteConfirmed?.(path) !== true)
+        throw new ServiceError(
+          'exists',
+          `${path}: a site file of this name already exists; it was left unchanged (replace it only when the user agrees)`,
+        );
+      return saved(path, req.text);
     },
     'site.recent': async () => {
       const paths = [...recent.list().filter(mayUse), ...(host.listFiles?.() ?? [])];
       return { paths: [...new Set(paths)] };
     },
     'recovery.write': async (req) => {
-      recovery.write(req.text, req.path);
+      recovery.write(req.text, req.path, req.document);
       return {};
     },
     'recovery.check': async () => recovery.check(),
-    'recovery.clear': async () => {
-      recovery.clear();
+    'recovery.clear': async (req) => {
+      recovery.clear(req.document);
       return {};
     },
     'report.export': async (req) => {

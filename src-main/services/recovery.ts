@@ -1,7 +1,8 @@
-import { mkdirSync, readFileSync, rmSync } from 'node:fs';
+import { mkdirSync, readdirSync, readFileSync, rmSync } from 'node:fs';
 import { join } from 'node:path';
 import { z } from 'zod';
 import { atomicWriteFile } from './atomic-write';
+import { ServiceError } from './service-error';
 
 const recoverySchema = z.object({
   format: z.literal('gprime-recovery'),
@@ -11,6 +12,8 @@ const recoverySchema = z.object({
 });
 
 export interface RecoveryEntry {
+  /** the document's key: each open document (each window) autosaves to its own file */
+  document: string;
   text: string;
   /** the file the unsaved document belongs to, or null for a new document */
   path: string | null;
@@ -18,42 +21,77 @@ export interface RecoveryEntry {
   savedAt: string;
 }
 
+/** The key of a request without one (and of the single recovery file older versions wrote). */
+export const SHARED_DOCUMENT = 'default';
+const DOCUMENT_KEY = /^[A-Za-z0-9_-]{1,64}$/;
+
 /**
- * The autosave of the unsaved document, one file in the per-user data folder. It survives a crash; the
- * workspace offers it back on the next start and clears it after a save or when the user declines.
+ * Autosaves of unsaved documents, one file per document in <data folder>/recovery/, so two windows never
+ * overwrite each other's. They survive a crash; the workspace offers them back on the next start and a
+ * document's file is removed after it is saved or when the user declines its offer.
  */
 export class RecoveryStore {
-  readonly file: string;
+  readonly dir: string;
+  /** the single recovery file of earlier versions, still offered (as document "default") */
+  private readonly legacy: string;
   constructor(
-    private readonly dataDir: string,
+    dataDir: string,
     private readonly now: () => Date = () => new Date(),
   ) {
-    this.file = join(dataDir, 'recovery.json');
+    this.dir = join(dataDir, 'recovery');
+    this.legacy = join(dataDir, 'recovery.json');
   }
 
-  write(text: string, path: string | null): void {
-    mkdirSync(this.dataDir, { recursive: true });
+  /** the file of one document; the key is checked again here, so no request can name another path */
+  fileOf(document: string): string {
+    if (!DOCUMENT_KEY.test(document))
+      throw new ServiceError('invalid-request', `recovery: document key "${document}" is not letters, digits, - or _`);
+    return join(this.dir, `${document}.json`);
+  }
+
+  write(text: string, path: string | null, document = SHARED_DOCUMENT): void {
+    const file = this.fileOf(document);
+    mkdirSync(this.dir, { recursive: true });
     const entry = { format: 'gprime-recovery', text, path, savedAt: this.now().toISOString() };
-    atomicWriteFile(this.file, JSON.stringify(entry));
+    atomicWriteFile(file, JSON.stringify(entry));
   }
 
-  /** The recovery left behind, or null when there is none (an unreadable one counts as none). */
-  check(): RecoveryEntry | null {
-    let raw: string;
+  /** Every recovery left behind, newest first (an unreadable file counts as none and is left as it is). */
+  check(): RecoveryEntry[] {
+    const found: RecoveryEntry[] = [];
+    const legacy = readEntry(this.legacy, SHARED_DOCUMENT);
+    let names: string[] = [];
     try {
-      raw = readFileSync(this.file, 'utf8');
+      names = readdirSync(this.dir).filter((n) => n.endsWith('.json') && DOCUMENT_KEY.test(n.slice(0, -5)));
     } catch {
-      return null;
+      // no recovery folder yet
     }
-    try {
-      const r = recoverySchema.safeParse(JSON.parse(raw));
-      return r.success ? { text: r.data.text, path: r.data.path, savedAt: r.data.savedAt } : null;
-    } catch {
-      return null;
+    for (const n of names) {
+      const e = readEntry(join(this.dir, n), n.slice(0, -5));
+      if (e) found.push(e);
     }
+    if (legacy && !found.some((e) => e.document === SHARED_DOCUMENT)) found.push(legacy);
+    return found.sort((a, b) => (a.savedAt < b.savedAt ? 1 : a.savedAt > b.savedAt ? -1 : 0));
   }
 
-  clear(): void {
-    rmSync(this.file, { force: true });
+  /** Removes one document's recovery (the shared one also removes the file of earlier versions). */
+  clear(document = SHARED_DOCUMENT): void {
+    rmSync(this.fileOf(document), { force: true });
+    if (document === SHARED_DOCUMENT) rmSync(this.legacy, { force: true });
+  }
+}
+
+function readEntry(file: string, document: string): RecoveryEntry | null {
+  let raw: string;
+  try {
+    raw = readFileSync(file, 'utf8');
+  } catch {
+    return null;
+  }
+  try {
+    const r = recoverySchema.safeParse(JSON.parse(raw));
+    return r.success ? { document, text: r.data.text, path: r.data.path, savedAt: r.data.savedAt } : null;
+  } catch {
+    return null;
   }
 }

@@ -6,11 +6,14 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { beforeEach, describe, expect, it, vi } from 'vitest';
 
-const h = vi.hoisted(() => ({ picked: '' }));
+const h = vi.hoisted(() => ({ picked: '', saveOptions: undefined as unknown }));
 vi.mock('electron', () => ({
   dialog: {
     showOpenDialog: async () => ({ canceled: false, filePaths: [h.picked] }),
-    showSaveDialog: async () => ({ canceled: false, filePath: h.picked }),
+    showSaveDialog: async (options: unknown) => {
+      h.saveOptions = options;
+      return { canceled: false, filePath: h.picked };
+    },
   },
   clipboard: {},
   ClipboardItem: class {},
@@ -77,5 +80,19 @@ describe('the Electron renderer’s file access', () => {
     h.picked = dir;
     expect(await host.pickExportDir('x')).toBe(dir);
     expect(host.allowDir(dir)).toBe(dir);
+  });
+
+  it('replaces an existing file through Save as only when the native dialog asked (its own confirmation)', async () => {
+    h.picked = file('c.gpsite');
+    expect((await call('site.saveAs', { text: edited, suggestedName: 'c' })).ok).toBe(true);
+    expect((h.saveOptions as { properties: string[] }).properties).toContain('showOverwriteConfirmation');
+    expect(readFileSync(file('c.gpsite'), 'utf8')).toBe(edited);
+    // a name typed without the extension: the dialog asked about "c", not "c.gpsite"; refused unless agreed
+    h.picked = file('c');
+    const r = await call('site.saveAs', { text: DEMO, suggestedName: 'c' });
+    expect(r.error?.code).toBe('exists');
+    expect(readFileSync(file('c.gpsite'), 'utf8')).toBe(edited);
+    expect((await call('site.saveAs', { text: DEMO, suggestedName: 'c', overwrite: true })).ok).toBe(true);
+    expect(readFileSync(file('c.gpsite'), 'utf8')).toBe(DEMO);
   });
 });

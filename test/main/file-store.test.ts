@@ -141,23 +141,52 @@ describe('recent files', () => {
   });
 });
 
-describe('recovery file', () => {
-  it('writes, checks and clears the autosave', () => {
+describe('recovery files', () => {
+  it('writes, checks and clears the autosave of the shared document', () => {
     const dir = join(tmp(), 'nested', 'data');
     const store = new RecoveryStore(dir, () => new Date('2030-01-02T03:04:05Z'));
-    expect(store.check()).toBeNull();
+    expect(store.check()).toEqual([]);
     store.write(DEMO, '/s/a.gpsite');
-    expect(store.check()).toEqual({ text: DEMO, path: '/s/a.gpsite', savedAt: '2030-01-02T03:04:05.000Z' });
+    expect(store.check()).toEqual([
+      { document: 'default', text: DEMO, path: '/s/a.gpsite', savedAt: '2030-01-02T03:04:05.000Z' },
+    ]);
     store.write('{"draft": true}', null);
-    expect(store.check()?.path).toBeNull();
+    expect(store.check()[0].path).toBeNull();
     store.clear();
-    expect(store.check()).toBeNull();
+    expect(store.check()).toEqual([]);
     store.clear();
   });
 
-  it('treats a damaged recovery file as none', () => {
+  it('keeps one file per document, so two windows never overwrite each other', () => {
     const dir = tmp();
+    let t = Date.parse('2030-01-02T03:04:05Z');
+    const store = new RecoveryStore(dir, () => new Date((t += 1000)));
+    store.write('{"window": 1}', '/s/a.gpsite', 'win-1');
+    store.write('{"window": 2}', null, 'win-2');
+    store.write('{"window": 1, "later": true}', '/s/a.gpsite', 'win-1');
+    const all = store.check();
+    expect(all.map((e) => e.document)).toEqual(['win-1', 'win-2']); // newest first
+    expect(all[0].text).toBe('{"window": 1, "later": true}');
+    expect(all[1].text).toBe('{"window": 2}');
+    store.clear('win-1');
+    expect(store.check().map((e) => e.document)).toEqual(['win-2']);
+  });
+
+  it('refuses a document key that could name another path', () => {
+    const store = new RecoveryStore(tmp());
+    for (const bad of ['../x', 'a/b', '', 'a.b', 'x'.repeat(65)])
+      expect(() => store.write(DEMO, null, bad)).toThrow(/document key/);
+  });
+
+  it('still offers the single recovery file of earlier versions, and a damaged one counts as none', () => {
+    const dir = tmp();
+    const entry = { format: 'gprime-recovery', text: DEMO, path: null, savedAt: '2029-05-01T00:00:00.000Z' };
+    writeFileSync(join(dir, 'recovery.json'), JSON.stringify(entry));
+    expect(new RecoveryStore(dir).check()).toEqual(
+      [{ document: 'default', ...entry, format: undefined }].map(({ format: _f, ...e }) => e),
+    );
+    new RecoveryStore(dir).clear();
     writeFileSync(join(dir, 'recovery.json'), '{"format":"gprime-recovery","text":');
-    expect(new RecoveryStore(dir).check()).toBeNull();
+    expect(new RecoveryStore(dir).check()).toEqual([]);
   });
 });

@@ -119,6 +119,20 @@ describe('browser shell', () => {
     expect((await api('site.read', { path: saved.value.path })).json.value.text).toBe(edited);
   });
 
+  it('refuses Save as onto an existing file until the request says overwrite (the user agreed)', async () => {
+    const first = (await api('site.saveAs', { text: DEMO, suggestedName: 'kept twice' })).json;
+    expect(first.ok).toBe(true);
+    const edited = DEMO.replace('"revision": "', '"revision": "C');
+    const refused = (await api('site.saveAs', { text: edited, suggestedName: 'kept twice' })).json;
+    expect(refused.ok).toBe(false);
+    expect(refused.error.code).toBe('exists');
+    expect(refused.error.message).toMatch(/already exists; it was left unchanged/);
+    expect(readFileSync(first.value.path, 'utf8')).toBe(DEMO);
+    const agreed = (await api('site.saveAs', { text: edited, suggestedName: 'kept twice', overwrite: true })).json;
+    expect(agreed).toEqual({ ok: true, value: { path: first.value.path } });
+    expect(readFileSync(first.value.path, 'utf8')).toBe(edited);
+  });
+
   it('keeps the renderer inside the workspace folder, symbolic links included', async () => {
     const outside = join(workspace, '..', 'secret.gpsite');
     symlinkSync(join(workspace, '..'), join(workspace, 'link'));
@@ -166,10 +180,25 @@ describe('browser shell', () => {
   it('keeps the recovery file across shells sharing a data folder', async () => {
     expect((await api('recovery.write', { text: DEMO, path: null })).json).toEqual({ ok: true, value: {} });
     const check = (await api('recovery.check', {})).json;
-    expect(check.value.text).toBe(DEMO);
-    expect(Number.isNaN(Date.parse(check.value.savedAt))).toBe(false);
+    expect(check.value[0].text).toBe(DEMO);
+    expect(Number.isNaN(Date.parse(check.value[0].savedAt))).toBe(false);
     expect((await api('recovery.clear', {})).json.ok).toBe(true);
-    expect((await api('recovery.check', {})).json.value).toBeNull();
+    expect((await api('recovery.check', {})).json.value).toEqual([]);
+  });
+
+  it('keeps the autosave of each document apart and clears only the one named', async () => {
+    await api('recovery.write', { text: DEMO, path: null, document: 'tab-a' });
+    await api('recovery.write', { text: '{"b": 1}', path: null, document: 'tab-b' });
+    const docs = (await api('recovery.check', {})).json.value.map((e: { document: string }) => e.document);
+    expect(docs.sort()).toEqual(['tab-a', 'tab-b']);
+    await api('recovery.clear', { document: 'tab-a' });
+    expect((await api('recovery.check', {})).json.value.map((e: { document: string }) => e.document)).toEqual([
+      'tab-b',
+    ]);
+    await api('recovery.clear', { document: 'tab-b' });
+    const bad = (await api('recovery.write', { text: DEMO, path: null, document: '../escape' })).json;
+    expect(bad.ok).toBe(false);
+    expect(bad.error.code).toBe('invalid-request');
   });
 });
 

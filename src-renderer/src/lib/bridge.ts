@@ -18,19 +18,41 @@ declare global {
   }
 }
 
+/** The code of a Reply that no shell gave: the request never reached one (stopped, crashed, network gone). */
+export const UNREACHABLE = 'unreachable';
+
+/** True when a failed reply means the shell did not answer at all, not that it refused. */
+export const isUnreachable = (r: Reply<unknown>): boolean => !r.ok && r.error.code === UNREACHABLE;
+
+const listeners = new Set<(reachable: boolean) => void>();
+/** Tells `fn` after every request whether the shell answered (any reply, a refusal included) or not. */
+export function onReachability(fn: (reachable: boolean) => void): () => void {
+  listeners.add(fn);
+  return () => listeners.delete(fn);
+}
+const tell = (reachable: boolean) => listeners.forEach((fn) => fn(reachable));
+
 function httpApi(): GprimeApi {
   const token = new URLSearchParams(location.search).get('token') ?? sessionStorage.getItem('gprime-token') ?? '';
   if (token) sessionStorage.setItem('gprime-token', token);
   const call = async <C extends Channel>(channel: C, request: RequestOf<C>): Promise<Reply<ResponseOf<C>>> => {
+    let res: Response;
     try {
-      const res = await fetch(`api/${channel}`, {
+      res = await fetch(`api/${channel}`, {
         method: 'POST',
         headers: { 'content-type': 'application/json', 'x-gprime-token': token },
         body: JSON.stringify(request),
       });
-      return (await res.json()) as Reply<ResponseOf<C>>;
     } catch (e) {
-      return { ok: false, error: { code: 'io', message: `the gprime shell did not answer (${String(e)})` } };
+      tell(false);
+      const why = e instanceof Error ? e.message : String(e);
+      return { ok: false, error: { code: UNREACHABLE, message: `the gprime shell did not answer (${why})` } };
+    }
+    tell(true);
+    try {
+      return (await res.json()) as Reply<ResponseOf<C>>;
+    } catch {
+      return { ok: false, error: { code: 'io', message: `the gprime shell answered ${res.status} without a reply` } };
     }
   };
   return Object.fromEntries(CHANNEL_NAMES.map((c) => [c, (req: never) => call(c, req)])) as unknown as GprimeApi;

@@ -5,6 +5,9 @@ import {
   type ProfileIssue,
   type ProfileTable,
 } from '../../../shared-core/site';
+import { InputError } from '../../../shared-core/core/errors';
+import { decimalMarkOf, readNumberCell, type DecimalMark } from '../../../shared-core/units/number';
+import type { UnitSystem } from '../../../shared-core/units/units';
 
 export type Cell = string | number | null;
 
@@ -51,49 +54,91 @@ export function checkTable(table: ProfileTable, reading: ConditionOutcome | unde
   return out;
 }
 
-/** A typed cell: a number when it reads as one, otherwise the text as typed (kept, and marked). */
-export function cellValue(text: string): Cell {
-  const t = text.trim();
-  if (t === '') return null;
-  const n = Number(t.replace(/^([-+]?\d+),(\d+)$/, '$1.$2'));
-  return /^[-+]?(\d+([.,]\d*)?|[.,]\d+)([eE][-+]?\d+)?$/.test(t) && Number.isFinite(n) ? n : t;
+/**
+ * The decimal mark of a table's typed cells: US customary display means a decimal point ("1,500" is
+ * fifteen hundred); otherwise the mark the text cells show, or `either` when they do not tell.
+ */
+export function tableMark(table: ProfileTable, system: UnitSystem): DecimalMark {
+  if (system === 'us') return 'point';
+  function* texts(): Generator<string> {
+    for (const r of table.rows) for (const c of r) if (typeof c === 'string') yield c;
+  }
+  return decimalMarkOf(texts(), 'either');
 }
 
-const isNumeric = (s: string) => typeof cellValue(s) === 'number';
+/**
+ * A typed cell: a number when it reads as one with the table's decimal mark (grouped thousands "1,500",
+ * a decimal comma "3,5"), otherwise the text as typed. An ambiguous "1,500" under `either` is kept as text:
+ * the profile's reading then names both readings at that cell.
+ */
+export function cellValue(text: string, mark: DecimalMark = 'either'): Cell {
+  const t = text.trim();
+  if (t === '') return null;
+  try {
+    return readNumberCell('profile cell', t, mark) ?? t;
+  } catch (e) {
+    if (e instanceof InputError) return t;
+    throw e;
+  }
+}
+
+const isNumeric = (s: string, mark: DecimalMark) => typeof cellValue(s, mark) === 'number';
 
 /**
  * Pastes spreadsheet text (tab-separated rows) into the table at a cell. A block whose first line is all
  * text is taken as a new table with its own header; otherwise the cells are written from the cell on,
  * adding rows (and columns) as needed.
  */
-export function pasteBlock(table: ProfileTable, text: string, row: number, col: number): ProfileTable {
+export function pasteBlock(
+  table: ProfileTable,
+  text: string,
+  row: number,
+  col: number,
+  system: UnitSystem,
+): ProfileTable {
   const lines = text
     .replace(/\r/g, '')
     .split('\n')
     .filter((l) => l.trim() !== '');
   const grid = lines.map((l) => l.split('\t'));
   if (grid.length === 0) return table;
-  if (grid[0].every((c) => !isNumeric(c)) && grid.length > 1) {
+  const mark = system === 'us' ? 'point' : decimalMarkOf(grid.flat(), tableMark(table, system));
+  if (grid[0].every((c) => !isNumeric(c, mark)) && grid.length > 1) {
     const columns = grid[0].map((c) => c.trim());
-    return { columns, rows: grid.slice(1).map((r) => columns.map((_, i) => cellValue(r[i] ?? ''))) };
+    return { columns, rows: grid.slice(1).map((r) => columns.map((_, i) => cellValue(r[i] ?? '', mark))) };
   }
-  const width = Math.max(table.columns.length, col + Math.max(...grid.map((r) => r.length)));
+  // a loop, not Math.max(...): a pasted logger block can hold more rows than the call stack has room for
+  let widest = 0;
+  for (const r of grid) widest = Math.max(widest, r.length);
+  const width = Math.max(table.columns.length, col + widest);
   const columns = [...table.columns];
   while (columns.length < width) columns.push(`column ${columns.length + 1}`);
   const rows = table.rows.map((r) => [...r, ...new Array<Cell>(width - r.length).fill(null)]);
   grid.forEach((cells, i) => {
     while (rows.length <= row + i) rows.push(new Array<Cell>(width).fill(null));
     cells.forEach((c, j) => {
-      rows[row + i][col + j] = cellValue(c);
+      rows[row + i][col + j] = cellValue(c, mark);
     });
   });
   return { columns, rows };
 }
 
-/** A CSV (or semicolon/tab separated) file as a table, cells typed as in the editor. */
-export function importCsv(text: string): ProfileTable {
+/** A profile file read into a table, with what the reading skipped or assumed (in words). */
+export interface ImportedTable {
+  table: ProfileTable;
+  /** shared-core sentences (pass them through shownText) */
+  notes: string[];
+}
+
+/**
+ * A CSV (or semicolon, tab or bar separated) file as a table: instrument preamble and comment lines are
+ * skipped and said so, cells are read with the decimal mark the file shows (shared-core's reader), blanks
+ * become empty cells.
+ */
+export function importCsv(text: string): ImportedTable {
   const t = readCsvTable(text);
-  return { columns: t.columns, rows: t.rows.map((r) => t.columns.map((_, i) => cellValue(String(r[i] ?? '')))) };
+  const rows = t.rows.map((r) => t.columns.map((_, i) => (r[i] === undefined || r[i] === '' ? null : r[i])));
+  return { table: { columns: t.columns, rows }, notes: t.warnings.map((w) => w.message) };
 }
 
 /** True when the pasted text is a block (several cells), not a single value. */
