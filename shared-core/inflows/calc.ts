@@ -3,9 +3,18 @@ import { uniqueWarnings } from '../core/warning';
 import { arg, type CalcMethod, type CalcOutput, type ResultValue, type Series } from '../calc/types';
 import { InputError } from '../core/errors';
 import { positive, nonNegative } from '../core/range';
-import { DEFAULT_PLUNGE_FROUDE, plungeDepthAkiyamaStefan1984, PLUNGE_AKIYAMA_STEFAN_1984 } from './plunge';
-import { UNDERFLOW_NORMAL_STATE, type UnderflowPath } from './underflow';
-import { riverInflowPath } from './river';
+import {
+  DEFAULT_PLUNGE_FROUDE,
+  plungeDepthAkiyamaStefan1984,
+  PLUNGE_AKIYAMA_STEFAN_1984,
+  PLUNGE_INITIAL_MIXING,
+} from './plunge';
+import { DEFAULT_DRAG, UNDERFLOW_NORMAL_STATE, type UnderflowPath } from './underflow';
+import { riverInflowPath, type RiverInflow } from './river';
+import { insertionDepthSpread } from './sensitivity';
+import { ENTRAINMENT_ELLISON_TURNER_1959, ENTRAINMENT_PARKER_1987, type EntrainmentLaw } from './entrainment';
+import { note } from '../core/warning';
+import { qty } from '../core/quantity-text';
 import type { CalcArgs } from '../calc/types';
 
 /** Chart curves of an underflow: the bed path in the vertical section, and discharge and temperature along it. */
@@ -40,7 +49,7 @@ export function underflowSeries(path: UnderflowPath): Series[] {
 function runUnderflow(a: CalcArgs): CalcOutput {
   const p = arg.profile(a);
   if (!p) throw new InputError('file', '(missing)', '', 'a CSV profile', 'a profile file is required');
-  const r = riverInflowPath(p, {
+  const inflow: RiverInflow = {
     discharge: arg.num(a, 'discharge'),
     width: arg.num(a, 'width'),
     temperature: arg.num(a, 'temperature'),
@@ -48,26 +57,49 @@ function runUnderflow(a: CalcArgs): CalcOutput {
     sediment: arg.num(a, 'sediment'),
     bedSlope: arg.num(a, 'bed_slope'),
     distanceToPoint: arg.optNum(a, 'distance'),
+  };
+  const law = arg.text<EntrainmentLaw>(a, 'entrainment_law');
+  const r = riverInflowPath(p, {
+    ...inflow,
+    law,
+    dragCoefficient: arg.num(a, 'drag_coefficient'),
+    initialMixing: arg.num(a, 'initial_mixing'),
+    plungeFroude: arg.num(a, 'plunge_froude'),
   });
   const u = r.underflow;
+  const spread = insertionDepthSpread(p, inflow);
   const results: Record<string, ResultValue> = { plunge_depth: num(r.plungeDepth, 'm') };
   if (u.insertionDepth !== undefined) {
     results.insertion_depth = num(u.insertionDepth, 'm');
     results.insertion_distance = num(u.path.distance[u.path.distance.length - 1], 'm');
   }
+  results.insertion_depth_low = num(spread.low, 'm');
+  results.insertion_depth_high = num(spread.high, 'm');
+  const spreadNote = note(
+    'insertion-spread',
+    `Across both entrainment laws and the published ranges of bed drag, plunge mixing and plunge Froude number the insertion depth lies between ${qty(spread.low, 'm', 3)} and ${qty(spread.high, 'm', 3)}` +
+      (spread.reachingBottom > 0
+        ? `; in ${spread.reachingBottom} of ${spread.runs} combinations the current reaches the bottom of the profile.`
+        : '.'),
+  );
   results.discharge_at_end = num(u.path.discharge[u.path.discharge.length - 1], 'm3/s');
   if (u.travelTimeToPoint !== undefined) results.travel_time = num(u.travelTimeToPoint, 's');
   results.outcome = text(
     u.insertionDepth !== undefined
-      ? `The inflow plunges at ${r.plungeDepth.toFixed(1)} m and runs down the bed until it leaves it as an interflow at ${u.insertionDepth.toFixed(1)} m.`
+      ? `The inflow plunges at ${qty(r.plungeDepth, 'm', 3)} and runs down the bed until it leaves it as an interflow at ${qty(u.insertionDepth, 'm', 3)}.`
       : 'The inflow plunges and runs down the bed to the bottom of the profile without meeting water of its own density.',
   );
   const stopped = u.status === 'max-steps' || u.status === 'step-failed';
   return {
     results,
     ...(stopped ? { incomplete: `the underflow integration stopped early: ${u.message}` } : {}),
-    warnings: uniqueWarnings(r.warnings),
-    sources: [PLUNGE_AKIYAMA_STEFAN_1984.source, UNDERFLOW_NORMAL_STATE.source],
+    warnings: uniqueWarnings([...r.warnings, spreadNote]),
+    sources: [
+      PLUNGE_AKIYAMA_STEFAN_1984.source,
+      PLUNGE_INITIAL_MIXING.source,
+      UNDERFLOW_NORMAL_STATE.source,
+      (law === 'parker1987' ? ENTRAINMENT_PARKER_1987 : ENTRAINMENT_ELLISON_TURNER_1959).source,
+    ],
     series: underflowSeries(u.path),
   };
 }
@@ -182,6 +214,38 @@ export const inflowCalcMethods: CalcMethod[] = [
         optional: true,
         range: { ...positive, max: 1e6 },
       },
+      {
+        kind: 'choice',
+        name: 'entrainment_law',
+        description:
+          'entrainment of reservoir water into the current: parker1987 (Parker et al. 1987) or ellison-turner1959 (Turner 1986 fit); the two fits differ by 20–35 % at Ri = 0.1–0.5',
+        choices: ['parker1987', 'ellison-turner1959'],
+        default: 'parker1987',
+      },
+      {
+        kind: 'number',
+        name: 'drag_coefficient',
+        unit: '1',
+        description: `total drag of the bed and the interface C_D (published range ${UNDERFLOW_NORMAL_STATE.validity.drag_coefficient.min}–${UNDERFLOW_NORMAL_STATE.validity.drag_coefficient.max}; default ${DEFAULT_DRAG}, common practice)`,
+        default: DEFAULT_DRAG,
+        range: { ...positive, max: 1 },
+      },
+      {
+        kind: 'number',
+        name: 'initial_mixing',
+        unit: '1',
+        description: `plunge-line mixing ratio Φ, entrained over inflow discharge (reported range ${PLUNGE_INITIAL_MIXING.validity.initial_mixing.min}–${PLUNGE_INITIAL_MIXING.validity.initial_mixing.max}; default 0.1)`,
+        default: 0.1,
+        range: { ...nonNegative, max: 5 },
+      },
+      {
+        kind: 'number',
+        name: 'plunge_froude',
+        unit: '1',
+        description: `plunge densimetric Froude number F_p (range ${PLUNGE_AKIYAMA_STEFAN_1984.validity.plunge_froude.min}–${PLUNGE_AKIYAMA_STEFAN_1984.validity.plunge_froude.max}; default ${DEFAULT_PLUNGE_FROUDE})`,
+        default: DEFAULT_PLUNGE_FROUDE,
+        range: { ...positive, max: 5 },
+      },
     ],
     results: [
       { name: 'plunge_depth', unit: 'm', description: 'water depth at the plunge line' },
@@ -194,6 +258,17 @@ export const inflowCalcMethods: CalcMethod[] = [
         name: 'insertion_distance',
         unit: 'm',
         description: 'distance along the bed from the plunge line to the insertion',
+      },
+      {
+        name: 'insertion_depth_low',
+        unit: 'm',
+        description:
+          'shallowest insertion across both entrainment laws and the published ranges of drag, plunge mixing and plunge Froude number',
+      },
+      {
+        name: 'insertion_depth_high',
+        unit: 'm',
+        description: 'deepest insertion across the same combinations (the bottom when a combination reaches it)',
       },
       {
         name: 'discharge_at_end',
