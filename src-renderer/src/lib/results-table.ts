@@ -5,7 +5,7 @@ import { SCREENING_CAUTION } from '../../../shared-core/core/caution';
 import type { UncertaintyResult } from '../../../shared-core/uncertainty';
 import { showQuantity, words } from './format';
 import { BAND_NOTE, bandTableRows } from './band-text';
-import { namesAsWords } from './messages';
+import { shownText } from './messages';
 
 /** Tabs and line breaks would split a spreadsheet cell: they become spaces. */
 const cell = (s: string): string => s.replace(/[\t\r\n]+/g, ' ').trim();
@@ -18,7 +18,7 @@ function rows(
 ): string[] {
   return Object.entries(values).map(([name, v]) => {
     const label = words(name, method, role);
-    if (typeof v.value !== 'number') return [label, cell(v.value), ''].join('\t');
+    if (typeof v.value !== 'number') return [label, cell(shownText(v.value, system, { method })), ''].join('\t');
     const shown = showQuantity(v.value, v.unit, system);
     return [label, shown.text, shown.unit].map(cell).join('\t');
   });
@@ -36,15 +36,15 @@ export function resultsTableText(
   methodTitle = '',
   band?: UncertaintyResult,
 ): string {
+  const plain = (text: string) => cell(shownText(text, system, { method: o.method }));
   const where = [o.feature?.name, o.condition?.name].filter(Boolean).join(' · ');
   const lines = [
     [cell(o.title), cell(where)].join('\t'),
     ['result', 'value', 'unit'].join('\t'),
     ...rows(o.results, system, o.method, 'result'),
   ];
-  if (o.status === 'error') lines.push(['cannot compute', cell(namesAsWords(o.error ?? '', o.method))].join('\t'));
-  if (o.status === 'incomplete')
-    lines.push(['incomplete', cell(namesAsWords(o.incomplete ?? '', o.method))].join('\t'));
+  if (o.status === 'error') lines.push(['cannot compute', plain(o.error ?? '')].join('\t'));
+  if (o.status === 'incomplete') lines.push(['incomplete', plain(o.incomplete ?? '')].join('\t'));
   lines.push('', ['input', 'value', 'unit'].join('\t'), ...rows(o.inputs, system, o.method, 'input'), '');
   if (band)
     lines.push(
@@ -52,9 +52,9 @@ export function resultsTableText(
       ['band note', BAND_NOTE].join('\t'),
       '',
     );
-  lines.push(...o.warnings.map((w) => ['warning', cell(namesAsWords(w.message, o.method))].join('\t')));
+  lines.push(...o.warnings.map((w) => ['warning', plain(w.message)].join('\t')));
   lines.push(['method', cell(methodTitle || o.method)].join('\t'));
-  lines.push(...o.sources.map((s) => ['source', cell(s)].join('\t')));
+  lines.push(...o.sources.map((s) => ['source', plain(s)].join('\t')));
   lines.push(['caution', SCREENING_CAUTION].join('\t'));
   return `${lines.join('\n')}\n`;
 }

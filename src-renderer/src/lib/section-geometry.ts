@@ -120,3 +120,27 @@ export function basinPolygon(
   const right = widths.map((w) => `${(cx + w.fraction * halfWidth).toFixed(1)},${sy(w.depth).toFixed(1)}`).reverse();
   return [...left, ...right].join(' ');
 }
+
+/**
+ * A name broken into at most `maxLines` lines of about `perLine` characters at spaces, so a bay's title is
+ * read whole; only a name longer than all lines together ends in "…" (the full name stays in its tooltip).
+ */
+export function wrappedName(name: string, perLine: number, maxLines = 2): string[] {
+  const width = Math.max(4, Math.floor(perLine));
+  const lines: string[] = [];
+  let line = '';
+  for (const word of name.split(/\s+/).filter(Boolean)) {
+    const next = line ? `${line} ${word}` : word;
+    if (next.length <= width || !line) line = next;
+    else {
+      lines.push(line);
+      line = word;
+    }
+  }
+  if (line) lines.push(line);
+  if (lines.length <= maxLines && lines.every((l) => l.length <= width)) return lines;
+  const kept = lines.slice(0, maxLines);
+  const rest = lines.slice(maxLines - 1).join(' ');
+  kept[maxLines - 1] = rest.length > width ? `${rest.slice(0, width - 1)}…` : rest;
+  return kept.map((l) => (l.length > width ? `${l.slice(0, width - 1)}…` : l));
+}

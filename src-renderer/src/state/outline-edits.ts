@@ -31,11 +31,16 @@ export function addFeature(ws: Workspace, kind: FeatureKind): void {
 }
 
 export function removeFeature(ws: Workspace, id: string): void {
+  const name = ws.doc.site.features.find((f) => f.id === id)?.name ?? 'the feature';
+  const gone = ws.doc.site.estimates.filter((e) => e.feature === id).length;
   ws.doc.change((d) => {
     d.features = d.features.filter((f) => f.id !== id);
     d.estimates = d.estimates.filter((e) => e.feature !== id);
   });
   ws.selection = { kind: 'waterBody' };
+  ws.say(
+    `Removed ${name}${gone ? ` and its ${gone} estimate${gone === 1 ? '' : 's'}` : ''}; Undo (Ctrl+Z) restores ${gone ? 'them' : 'it'}.`,
+  );
 }
 
 export function addCondition(ws: Workspace): void {
@@ -52,11 +57,16 @@ export function addCondition(ws: Workspace): void {
 
 export function removeCondition(ws: Workspace, id: string): void {
   if (ws.doc.site.conditions.length < 2) return ws.say('A site keeps at least one condition.', 'error');
+  const name = ws.doc.site.conditions.find((c) => c.id === id)?.name ?? 'the condition';
+  const gone = ws.doc.site.estimates.filter((e) => e.condition === id).length;
   ws.doc.change((d) => {
     d.conditions = d.conditions.filter((c) => c.id !== id);
     d.estimates = d.estimates.filter((e) => e.condition !== id);
   });
   ws.selection = { kind: 'waterBody' };
+  ws.say(
+    `Removed ${name}${gone ? ` and its ${gone} estimate${gone === 1 ? '' : 's'}` : ''}; Undo (Ctrl+Z) restores ${gone ? 'them' : 'it'}.`,
+  );
 }
 
 export function addEstimate(ws: Workspace): void {

@@ -1,4 +1,5 @@
 import { loadSite, SiteFileError, type Assessment, type Site } from '../../../shared-core/site';
+import type { EstimateOutcome } from '../../../shared-core/site/assess';
 import type { UnitSystem } from '../../../shared-core/units/units';
 import type { Feature } from '../../../shared-core/site/schema';
 import { drawEstimate, type EstimateDrawing } from '../lib/estimate-curves';
@@ -16,6 +17,8 @@ export type Selection =
 export interface Notice {
   tone: 'info' | 'error';
   text: string;
+  /** the document as it was when the notice was given: an error stops showing once later work succeeds */
+  site: Site;
 }
 
 /** The workspace: the open document, what is selected, the condition shown, and the live assessment. */
@@ -28,7 +31,13 @@ export class Workspace {
   conditionChoice = $state<string | null>(null);
   /** the estimate whose detail is open */
   detailId = $state<string | null>(null);
-  notice = $state<Notice | null>(null);
+  private noticeGiven = $state<Notice | null>(null);
+  /** the status line's message; an error clears once an edit, undo or redo has changed the document since */
+  notice = $derived(
+    this.noticeGiven && (this.noticeGiven.tone === 'info' || this.noticeGiven.site === this.doc.site)
+      ? this.noticeGiven
+      : null,
+  );
   /** features added in this session, as added: their results say they rest on starting values until replaced */
   addedFeatures = $state.raw(new Map<string, Feature>());
 
@@ -46,11 +55,16 @@ export class Workspace {
   drawings = $derived(new Map<string, EstimateDrawing>(this.assessment.estimates.map((o) => [o.id, drawEstimate(o)])));
   /** how the profile of the condition shown reads */
   conditionOutcome = $derived(this.assessment.conditions.find((c) => c.id === this.conditionId));
-  /** estimates shown for the current condition (those without a condition show under every condition) */
-  visible = $derived(this.assessment.estimates.filter((o) => !o.condition || o.condition.id === this.conditionId));
+  /** estimates shown for the current condition (those without a condition show under every condition), the selection's first */
+  visible = $derived(
+    selectedFirst(
+      this.assessment.estimates.filter((o) => !o.condition || o.condition.id === this.conditionId),
+      this.selection,
+    ),
+  );
 
   say(text: string, tone: Notice['tone'] = 'info'): void {
-    this.notice = { tone, text };
+    this.noticeGiven = { tone, text, site: this.doc.site };
   }
 
   /** Shows every number in SI or US units; the document is not changed (the file keeps the units it opens in). */
@@ -79,4 +93,18 @@ export class Workspace {
       return false;
     }
   }
+}
+
+/** Whether an estimate belongs to what is selected (its feature, its condition, or itself). */
+export function belongsTo(o: EstimateOutcome, selection: Selection): boolean {
+  if (selection.kind === 'feature') return o.feature?.id === selection.id;
+  if (selection.kind === 'estimate') return o.id === selection.id;
+  if (selection.kind === 'condition') return o.condition?.id === selection.id;
+  return false;
+}
+
+/** Estimates in assessment order, those of the selected feature, condition or estimate moved to the front. */
+function selectedFirst(estimates: EstimateOutcome[], selection: Selection): EstimateOutcome[] {
+  const first = estimates.filter((o) => belongsTo(o, selection));
+  return first.length ? [...first, ...estimates.filter((o) => !belongsTo(o, selection))] : estimates;
 }
