@@ -2,7 +2,8 @@ import { qty } from './quantity-text';
 
 /** A number with its unit for a message: a quantity token (shown in the reader's units), a plain number without a unit. */
 export function valueText(x: number, unit: string, digits = 6): string {
-  return unit && unit !== '1' ? qty(x, unit, digits) : formatNumber(x);
+  if (!Number.isFinite(x)) return Number.isNaN(x) ? 'not a number' : x > 0 ? 'infinite' : 'minus infinite';
+  return unit && unit !== '1' ? qty(x, unit, digits) : formatNumber(Number(x.toPrecision(digits)));
 }
 
 /**

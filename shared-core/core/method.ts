@@ -43,13 +43,14 @@ export function validityWarnings(info: MethodInfo, inputs: Record<string, number
   for (const [name, range] of Object.entries(info.validity)) {
     const x = inputs[name];
     if (x === undefined || inRange(x, range)) continue;
-    const lo = range.min === undefined ? undefined : valueText(range.min, range.unit);
-    const hi = range.max === undefined ? undefined : valueText(range.max, range.unit);
+    // four figures: a warning is read, not compared digit by digit with the range
+    const lo = range.min === undefined ? undefined : valueText(range.min, range.unit, 4);
+    const hi = range.max === undefined ? undefined : valueText(range.max, range.unit, 4);
     const span = lo && hi ? `the range ${lo} … ${hi}` : lo ? `the range from ${lo} up` : `the range up to ${hi}`;
     out.push(
       outsideValidity(
         'validity-range',
-        `${name} = ${valueText(x, range.unit)} is outside ${span} of ${info.title}` +
+        `${name} = ${valueText(x, range.unit, 4)} is outside ${span} of ${info.title}` +
           (range.note ? ` (${range.note})` : '') +
           '; the result is an extrapolation.',
         name,

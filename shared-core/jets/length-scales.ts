@@ -110,7 +110,8 @@ export function jetLengthScales(d: JetDischarge): JetLengthScales {
  * absent, or so weak that the scale overflows) is never printed: the sentence says the process does not act.
  */
 function describeRegime(g: number, lQ: number, lM: number, lm: number, lb: number, lMN: number): string[] {
-  const has = Number.isFinite;
+  // a scale beyond any water body (1000 km) means the process never acts there: common practice, no source
+  const has = (x: number) => Number.isFinite(x) && x < 1e6;
   const out = [
     has(lQ) && lQ > 0
       ? `Within about ${about(lQ)} of the port the flow still remembers the port's shape.`

@@ -206,14 +206,14 @@ export function runEstimate(
         k in e.params ? 'typed' : raw[k] !== undefined ? 'site' : 'default',
       ]),
     );
-    const warnings = uniqueWarnings([...(ctx.profile?.warnings ?? []), ...out.warnings]).map((w) => ({
-      ...w,
-      message: namesAsWords(w.message, method.id),
-    }));
+    // warnings name parameters in words ("the longest path followed", not max_path_length)
+    const worded = (w: Warning): Warning => ({ ...w, message: namesAsWords(w.message, method.id) });
+    const warnings = uniqueWarnings([...(ctx.profile?.warnings ?? []), ...out.warnings]).map(worded);
     const wantsBand = options.bands !== false && e.uncertainty && Object.keys(e.uncertainty).length > 0;
-    const uncertainty = wantsBand
+    const band = wantsBand
       ? bandsFromTyped(method, raw, e.uncertainty!, { progress: options.bandProgress })
       : undefined;
+    const uncertainty = band && { ...band, warnings: band.warnings.map(worded) };
     return {
       ...base,
       ...where,

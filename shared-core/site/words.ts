@@ -94,6 +94,9 @@ export function siteMessage(text: string, site: Site, method?: string): string {
     .replace(/ \((“[^”]*”)\) profile:/g, ' profile:')
     .replace(/("[^"]*?\s(\S+)") \2(?=\s)/g, '$1')
     .replace(PATH, (p) => placeName(p, site));
+  // "uncertainty of g_prime = …" keeps its parameter name: the uncertainty editor finds its field by it
+  const band = /^uncertainty of [a-z][a-z0-9_]* = /.exec(named);
+  if (band) return band[0] + namesAsWords(named.slice(band[0].length), method);
   const param = /^([a-z][a-z0-9]*(?:_[a-z0-9]+)*) = /.exec(named);
   return param
     ? `${labelOf(param[1], method, 'input').label} = ${namesAsWords(named.slice(param[1].length + 3), method)}`

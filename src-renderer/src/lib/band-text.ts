@@ -46,7 +46,9 @@ export function bandTableRows(
     head,
     ...rows,
     ...inputs,
-    ...r.warnings.map((w) => ['band warning', namesAsWords(w.message, method).replace(/[\t\r\n]+/g, ' ')].join('\t')),
+    ...r.warnings.map((w) =>
+      ['band warning', namesAsWords(w.message, method, system).replace(/[\t\r\n]+/g, ' ')].join('\t'),
+    ),
   ];
 }
 

@@ -3,6 +3,8 @@ import fc from 'fast-check';
 import { jetLengthScales } from '../../../shared-core/jets/length-scales';
 import { linePlume, linePlumeRobertsSnyderBaumgartner1989 } from '../../../shared-core/jets/line-plume';
 import { InputError } from '../../../shared-core/core/errors';
+import { hasQuantityToken } from '../../../shared-core/core/quantity-text';
+import { sentenceIn } from '../../../shared-core/units/sentence';
 import { runCheckValues } from '../../helpers/check-values';
 
 const keys: Record<string, string> = {
@@ -114,5 +116,54 @@ describe('jet length scales', () => {
     const shallow = linePlume(0.01, 0.2, 0.02, 0, 10);
     expect(shallow.riseHeight).toBeGreaterThan(10);
     expect(shallow.warnings.map((w) => w.code)).toContain('wastefield-reaches-surface');
+  });
+});
+
+describe('jet length scales in words', () => {
+  // gprime's own contract (issue: the regime text never prints NaN or Infinity): no outside source applies
+  const shown = (d: Parameters<typeof jetLengthScales>[0], system: 'si' | 'us') =>
+    jetLengthScales(d).regime.map((t) => sentenceIn(t, system));
+
+  it('never prints a non-finite or underflowed scale, anywhere in the hard ranges (property)', () => {
+    const tiny = fc.oneof(fc.constant(0), fc.double({ min: 1e-320, max: 1e-300, noNaN: true }));
+    fc.assert(
+      fc.property(
+        fc.double({ min: 1e-4, max: 20, noNaN: true }),
+        fc.double({ min: 1e-6, max: 100, noNaN: true }),
+        fc.oneof(
+          fc.double({ min: -5, max: 5, noNaN: true }),
+          tiny,
+          tiny.map((x) => -x),
+        ),
+        fc.oneof(fc.double({ min: 0, max: 10, noNaN: true }), tiny),
+        fc.oneof(fc.double({ min: 0, max: 2, noNaN: true }), tiny),
+        fc.constantFrom<'si' | 'us'>('si', 'us'),
+        (diameter, velocity, gPrime, current, buoyancyFrequency, system) => {
+          for (const text of shown({ diameter, velocity, gPrime, current, buoyancyFrequency }, system)) {
+            expect(text).not.toMatch(/NaN|Infinity|∞|not a number/);
+            expect(hasQuantityToken(text)).toBe(false);
+            expect(text).not.toMatch(/about 0 (m|ft)\b|times 0 (m|ft)\b/);
+          }
+        },
+      ),
+      { numRuns: 300 },
+    );
+  });
+
+  it('says a process is absent instead of naming an infinite scale', () => {
+    const still = shown({ diameter: 0.2, velocity: 2, gPrime: 1e-320, current: 1e-300, buoyancyFrequency: 0 }, 'si');
+    expect(still).toContain(
+      'The density difference is too small to matter: the effluent behaves as a pure momentum jet.',
+    );
+    expect(still.join(' ')).not.toMatch(/current bends/);
+    // shown in feet in US units: l_Q = √(π/4)·D = 0.1772 m = 0.5815 ft (NIST SP 811 App. B: 1 ft = 0.3048 m)
+    expect(shown({ diameter: 0.2, velocity: 2, gPrime: 0.1 }, 'us')[0]).toBe(
+      "Within about 0.58 ft of the port the flow still remembers the port's shape.",
+    );
+  });
+
+  it('refuses a port diameter below 0.1 mm by name (the fluxes would underflow)', () => {
+    expect(() => jetLengthScales({ diameter: 1e-200, velocity: 1, gPrime: 0.1 })).toThrow(InputError);
+    expect(() => jetLengthScales({ diameter: 1e-200, velocity: 1, gPrime: 0.1 })).toThrow(/^diameter = /);
   });
 });

@@ -153,6 +153,14 @@ describe('typed standard uncertainties', () => {
     expect(() => parseStandardUncertainty('depth', 'x%', 'm', 30)).toThrow(/uncertainty of depth/);
     expect(() => parseStandardUncertainty('depth', 'abc', 'm', 30)).toThrow(/uncertainty of depth/);
   });
+  it('refuses a percent sign without a number before it (never read as 0)', () => {
+    for (const text of ['%', ' % ', 'ft%', '-%', '1e%', '.%'])
+      expect(() => parseStandardUncertainty('depth', text, 'm', 30), text).toThrow(
+        /uncertainty of depth = .* is not allowed: a relative uncertainty is a number ≥ 0 followed by %/,
+      );
+    expect(parseStandardUncertainty('depth', '0%', 'm', 30)).toBe(0);
+    expect(parseStandardUncertainty('depth', '2,5 %', 'm', 30)).toBeCloseTo(0.75, 12);
+  });
 });
 
 describe('warnings raised in some draws', () => {
@@ -168,7 +176,7 @@ describe('warnings raised in some draws', () => {
     const occasional = r.warnings.filter((w) => w.code === 'band-occasional-warning');
     expect(occasional).toMatchObject([{ severity: 'outside-validity', input: 'wind_speed' }]);
     expect(occasional[0].message).toMatch(
-      /^In [\d.]+ % of the draws: .*outside the range ⟦4\|m\/s\|6⟧ … ⟦25\|m\/s\|6⟧/,
+      /^In [\d.]+ % of the draws: .*outside the range ⟦4\|m\/s\|4⟧ … ⟦25\|m\/s\|4⟧/,
     );
   });
 });
