@@ -1,3 +1,4 @@
+import { qty } from '../core/quantity-text';
 import { arg, type CalcArgs, type ParamSpec, type Series } from '../calc/types';
 import { InputError } from '../core/errors';
 import { positive, nonNegative } from '../core/range';
@@ -126,7 +127,7 @@ export const jetPortParams: ParamSpec[] = [
     kind: 'number',
     name: 'max_path_length',
     unit: 'm',
-    description: 'longest centreline path followed (default 10 km, or 100 diameters or 50 port depths when longer)',
+    description: `longest centreline path followed (default ${qty(10000, 'm')}, or 100 diameters or 50 port depths when longer)`,
     optional: true,
     range: { ...positive, max: 1e6 },
   },

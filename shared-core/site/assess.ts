@@ -229,7 +229,7 @@ export function runEstimate(
       ...(uncertainty ? { uncertainty } : {}),
     };
   } catch (err) {
-    return fail(failureMessage(err, method.id));
+    return fail(failureMessage(err, method.title));
   }
 }
 

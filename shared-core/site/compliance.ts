@@ -225,9 +225,9 @@ function zoneRowsFor(
   const fail = (why: string) =>
     cannotTell(f, condition.name, zone, constituents, why).map((r) => ({ ...r, boundary: edge, estimate: id }));
   if (!near || near.status === 'error')
-    return fail(`the near-field estimate ${id} did not compute: ${near?.error ?? 'missing'}`);
+    return fail(`the near-field estimate “${near?.title ?? id}” did not compute: ${near?.error ?? 'missing'}`);
   const g = governingPath(near.model, edge);
-  if (!g) return fail(`the estimate ${id} holds no near-field path`);
+  if (!g) return fail(`the estimate “${near.title}” holds no near-field path`);
   const atEdge: BoundaryDilution = g;
   const far = outcomes.find((o) => o.id === farFieldId(f, conditionId, zone));
   const factor =

@@ -1,29 +1,9 @@
 import { nameText } from '../../../shared-core/core/vocabulary';
 import { displayUnit, toDisplay, type UnitSystem } from '../../../shared-core/units/units';
 
-/** Unit names as people read them (m3/s → m³/s, degC → °C). Display only. */
-const PRETTY: Record<string, string> = {
-  degC: '°C',
-  degF: '°F',
-  'm3/s': 'm³/s',
-  'kg/m3': 'kg/m³',
-  'm/s2': 'm/s²',
-  'm2/s': 'm²/s',
-  m2: 'm²',
-  m3: 'm³',
-  '1/s2': '1/s²',
-  'lb/ft3': 'lb/ft³',
-  'ft/s2': 'ft/s²',
-  'ft2/s': 'ft²/s',
-  ft2: 'ft²',
-  ft3: 'ft³',
-  deg: '°',
-  '1': '',
-};
-
-export function prettyUnit(unit: string): string {
-  return PRETTY[unit] ?? unit;
-}
+/** Unit names as people read them (m3/s → m³/s, degC → °C): the one table of shared-core/units/format. */
+export { prettyUnit } from '../../../shared-core/units/format';
+import { prettyUnit } from '../../../shared-core/units/format';
 
 /** A number with about four significant digits, no trailing zeros, exponent form when very large/small. */
 export function formatNumber(v: number, digits = 4): string {

@@ -27,7 +27,7 @@ export function namesAsWords(text: string, method?: string, system: UnitSystem =
 }
 
 /** A parameter's description under its field, unless it only repeats the label. */
-export function helpText(description: string, label: string, method?: string): string {
+export function helpText(description: string, label: string, method?: string, system: UnitSystem = 'si'): string {
   const same = description.trim().toLowerCase() === label.trim().toLowerCase();
-  return same ? '' : wordsOf(description, method);
+  return same ? '' : shownText(description, system, { method });
 }
