@@ -2,7 +2,8 @@ import { num } from '../calc/resolve';
 import { arg, type CalcMethod } from '../calc/types';
 import { InputError } from '../core/errors';
 import { caution, note } from '../core/warning';
-import { DENSITY_METHODS } from '../water/density';
+import { DENSITY_METHODS, seawaterSalinityLimit } from '../water/density';
+import { SHARQAWY_2010 } from '../water/brine';
 import {
   n2Profile,
   mixedLayerDepth,
@@ -59,6 +60,9 @@ export function summariseProfile(p: Profile): CalcOutput {
     warnings,
     sources: [
       DENSITY_METHODS[p.eos].source,
+      ...(p.eos !== 'fresh' && p.salinity.some((s) => s > seawaterSalinityLimit(p.eos as 'eos80' | 'teos10'))
+        ? [SHARQAWY_2010.source]
+        : []),
       MIXED_LAYER_THRESHOLD.source,
       THERMOCLINE_MAX_GRADIENT.source,
       TWO_LAYER_FIT.source,

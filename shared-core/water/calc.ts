@@ -2,6 +2,7 @@ import { num } from '../calc/resolve';
 import { arg, type CalcMethod } from '../calc/types';
 import { positive, nonNegative } from '../core/range';
 import { DENSITY_METHODS, EQUATIONS_OF_STATE, waterDensity, defaultEos, type EquationOfState } from './density';
+import { SHARQAWY_2010 } from './brine';
 import { SEDIMENT_MIXTURE } from './sediment';
 import {
   reducedGravity,
@@ -70,7 +71,11 @@ export const waterCalcMethods: CalcMethod[] = [
         pressure: arg.num(a, 'pressure'),
         eos,
       });
-      const sources = [DENSITY_METHODS[eos].source, ...(arg.num(a, 'sediment') > 0 ? [SEDIMENT_MIXTURE.source] : [])];
+      const brine = r.method.startsWith(SHARQAWY_2010.id);
+      const sources = [
+        (brine ? SHARQAWY_2010 : DENSITY_METHODS[eos]).source,
+        ...(arg.num(a, 'sediment') > 0 ? [SEDIMENT_MIXTURE.source] : []),
+      ];
       return { results: { density: num(r.value, 'kg/m3') }, warnings: r.warnings, sources };
     },
   },

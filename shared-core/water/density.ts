@@ -1,11 +1,13 @@
 import { InputError } from '../core/errors';
 import { nonNegative, requireInRange } from '../core/range';
 import type { Scalar } from '../core/method';
-import { note } from '../core/warning';
+import { caution, note } from '../core/warning';
 import { densityPureWaterTanaka2001, TANAKA_2001 } from './fresh-density';
 import { densitySeawaterEos80, EOS80 } from './eos80';
 import { densitySeawaterTeos10, TEOS10_75 } from './teos10';
 import { densityWithSediment, SEDIMENT_MIXTURE } from './sediment';
+import { densityBrineSharqawy2010, referenceSalinityFromPractical, SHARQAWY_2010 } from './brine';
+import { qty } from '../core/quantity-text';
 
 export type EquationOfState = 'fresh' | 'eos80' | 'teos10';
 export const EQUATIONS_OF_STATE: readonly EquationOfState[] = ['fresh', 'eos80', 'teos10'];
@@ -31,9 +33,40 @@ export function defaultEos(salinity: number): EquationOfState {
   return salinity > 0 ? 'eos80' : 'fresh';
 }
 
+/** The highest practical salinity of a seawater equation of state (its descriptor's validity) [PSU]. */
+export function seawaterSalinityLimit(eos: 'eos80' | 'teos10'): number {
+  return DENSITY_METHODS[eos].validity.salinity?.max ?? 42;
+}
+
+/** Brine beyond a seawater equation of state: Sharqawy et al. (2010) at the reference-composition salinity, 1 atm. */
+function brineDensity(eos: 'eos80' | 'teos10', salinity: number, temperature: number, pressure: number): Scalar {
+  const r = densityBrineSharqawy2010(referenceSalinityFromPractical(salinity), temperature);
+  r.warnings.push(
+    note(
+      'brine-equation-of-state',
+      `Salinity ${qty(salinity, 'PSU')} is beyond the ${qty(seawaterSalinityLimit(eos), 'PSU')} of ${DENSITY_METHODS[eos].title}: the density is from the brine correlation of Sharqawy et al. (2010), valid to 160 g/kg, ±0.1 %.`,
+      'salinity',
+    ),
+  );
+  if (temperature > 40)
+    r.warnings.push(
+      caution(
+        'hot-brine-density',
+        `Above ${qty(40, 'degC')} the brine correlation departs from the TEOS-10 Gibbs function of hot concentrates by more than its ±0.1 % (0.16 % at ${qty(60, 'degC')} and 70 g/kg): a density difference between brine and sea water carries that error.`,
+        'temperature',
+      ),
+    );
+  if (pressure > 0)
+    r.warnings.push(
+      note('pressure-ignored', 'The brine correlation is at atmospheric pressure; pressure is ignored.', 'pressure'),
+    );
+  return r;
+}
+
 /**
  * Density of fresh water, seawater or sediment-laden water: picks the chosen equation of state
- * (Tanaka et al. 2001, EOS-80 or TEOS-10) and adds the suspended sediment by mixture mass balance.
+ * (Tanaka et al. 2001, EOS-80 or TEOS-10; beyond their salinity range the brine correlation of Sharqawy et al. 2010)
+ * and adds the suspended sediment by mixture mass balance.
  * The fresh-water formula ignores salinity and pressure, so it refuses a non-zero salinity.
  * @returns density [kg/m3] with the warnings of every method used
  */
@@ -57,6 +90,8 @@ export function waterDensity(state: WaterState): Scalar {
       base.warnings.push(
         note('pressure-ignored', 'eos = fresh ignores pressure; the density is at 1 atm.', 'pressure'),
       );
+  } else if ((eos === 'eos80' || eos === 'teos10') && salinity > seawaterSalinityLimit(eos)) {
+    base = brineDensity(eos, salinity, state.temperature, pressure);
   } else if (eos === 'eos80') {
     base = densitySeawaterEos80(salinity, state.temperature, pressure);
   } else if (eos === 'teos10') {

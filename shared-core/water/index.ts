@@ -1,6 +1,7 @@
 export * from './fresh-density';
 export * from './eos80';
 export * from './teos10';
+export * from './brine';
 export * from './sediment';
 export * from './transport';
 export * from './buoyancy';
