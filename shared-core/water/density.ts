@@ -6,7 +6,7 @@ import { densityPureWaterTanaka2001, TANAKA_2001 } from './fresh-density';
 import { densitySeawaterEos80, EOS80 } from './eos80';
 import { densitySeawaterTeos10, TEOS10_75 } from './teos10';
 import { densityWithSediment, SEDIMENT_MIXTURE } from './sediment';
-import { densityBrineSharqawy2010, referenceSalinityFromPractical, SHARQAWY_2010 } from './brine';
+import { densityBrineSharqawy2010, referenceSalinityFromPractical } from './brine';
 import { qty } from '../core/quantity-text';
 
 export type EquationOfState = 'fresh' | 'eos80' | 'teos10';
