@@ -56,12 +56,7 @@ export function describeOutcome(
           text: `The jet is stopped ${len(end.z)} above the port with a centreline dilution of ${s(end.dilutionCentreline)} and falls back onto itself (a fountain); the integral model ends there.`,
         };
       }
-      return {
-        kind: 'trapped',
-        text:
-          `The density layering traps the plume below the surface: it becomes neutrally buoyant ${len(neutral?.z ?? end.z)} above the port (depth ${len(neutral?.depth ?? end.depth)}), ` +
-          `overshoots to ${len(end.z)} and will spread sideways near the neutral level; the centreline dilution at the turning point is ${s(end.dilutionCentreline)}.`,
-      };
+      return { kind: 'trapped', text: trappedText(events, prev, end, neutral, maxRise) };
     case 'bed contact':
       return {
         kind: 'reaches bed',
@@ -75,6 +70,33 @@ export function describeOutcome(
     default:
       return { kind: 'unfinished', text: `${rise} The path ends at ${prev.kind}.` };
   }
+}
+
+/**
+ * A trapped plume in words. A plume that rose, came back down through its neutral level and turned again (its path
+ * ends at a lowest point below the highest one) is told in that order, never as an "overshoot" below its top.
+ */
+function trappedText(
+  events: JetEvent[],
+  prev: JetEvent,
+  end: JetEvent,
+  neutral: JetEvent | undefined,
+  maxRise: number,
+): string {
+  const dilution = `the centreline dilution at the turning point is ${s(end.dilutionCentreline)}`;
+  const level = neutral?.z ?? end.z;
+  const depth = neutral?.depth ?? end.depth;
+  const roseFirst = events.some((e) => e.kind === 'maximum rise' && e.s < end.s) && maxRise > end.z;
+  if (prev.kind === 'lowest point' && roseFirst)
+    return (
+      `The density layering traps the plume below the surface: it rises at most ${len(maxRise)} above the port, ` +
+      `sinks back through its neutral level ${len(level)} above the port (depth ${len(depth)}) to ${len(end.z)} ` +
+      `and will spread sideways near the neutral level; ${dilution}.`
+    );
+  return (
+    `The density layering traps the plume below the surface: it becomes neutrally buoyant ${len(level)} above the port (depth ${len(depth)}), ` +
+    `overshoots to ${len(end.z)} and will spread sideways near the neutral level; ${dilution}.`
+  );
 }
 
 export interface WarningContext {
