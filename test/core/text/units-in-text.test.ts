@@ -156,6 +156,7 @@ const EVERYDAY: Record<string, number> = {
   distance: 500,
   river_discharge: 100,
   tidal_velocity: 0.8,
+  bed_slope: 0.01,
 };
 /** Parameters given one way or another, never both (each group: one of its names is given). */
 const ALTERNATIVES: Record<string, string[][]> = {
