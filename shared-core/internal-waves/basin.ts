@@ -1,4 +1,5 @@
 import { GRAVITY } from '../quantities';
+import { qty } from '../core/quantity-text';
 import { InputError } from '../core/errors';
 import { positive, requireInRange } from '../core/range';
 import { scalar, validityWarnings, type MethodInfo, type Scalar } from '../core/method';
@@ -162,7 +163,7 @@ export function wedderburnNumber(
 export function upwellingRiskStatement(wedderburn: number, upperThickness: number): string {
   const W = requireInRange('wedderburn', wedderburn, '1', positive);
   const lift = Math.min(upperThickness, upperThickness / W);
-  const liftText = `${lift.toPrecision(2)} m`;
+  const liftText = qty(lift, 'm', 2);
   if (W < 1)
     return `High upwelling risk (W = ${W.toPrecision(2)} < 1): a steady wind of this strength can tilt the thermocline up to the surface at the upwind shore, bringing cold, possibly low-oxygen lower-layer water to shallow intakes there; the downwind end deepens.`;
   if (W < 10)

@@ -1,4 +1,5 @@
 import { num, text } from '../calc/resolve';
+import { qty } from '../core/quantity-text';
 import { arg, type CalcArgs, type CalcMethod, type ResultSpec, type Series } from '../calc/types';
 import { InputError } from '../core/errors';
 import { positive } from '../core/range';
@@ -265,7 +266,7 @@ export const internalWaveCalcMethods: CalcMethod[] = [
         ...w.warnings,
         note(
           'drag-coefficient',
-          `Drag coefficient C_D = ${ws.dragCoefficient.toExponential(2)} (Large & Pond 1981), air density 1.225 kg/m³, water density 1000 kg/m³.`,
+          `Drag coefficient C_D = ${ws.dragCoefficient.toExponential(2)} (Large & Pond 1981), air density ${qty(1.225, 'kg/m3')}, water density ${qty(1000, 'kg/m3')}.`,
         ),
       ];
       return {

@@ -1,4 +1,5 @@
-import { InputError, formatNumber, formatShort } from '../core/errors';
+import { InputError } from '../core/errors';
+import { qty } from '../core/quantity-text';
 import { nonNegative, positive, requireInRange } from '../core/range';
 import type { MethodInfo } from '../core/method';
 import { LIMITS } from '../core/limits';
@@ -21,7 +22,7 @@ export const RELEASE_BLEND: MethodInfo = {
   source:
     'Mixing of the port outflows by conservation of mass, heat and constituents (Fischer et al. 1979, Ch. 6); each port’s outflow ' +
     'from its own withdrawal layer (Bohan & Grace 1973); ports either independent or, where their layers overlap, combined ' +
-    '(see withdrawal-interference-combined).',
+    '(see the combined withdrawal of interfering ports).',
   equation: 'c_release = Σ Q_i c̄_i(Q_i) / Σ Q_i, 0 ≤ Q_i ≤ capacity_i, Σ Q_i = release',
   validity: {},
 };
@@ -88,7 +89,7 @@ function releaseOutflows(
   const depths = ports.map((port) => port.depth);
   const name = (g: InterferenceGroup) =>
     g.ports
-      .map((i) => `${formatShort(depths[i])} m`)
+      .map((i) => qty(depths[i], 'm'))
       .join(', ')
       .replace(/, ([^,]*)$/, ' and $1');
   if (o.interference === 'combined') {
@@ -98,8 +99,8 @@ function releaseOutflows(
       .map((g) =>
         note(
           'ports-interfere',
-          `The ports at ${name(g)} interfere (their withdrawal layers overlap): they are taken as one withdrawal of ${formatNumber(g.flow)} m3/s ` +
-            `from ${formatShort(g.topDepth)} m to ${formatShort(g.bottomDepth)} m, each port drawing on a layer computed at that combined flow.`,
+          `The ports at ${name(g)} interfere (their withdrawal layers overlap): they are taken as one withdrawal of ${qty(g.flow, 'm3/s')} ` +
+            `from ${qty(g.topDepth, 'm')} to ${qty(g.bottomDepth, 'm')}, each port drawing on a layer computed at that combined flow.`,
           'ports',
         ),
       );

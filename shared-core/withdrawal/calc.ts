@@ -3,7 +3,7 @@ import type { WithdrawalZone } from '../calc/model';
 import { arg, type CalcMethod, type Series } from '../calc/types';
 import { caution, note } from '../core/warning';
 import { qty } from '../core/quantity-text';
-import { formatShort, InputError } from '../core/errors';
+import { InputError } from '../core/errors';
 import { positive } from '../core/range';
 import { criticalDischargeCraya1949, CRAYA_1949, SINK_POSITIONS, type SinkKind, type SinkPosition } from './two-layer';
 import { halfThicknessSpreadLineSink, withdrawalLayer, WITHDRAWAL_LINE_SINK, WITHDRAWAL_POINT_SINK } from './layer';
@@ -314,7 +314,7 @@ export const withdrawalCalcMethods: CalcMethod[] = [
         { sink: 'point', interference },
         layers,
       );
-      const flows = ports.map((port, i) => `${formatShort(port.depth)} m: ${r.flows[i].toFixed(2)} m3/s`).join('; ');
+      const flows = ports.map((port, i) => `${qty(port.depth, 'm')}: ${qty(r.flows[i], 'm3/s', 3)}`).join('; ');
       const warnings = [
         note(
           'ports-as-point-sinks',
@@ -378,23 +378,23 @@ export function releaseSeries(
     const v = withdrawalVelocityProfile(p, port.depth, flows[i], { sink: 'point' }, layers.layer(port.depth, flows[i]));
     out.push({
       kind: 'withdrawal-outflow',
-      title: `Withdrawal at the port at ${formatShort(port.depth)} m`,
+      title: `Withdrawal at the port at ${qty(port.depth, 'm')}`,
       x: { label: 'Depth', unit: 'm', values: v.depth },
       y: [{ label: 'Outflow per metre of depth', unit: 'm2/s', values: v.fluxPerDepth }],
       depthAxis: true,
-      caption: `Velocity distribution in the withdrawal layer of the port at ${formatShort(port.depth)} m (${flows[i].toFixed(2)} m³/s)`,
+      caption: `Velocity distribution in the withdrawal layer of the port at ${qty(port.depth, 'm')} (${qty(flows[i], 'm3/s', 3)})`,
     });
   });
   for (const g of combined) {
     const v = groupFluxProfile(p, depths, flows, g, { sink: 'point' }, layers);
-    const names = g.ports.map((i) => `${formatShort(depths[i])} m`).join(', ');
+    const names = g.ports.map((i) => qty(depths[i], 'm')).join(', ');
     out.push({
       kind: 'withdrawal-outflow',
       title: `Combined withdrawal of the ports at ${names}`,
       x: { label: 'Depth', unit: 'm', values: v.depth },
       y: [{ label: 'Outflow per metre of depth', unit: 'm2/s', values: v.fluxPerDepth }],
       depthAxis: true,
-      caption: `Flow-weighted sum of the velocity distributions of the interfering ports at ${names} (${g.flow.toFixed(2)} m³/s in all)`,
+      caption: `Flow-weighted sum of the velocity distributions of the interfering ports at ${names} (${qty(g.flow, 'm3/s', 3)} in all)`,
     });
   }
   return out;
@@ -409,7 +409,7 @@ export function withdrawalZones(
   r: OptimisedRelease,
   groups: readonly InterferenceGroup[],
 ): WithdrawalZone[] {
-  const at = (i: number) => `${formatShort(ports[i].depth)} m`;
+  const at = (i: number) => qty(ports[i].depth, 'm');
   const combined = groups.filter((g) => g.ports.length > 1);
   const inGroup = new Set(combined.flatMap((g) => g.ports));
   const alone = ports

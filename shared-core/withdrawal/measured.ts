@@ -1,4 +1,5 @@
-import { formatShort, InputError } from '../core/errors';
+import { InputError } from '../core/errors';
+import { qty } from '../core/quantity-text';
 import { nonNegative, positive, requireInRange } from '../core/range';
 import type { MethodInfo } from '../core/method';
 import { GRAVITY } from '../quantities';
@@ -215,21 +216,21 @@ export function withdrawalLimitsBohanGrace1973(
     warnings.push(
       caution(
         'layer-reaches-surface',
-        `The withdrawal layer of the port at ${formatShort(portDepth)} m reaches the surface: water is drawn from the surface down.`,
+        `The withdrawal layer of the port at ${qty(portDepth, 'm')} reaches the surface: water is drawn from the surface down.`,
       ),
     );
   if (lower.cutByBoundary && bed > portDepth && discharge > 0)
     warnings.push(
       caution(
         'layer-reaches-bed',
-        `The withdrawal layer of the port at ${formatShort(portDepth)} m reaches the bed at ${formatShort(bed)} m.`,
+        `The withdrawal layer of the port at ${qty(portDepth, 'm')} reaches the bed at ${qty(bed, 'm')}.`,
       ),
     );
   if (p.depth[0] > 0 && portDepth - upper.distance < p.depth[0])
     warnings.push(
       caution(
         'layer-above-shallowest-sample',
-        `The layer reaches above the shallowest sample (${p.depth[0]} m); the shallowest values are used up to the surface.`,
+        `The layer reaches above the shallowest sample (${qty(p.depth[0], 'm')}); the shallowest values are used up to the surface.`,
       ),
     );
   return {

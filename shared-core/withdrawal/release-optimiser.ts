@@ -1,4 +1,4 @@
-import { formatNumber } from '../core/errors';
+import { qty } from '../core/quantity-text';
 import { positive, requireInRange } from '../core/range';
 import { caution } from '../core/warning';
 import type { Profile } from '../profile/profile';
@@ -217,7 +217,7 @@ export function optimiseRelease(
   const warnings = [...blend.warnings];
   if (!feasible) {
     const wanted =
-      band.min === band.max ? `${formatNumber(band.min)} °C` : `${formatNumber(band.min)}–${formatNumber(band.max)} °C`;
+      band.min === band.max ? qty(band.min, 'degC') : `${qty(band.min, 'degC')} to ${qty(band.max, 'degC')}`;
     warnings.push(
       jump && goal > achievable.min && goal < achievable.max
         ? caution(
@@ -227,7 +227,7 @@ export function optimiseRelease(
           )
         : caution(
             'target-not-achievable',
-            `The target ${wanted} cannot be met at a release of ${formatNumber(release)} m3/s: the ports give ${achievable.min.toFixed(2)}–${achievable.max.toFixed(2)} °C; the closest achievable split is reported.`,
+            `The target ${wanted} cannot be met at a release of ${qty(release, 'm3/s')}: the ports give ${qty(achievable.min, 'degC', 3)} to ${qty(achievable.max, 'degC', 3)}; the closest achievable split is reported.`,
             'target_temperature',
           ),
     );

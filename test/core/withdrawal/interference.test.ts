@@ -1,4 +1,6 @@
 import { describe, expect, it } from 'vitest';
+import { qty } from '../../../shared-core/core/quantity-text';
+import { sentenceIn } from '../../../shared-core/units/sentence';
 import fc from 'fast-check';
 import { makeProfile, type Profile } from '../../../shared-core/profile/profile';
 import { blendRelease, type BlendOptions, type Port } from '../../../shared-core/withdrawal/blend';
@@ -164,9 +166,11 @@ describe('combined interference invariants', () => {
       { depth: 16, capacity: 20 },
     ];
     const c = blendRelease(p, close, [10, 10], combined);
-    expect(c.warnings.find((w) => w.code === 'ports-interfere')?.message).toMatch(/ports at 12 m and 16 m interfere/);
+    expect(sentenceIn(c.warnings.find((w) => w.code === 'ports-interfere')?.message ?? '', 'si')).toMatch(
+      /ports at 12 m and 16 m interfere/,
+    );
     const alone = blendRelease(p, close, [10, 10], { sink: 'point' });
-    expect(alone.warnings.find((w) => w.code === 'interference-ignored')?.message).toMatch(
+    expect(sentenceIn(alone.warnings.find((w) => w.code === 'interference-ignored')?.message ?? '', 'si')).toMatch(
       /12 m and 16 m overlap, but each is computed as if/,
     );
     expect(interferenceGroups([12, 16], [10, 0], (d, q) => directOutflow(p, combined)(d, q).limits)).toHaveLength(1);
@@ -180,7 +184,7 @@ describe('combined interference invariants', () => {
     });
     const out = runCalc(method, { file, ports: '8:20,11:20', release: 20, target_temperature: 13 });
     expect(out.warnings.map((w) => w.code)).toContain('ports-interfere');
-    expect(out.series!.filter((s) => s.kind === 'withdrawal-outflow').map((s) => s.title)).toEqual([
+    expect(out.series!.filter((s) => s.kind === 'withdrawal-outflow').map((s) => sentenceIn(s.title, 'si'))).toEqual([
       'Combined withdrawal of the ports at 8 m, 11 m',
     ]);
     // the model's zone is the group's: from the upper limit of the 8 m port to the lower limit of the 11 m port
@@ -188,7 +192,14 @@ describe('combined interference invariants', () => {
     const group = direct.groups.find((g) => g.ports.length === 2)!;
     expect(out.model).toEqual({
       kind: 'withdrawal-zones',
-      zones: [{ label: 'combined: ports at 8 m, 11 m', port: 0, top: group.topDepth, bottom: group.bottomDepth }],
+      zones: [
+        {
+          label: `combined: ports at ${qty(8, 'm')}, ${qty(11, 'm')}`,
+          port: 0,
+          top: group.topDepth,
+          bottom: group.bottomDepth,
+        },
+      ],
     });
     const alone = runCalc(method, {
       file,
@@ -204,7 +215,7 @@ describe('combined interference invariants', () => {
     const apart = optimiseRelease(file, parsePorts('8:20,11:20'), 20, { temperature: 13 }, { sink: 'point' });
     const zones = apart.ports
       .map((o, i) => ({
-        label: `port at ${o.portDepth} m`,
+        label: `port at ${qty(o.portDepth, 'm')}`,
         port: i,
         top: o.limits.topDepth,
         bottom: o.limits.bottomDepth,

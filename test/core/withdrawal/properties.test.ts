@@ -1,4 +1,5 @@
 import { describe, expect, it } from 'vitest';
+import { sentenceIn } from '../../../shared-core/units/sentence';
 import fc from 'fast-check';
 import { InputError } from '../../../shared-core/core/errors';
 import { LIMITS } from '../../../shared-core/core/limits';
@@ -217,7 +218,7 @@ describe('withdrawal limits and models', () => {
       target_temperature: 15,
     });
     expect(out.series!.map((s) => s.kind)).toEqual(['port-flows', 'withdrawal-outflow', 'withdrawal-outflow']);
-    expect(out.model?.kind === 'withdrawal-zones' && out.model.zones.map((z) => z.label)).toEqual([
+    expect(out.model?.kind === 'withdrawal-zones' && out.model.zones.map((z) => sentenceIn(z.label, 'si'))).toEqual([
       'port at 3 m',
       'port at 30 m',
     ]);
