@@ -31,7 +31,7 @@ export class Workspace {
   conditionChoice = $state<string | null>(null);
   /** the estimate whose detail is open */
   detailId = $state<string | null>(null);
-  private noticeGiven = $state<Notice | null>(null);
+  private noticeGiven = $state.raw<Notice | null>(null);
   /** the status line's message; an error clears once an edit, undo or redo has changed the document since */
   notice = $derived(
     this.noticeGiven && (this.noticeGiven.tone === 'info' || this.noticeGiven.site === this.doc.site)
