@@ -80,12 +80,17 @@ describe('calc package from the workspace (browser shell)', () => {
     await panel().getByLabel('PDF calculation sheet').setChecked(true);
     await panel().getByLabel('CSV tables').setChecked(true);
     await panel().getByRole('radio', { name: /^SI/ }).check();
+    let requests = 0;
+    page.on('request', (r) => void (r.url().includes('/api/report.export') && requests++));
     const write = panel().getByRole('button', { name: 'Write the package' });
     await write.click();
 
     // while the worker runs: progress with elapsed time, no second start, and the workspace still answers
     await panel().getByRole('progressbar').waitFor();
-    await expect.poll(() => panel().getByRole('button', { name: 'Writing…' }).isDisabled()).toBe(true);
+    const writing = panel().getByRole('button', { name: 'Writing…' });
+    expect(await writing.getAttribute('aria-disabled')).toBe('true');
+    // a second click while running (past Playwright's wait for an enabled button): no second request or folder
+    await writing.click({ force: true });
     await page.getByRole('button', { name: 'Exporting…' }).waitFor();
     await page.getByRole('radio', { name: 'Early winter' }).check();
     await expect.poll(() => page.locator('#section-title').textContent()).toContain('Early winter');
@@ -93,6 +98,7 @@ describe('calc package from the workspace (browser shell)', () => {
 
     const outDir = await finished();
     expect(reportFolders()).toHaveLength(1);
+    expect(requests).toBe(1);
     const rel = relative(session.folders.workspace, outDir);
     expect(isAbsolute(rel) || rel.startsWith('..')).toBe(false);
     expect(rel).toMatch(/^reports[\\/]/);
@@ -142,7 +148,7 @@ describe('calc package from the workspace (browser shell)', () => {
     expectIn(text, '°F');
   }, 150_000);
 
-  it('says in words why nothing was written when the shell does not answer, and can be tried again', async () => {
+  it('says in words why nothing was written when the shell does not answer, and closes with Escape', async () => {
     await session.shell.stop();
     await panel().getByRole('button', { name: 'Write the package' }).click();
     const error = panel().getByTestId('export-error');
@@ -150,5 +156,11 @@ describe('calc package from the workspace (browser shell)', () => {
     expect(await error.textContent()).toMatch(/^The package was not written: the gprime shell did not answer/);
     expect(await panel().getByRole('button', { name: 'Write the package' }).isEnabled()).toBe(true);
     expect(reportFolders()).toHaveLength(2);
+    // Escape closes the panel and gives the focus back to the button that opened it
+    await page.keyboard.press('Escape');
+    await expect.poll(() => panel().count()).toBe(0);
+    await expect
+      .poll(() => page.getByRole('button', { name: 'Export…' }).evaluate((b) => b === b.ownerDocument.activeElement))
+      .toBe(true);
   }, 150_000);
 });
