@@ -6,27 +6,38 @@ import type { CalcMethod } from '../../shared-core/calc/types';
 import { InputError } from '../../shared-core/core/errors';
 import { describeRange } from '../../shared-core/core/range';
 import { parseProfileCsv } from '../../shared-core/profile/csv';
+import { ProfileError } from '../../shared-core/profile/profile';
 import { bandsFromTyped, type UncertaintyResult } from '../../shared-core/uncertainty';
 import { describeMethods, formatCalcText, formatUncertaintyText } from './format';
 import { calcPairs, uncertaintyFlags } from './calc-args';
 import { UsageError, type CommandResult } from './errors';
 import { takeUnits, withSentencesIn } from './shown';
 
-/** Reads a CSV profile from disk for a 'profile' parameter. */
+/** Why a file cannot be read, in words (the system's code only when it is not a common one). */
+const READ_FAILURE: Record<string, string> = {
+  ENOENT: 'there is no such file',
+  EACCES: 'permission to read it is denied',
+  EPERM: 'permission to read it is denied',
+  EISDIR: 'it is a folder, not a file',
+  ENOTDIR: 'a folder on its path is a file',
+};
+
+/** Reads a CSV profile from disk for a 'profile' parameter; a refusal names the parameter and the file. */
 export function loadProfileFile(field: string, path: string) {
   let text: string;
   try {
     text = readFileSync(resolve(path), 'utf8');
   } catch (e) {
-    throw new InputError(
-      field,
-      path,
-      '',
-      'a readable CSV file',
-      `cannot read "${path}": ${(e as NodeJS.ErrnoException).code ?? String(e)}`,
-    );
+    const code = (e as NodeJS.ErrnoException).code;
+    const why = (code && READ_FAILURE[code]) ?? `it cannot be read (${code ?? (e as Error).message})`;
+    throw new InputError(field, path, '', 'a readable CSV file', `cannot read "${path}": ${why}`);
   }
-  return parseProfileCsv(text);
+  try {
+    return parseProfileCsv(text);
+  } catch (e) {
+    if (!(e instanceof ProfileError)) throw e;
+    throw new InputError(field, path, '', 'a profile CSV file', `the profile cannot be read: ${e.message}`);
+  }
 }
 
 /**

@@ -105,3 +105,19 @@ describe('gprime assess --out refuses places it cannot write, before computing',
     refused(['assess', site, '--units', 'si', '--units', 'us'], '--units is given twice');
   });
 });
+
+describe('gprime calc names the profile parameter and file it cannot use', () => {
+  it('a missing file and an unreadable profile: the parameter, the file and the reason in words', () => {
+    refused(
+      ['calc', 'profile-summary', `file=${join(dir, 'none.csv')}`],
+      /^gprime: file = ".*none\.csv" is not allowed: cannot read ".*": there is no such file/,
+    );
+    const bad = join(dir, 'bad.csv');
+    writeFileSync(bad, 'height,colour\n0,1\n1,2\n');
+    const r = refused(
+      ['calc', 'profile-summary', `file=${bad}`],
+      'the profile cannot be read: the header: no temperature column',
+    );
+    expect(r.stderr).not.toMatch(/ProfileError|\(header\)|ENOENT/);
+  });
+});
