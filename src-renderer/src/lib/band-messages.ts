@@ -7,7 +7,10 @@ export interface BandRequest {
   index: number;
 }
 
-/** Band worker → main thread: the band, or the reason it cannot be computed (an InputError names the field). */
+/**
+ * Band worker → main thread: the band, or the reason it cannot be computed (an InputError names the field). `error`
+ * and the band's warnings are shared-core text: show them through `shownText` (lib/messages.ts).
+ */
 export type BandReply =
   | { seq: number; ok: true; uncertainty: UncertaintyResult }
   | { seq: number; ok: false; error: string }
