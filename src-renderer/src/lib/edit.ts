@@ -1,4 +1,5 @@
 import type { Feature, QuantityInput, Site } from '../../../shared-core/site/schema';
+import type { FieldUse } from './field-ranges';
 
 /** Sets a property, removing it when the value is undefined (an emptied optional field). */
 export function assign<T extends object, K extends keyof T>(obj: T, key: K, value: T[K] | undefined): void {
@@ -20,6 +21,8 @@ export interface QuantitySpec<U> {
   unit: string;
   optional?: boolean;
   help?: string;
+  /** the calc parameters the field supplies (their ranges are checked at the field) */
+  uses?: readonly FieldUse[];
   get: (item: U) => QuantityInput | undefined;
   set: (item: U, v: QuantityInput | undefined) => void;
 }

@@ -1,5 +1,6 @@
 import { parseQuantity, displayUnit, fromDisplay, type UnitSystem } from '../../../shared-core/units/units';
 import { InputError } from '../../../shared-core/core/errors';
+import { readNumberCell } from '../../../shared-core/units/number';
 import type { QuantityInput } from '../../../shared-core/site/schema';
 import { formatNumber, safeDisplay } from './format';
 
@@ -38,14 +39,23 @@ export function fieldText(value: QuantityInput | undefined, siUnit: string, syst
 
 /**
  * What to store for typed text. A bare number means the unit shown beside the field: stored as a
- * number in SI when that is SI, otherwise as the text with the unit ("30 ft"). Text with a unit is kept as typed.
+ * number in SI when that is SI, otherwise as the text with the unit ("30 ft"). Text with a unit is kept as
+ * typed. The number is read by the one shared parser: under a US unit "1,500" is fifteen hundred; under an
+ * SI unit an ambiguous "1,500" is kept as typed, and reading it names both readings.
  */
 export function storedValue(text: string, siUnit: string, system: UnitSystem): QuantityInput | undefined {
   const t = text.trim();
   if (t === '') return undefined;
   if (!BARE_NUMBER.test(t)) return t.slice(0, 64);
-  const n = Number(t.replace(',', '.'));
   const unit = displayUnit(siUnit, system);
+  let n: number | undefined;
+  try {
+    n = readNumberCell(unit, t, unit === siUnit ? 'either' : 'point');
+  } catch (e) {
+    if (e instanceof InputError) return t;
+    throw e;
+  }
+  if (n === undefined) return t;
   if (unit === siUnit) return n;
   try {
     fromDisplay(n, siUnit, system);

@@ -1,4 +1,5 @@
 import { serialiseSite, siteSchema, type Site } from '../../../shared-core/site';
+import { placeName } from '../../../shared-core/site/words';
 import { blankSite } from '../lib/templates';
 
 const HISTORY_LIMIT = 200;
@@ -8,6 +9,18 @@ function canonicalText(site: Site): string {
   const r = siteSchema.safeParse(site);
   return serialiseSite(r.success ? r.data : site);
 }
+/** A zod issue path as a site-file path ("features[2].portDepth"), the form placeName reads. */
+const pathOf = (path: readonly PropertyKey[]) =>
+  path.reduce<string>((a, k) => (typeof k === 'number' ? `${a}[${k}]` : a ? `${a}.${String(k)}` : String(k)), '');
+
+/** Text typed into a field that the document does not hold (unreadable or out of range), kept until fixed. */
+export interface FieldDraft {
+  /** the field as labelled on screen */
+  label: string;
+  text: string;
+  reason: string;
+}
+
 /** Edits of the same field within this time form one undo step (typing a word is one step). */
 const COALESCE_MS = 1200;
 
@@ -29,11 +42,37 @@ export class SiteDocument {
   dirty = $derived(this.text !== this.savedText);
   canUndo = $derived(this.past.length > 0);
   canRedo = $derived(this.future.length > 0);
-  /** schema problems that would make the saved file unreadable (named by place) */
+  /**
+   * Typed text the document does not hold, by field key: an unreadable or out-of-range value is removed
+   * from the document (so it is never used or saved stale) and its text kept here until the field is fixed.
+   */
+  drafts = $state.raw<Record<string, FieldDraft>>({});
+  /**
+   * What stops a save, in words: fields holding text the document could not take, then schema problems
+   * (an emptied required field …) named as the editors name the field
+   */
   problems = $derived.by(() => {
+    const typed = Object.values(this.drafts).map((d) => `${d.label} holds “${d.text}”, which is not kept: ${d.reason}`);
     const r = siteSchema.safeParse(this.site);
-    return r.success ? [] : r.error.issues.map((i) => `${i.path.join('.')}: ${i.message}`);
+    const schema = r.success
+      ? []
+      : r.error.issues.map((i) => {
+          const place = placeName(pathOf(i.path), this.site);
+          return i.code === 'invalid_type' && /received undefined/.test(i.message)
+            ? `${place} is empty; a value is needed`
+            : `${place}: ${i.message}`;
+        });
+    return [...typed, ...schema];
   });
+
+  /** Keeps (or, with null, drops) the typed text of a field the document does not hold. */
+  setDraft(key: string, draft: FieldDraft | null): void {
+    if (!draft && !(key in this.drafts)) return;
+    const next = { ...this.drafts };
+    if (draft) next[key] = draft;
+    else delete next[key];
+    this.drafts = next;
+  }
 
   /** Applies an edit to a copy of the site. `key` groups fast repeated edits of one field into one undo step. */
   change(edit: (draft: Site) => void, key = ''): void {
@@ -50,6 +89,7 @@ export class SiteDocument {
 
   undo(): void {
     if (!this.past.length) return;
+    this.drafts = {};
     this.future = [this.site, ...this.future];
     this.site = this.past[this.past.length - 1];
     this.past = this.past.slice(0, -1);
@@ -58,6 +98,7 @@ export class SiteDocument {
 
   redo(): void {
     if (!this.future.length) return;
+    this.drafts = {};
     this.past = [...this.past, this.site];
     this.site = this.future[0];
     this.future = this.future.slice(1);
@@ -72,6 +113,7 @@ export class SiteDocument {
     this.past = [];
     this.future = [];
     this.lastKey = '';
+    this.drafts = {};
   }
 
   markSaved(path: string): void {
