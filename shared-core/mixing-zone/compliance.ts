@@ -1,3 +1,4 @@
+import { qty } from '../core/quantity-text';
 import { InputError } from '../core/errors';
 import { requireInRange, nonNegative } from '../core/range';
 import { SCREENING_CAUTION } from '../core/caution';
@@ -93,7 +94,7 @@ export function complianceTable(
         rows.push({
           ...base,
           verdict: 'does not meet',
-          note: `the ambient (${ambient} ${c.unit}) already fails the criterion (${c.criterion} ${c.unit})`,
+          note: `the ambient (${qty(ambient, c.unit, 4)}) already fails the criterion (${qty(c.criterion, c.unit, 4)})`,
         });
         continue;
       }
