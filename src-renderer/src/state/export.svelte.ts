@@ -65,7 +65,7 @@ export class PackageExport {
     else this.open();
   }
 
-  /** Writes the package; a call while one is running does nothing (it returns the running one's end). */
+  /** Writes the package of the document as it is now; a call while an export is running does nothing. */
   async run(): Promise<void> {
     if (this.running) return;
     this.error = null;
