@@ -265,7 +265,11 @@ const US_DISPLAY: Record<string, string> = {
   'kg/m3': 'lb/ft3',
   m2: 'ft2',
   m3: 'ft3',
+  'm^(2/3)/s': 'ft^(2/3)/s',
 };
+
+/** Display units that mathjs cannot read (fractional powers): the factor from SI, 1 ft = 0.3048 m exactly. */
+const US_FACTOR: Record<string, number> = { 'm^(2/3)/s': 0.3048 ** (-2 / 3) };
 
 /** The unit a value in siUnit is displayed in under the given system. */
 export function displayUnit(siUnit: string, system: UnitSystem): string {
@@ -276,6 +280,7 @@ export function displayUnit(siUnit: string, system: UnitSystem): string {
 export function toDisplay(value: number, siUnit: string, system: UnitSystem): { value: number; unit: string } {
   const unit = displayUnit(siUnit, system);
   if (unit === siUnit) return { value, unit };
+  if (US_FACTOR[siUnit]) return { value: value * US_FACTOR[siUnit], unit };
   return {
     value: math()
       .unit(value, MATHJS_NAME[siUnit] ?? siUnit)
@@ -287,5 +292,6 @@ export function toDisplay(value: number, siUnit: string, system: UnitSystem): { 
 /** Converts a value in the display unit of the system back to SI (inverse of toDisplay). */
 export function fromDisplay(value: number, siUnit: string, system: UnitSystem): number {
   const unit = displayUnit(siUnit, system);
+  if (unit !== siUnit && US_FACTOR[siUnit]) return value / US_FACTOR[siUnit];
   return unit === siUnit ? value : convertToSi('value', value, unit, siUnit);
 }

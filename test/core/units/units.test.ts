@@ -128,3 +128,14 @@ describe('quantities with units (NIST SP 811, Appendix B)', () => {
     );
   });
 });
+
+describe('display of a unit with a fractional power', () => {
+  it('shows the 4/3-law coefficient in ft^(2/3)/s under US display and reads it back', () => {
+    // 1 ft = 0.3048 m exactly (NIST SP 811, 2008, Appendix B.8), so 1 m^(2/3)/s = 0.3048^(-2/3) ft^(2/3)/s
+    const us = toDisplay(4.64e-4, 'm^(2/3)/s', 'us');
+    expect(us.unit).toBe('ft^(2/3)/s');
+    expect(us.value).toBeCloseTo(4.64e-4 / 0.3048 ** (2 / 3), 15);
+    expect(fromDisplay(us.value, 'm^(2/3)/s', 'us')).toBeCloseTo(4.64e-4, 15);
+    expect(toDisplay(4.64e-4, 'm^(2/3)/s', 'si')).toEqual({ value: 4.64e-4, unit: 'm^(2/3)/s' });
+  });
+});
