@@ -38,7 +38,8 @@ export interface SimilarityCoefficient {
  * @returns η_N [1] @source Huppert (1982) §2–3.
  */
 export function viscousFrontCoefficientHuppert1982(alpha: number, geometry: SpreadingGeometry): SimilarityCoefficient {
-  const a = requireInRange('alpha', alpha, '1', { min: 0, max: 3 });
+  // the validity range is the hard range: the similarity ODE has no meaning beyond it
+  const a = requireInRange('alpha', alpha, '1', HUPPERT_1982.validity.alpha);
   const j = geometry === 'planar' ? 0 : 1;
   const beta = j === 0 ? (3 * a + 1) / 5 : (3 * a + 1) / 8;
   const gamma = j === 0 ? a - beta : a - 2 * beta;

@@ -1,6 +1,6 @@
 import { nonNegative, positive, requireInRange } from '../core/range';
-import { outsideValidity, type Warning } from '../core/warning';
-import { scalar, type MethodInfo, type Scalar } from '../core/method';
+import type { Warning } from '../core/warning';
+import { scalar, validityWarnings, type MethodInfo, type Scalar } from '../core/method';
 
 export const PLUNGE_AKIYAMA_STEFAN_1984: MethodInfo = {
   id: 'plunge-depth-akiyama-stefan1984',
@@ -86,15 +86,9 @@ export function mixAtPlunge(
   const phi = requireInRange('initial_mixing', mixing, '1', { ...nonNegative, max: 5 });
   const values: Record<string, number> = {};
   for (const [k, v] of Object.entries(inflow)) values[k] = (v + phi * (surface[k] ?? v)) / (1 + phi);
-  const warnings =
-    phi > 0.5
-      ? [
-          outsideValidity(
-            'validity-range',
-            `initial_mixing = ${phi} is above the reported range 0 … 0.5 of ${PLUNGE_INITIAL_MIXING.title}.`,
-            'initial_mixing',
-          ),
-        ]
-      : [];
-  return { discharge: q * (1 + phi), values, warnings };
+  return {
+    discharge: q * (1 + phi),
+    values,
+    warnings: validityWarnings(PLUNGE_INITIAL_MIXING, { initial_mixing: phi }),
+  };
 }

@@ -1,7 +1,7 @@
 import { InputError } from '../core/errors';
-import { caution, note, outsideValidity, type Warning } from '../core/warning';
+import { caution, note, type Warning } from '../core/warning';
 import { nonNegative, positive, requireInRange } from '../core/range';
-import type { MethodInfo } from '../core/method';
+import { validityWarnings, type MethodInfo } from '../core/method';
 import { GRAVITY } from '../quantities';
 import { solveOde, type OdeStatus } from '../numerics/ode';
 import { brentRoot } from '../numerics/roots';
@@ -109,15 +109,7 @@ export function underflowEllisonTurner1959(p: Profile, input: UnderflowInput): U
   const sin = s / Math.sqrt(1 + s * s);
   const ri = normalRichardson(s, cd, law),
     e = entrainment(law, ri);
-  const warnings: Warning[] = [];
-  if (s < 0.001 || s > 0.2)
-    warnings.push(
-      outsideValidity(
-        'validity-range',
-        `bed_slope = ${s} is outside 0.001 … 0.2 of ${UNDERFLOW_NORMAL_STATE.title}; the result is an extrapolation.`,
-        'bed_slope',
-      ),
-    );
+  const warnings: Warning[] = validityWarnings(UNDERFLOW_NORMAL_STATE, { bed_slope: s, drag_coefficient: cd });
   if (e === 0)
     warnings.push(
       note(

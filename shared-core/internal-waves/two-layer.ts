@@ -1,6 +1,7 @@
 import { GRAVITY } from '../quantities';
 import { positive, requireInRange } from '../core/range';
-import { scalar, type MethodInfo, type Scalar } from '../core/method';
+import { scalar, validityWarnings, type MethodInfo, type Scalar } from '../core/method';
+import { qty } from '../core/quantity-text';
 import { caution, outsideValidity, type Warning } from '../core/warning';
 
 /**
@@ -272,18 +273,11 @@ export function solitaryWaveKdv(state: TwoLayer, amplitude: number): SolitaryWav
     warnings.push(
       outsideValidity(
         'amplitude-over-limit',
-        `The amplitude ${a.toPrecision(3)} m exceeds the limiting amplitude |h2 − h1|/2 = ${limit.toPrecision(3)} m: no solitary wave of this size exists; expect a broad, flat-crested wave or a bore.`,
+        `The amplitude ${qty(a, 'm', 3)} exceeds the limiting amplitude |h2 − h1|/2 = ${qty(limit, 'm', 3)}: no solitary wave of this size exists; expect a broad, flat-crested wave or a bore.`,
         'amplitude',
       ),
     );
-  else if (a > 0.5 * limit)
-    warnings.push(
-      caution(
-        'large-amplitude',
-        `The amplitude is more than half the limiting amplitude (${limit.toPrecision(3)} m): first-order KdV overestimates the speed of such large waves.`,
-        'amplitude',
-      ),
-    );
+  else if (limit > 0) warnings.push(...validityWarnings(SOLITARY_WAVE_KDV, { relative_amplitude: a / limit }));
   const celerity = c0 + (Math.abs(alpha) * a) / 3;
   const beta = (c0 * h1 * h2) / 6;
   const halfWidth = a > 0 && !equal ? Math.sqrt((12 * beta) / (Math.abs(alpha) * a)) : Infinity;
