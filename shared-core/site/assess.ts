@@ -12,6 +12,7 @@ import { makeContext, ProfileCache, type EstimateContext } from './context';
 import type { Estimate, Site } from './schema';
 import { complianceEstimates, farFieldEstimates, siteCompliance, withRequiredDilution } from './compliance';
 import { assessConditions, type ConditionOutcome } from './conditions';
+import { siteGeometryChecks } from './checks';
 import { bandsFromTyped, MONTE_CARLO_JCGM101, type UncertaintyResult } from '../uncertainty';
 
 /** Where an input of an estimate came from. */
@@ -99,6 +100,8 @@ export interface Assessment {
   caution: string;
   /** how each condition's profile reads */
   conditions: ConditionOutcome[];
+  /** checks of the site as a whole (a port below the bed or above the surface, a profile below the bed) */
+  checks: Warning[];
   estimates: EstimateOutcome[];
   /** mixing-zone compliance per outfall, condition and constituent */
   compliance: ComplianceRow[];
@@ -259,6 +262,7 @@ export function assessSite(
   const computed = [...first, ...far];
   const compliance = siteCompliance(site, computed);
   const estimates = computed.map((o) => withRequiredDilution(o, compliance));
+  const conditions = assessConditions(site, cache);
   return {
     format: 'gprime-assessment',
     project: site.project,
@@ -267,7 +271,11 @@ export function assessSite(
     siteHash: meta.siteHash,
     units: site.units,
     caution: SCREENING_CAUTION,
-    conditions: assessConditions(site, cache),
+    conditions,
+    checks: siteGeometryChecks(
+      site,
+      conditions.map((c) => c.deepest),
+    ),
     estimates,
     compliance,
   };

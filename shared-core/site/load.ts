@@ -1,5 +1,6 @@
 import { SITE_FORMAT, SITE_VERSION, siteSchema, type Site } from './schema';
 import { migrations } from './migrations';
+import { duplicateIds } from './checks';
 
 /** A site file that cannot be opened; names the place in the document and never modifies the file. */
 export class SiteFileError extends Error {
@@ -58,6 +59,16 @@ export function loadSite(input: string | unknown): Site {
     throw new SiteFileError(
       placeOf(parsed.error.issues[0].path),
       `${issues.length > 1 ? `${parsed.error.issues.length} problems — ` : ''}${issues.join('; ')}`,
+    );
+  }
+  // estimates name their feature and condition by id: an id used twice would make them ambiguous
+  const twice = duplicateIds(parsed.data);
+  if (twice.length) {
+    const d = twice[0];
+    const more = twice.length > 1 ? ` (and ${twice.length - 1} more repeated id${twice.length > 2 ? 's' : ''})` : '';
+    throw new SiteFileError(
+      d.place,
+      `the id "${d.id}" is already used at ${d.first}; ids must differ within ${d.group}${more}`,
     );
   }
   return parsed.data;

@@ -17,6 +17,7 @@ export function emptyAssessment(site: Site): Assessment {
     units: site.units,
     caution: SCREENING_CAUTION,
     conditions: [],
+    checks: [],
     estimates: [],
     compliance: [],
   };
