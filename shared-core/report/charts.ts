@@ -1,5 +1,6 @@
 import { depthInX, type Series, type SeriesAxis } from '../calc/types';
 import { displayUnit, toDisplay, type UnitSystem } from '../units/units';
+import { sentenceIn } from '../units/sentence';
 import { prettyUnit, slug } from './format';
 
 /**
@@ -86,11 +87,11 @@ export function chartSpecs(series: readonly Series[], units: UnitSystem, prefix:
       const across = { label: groupLabel(s, group), unit: yUnit };
       const h = swap ? across : along;
       const v = swap ? along : across;
-      const title = groups.length > 1 ? `${s.title}: ${across.label}` : s.title;
+      const title = sentenceIn(groups.length > 1 ? `${s.title}: ${across.label}` : s.title, units);
       out.push({
         id: `${prefix}-${si + 1}${groups.length > 1 ? String.fromCharCode(97 + gi) : ''}-${slug(title, 40)}`,
         title,
-        caption: s.caption ?? `${across.label} against ${s.x.label.toLowerCase()}`,
+        caption: sentenceIn(s.caption ?? `${across.label} against ${s.x.label.toLowerCase()}`, units),
         x: { ...h, title: axisTitle(h.label, h.unit), reverse: false },
         y: { ...v, title: axisTitle(v.label, v.unit), reverse: !!s.depthAxis },
         datasets: group.map((g, k) => ({

@@ -20,3 +20,16 @@ export function slug(text: string, max = 60): string {
 export function readableName(name: string): string {
   return name.replace(/_/g, ' ');
 }
+
+/**
+ * The one significant-figure rule of the report: four figures, enough to recompute a product or quotient of
+ * printed values to about 0.1 %; densities six, so that a density difference (and g′ from it) can be recomputed
+ * from the printed densities: 0.01 kg/m³ or finer (0.0001 lb/ft³ ≈ 0.0016 kg/m³ in the US edition).
+ */
+export function figuresFor(unit: string): number {
+  return unit === 'kg/m3' || unit === 'lb/ft3' ? 6 : 4;
+}
+
+/** The rule in words, for the cautions. */
+export const FIGURES_RULE =
+  'Values are rounded to four significant figures and densities to six (0.01 kg/m³ or finer), so that each derived value can be recomputed from the printed ones to within 0.5 %';

@@ -5,3 +5,4 @@ export { METHOD_CATALOGUE, methodsForSource } from './methods';
 export * from './compliance';
 export * from './verification';
 export * from './inputs';
+export * from './document';

@@ -6,6 +6,7 @@ import * as water4 from '../water/sediment';
 import * as water5 from '../water/transport';
 import * as water6 from '../water/buoyancy';
 import * as water7 from '../water/salinity';
+import * as water8 from '../water/brine';
 import * as profile from '../profile/stratification';
 import * as gravity1 from '../gravity-currents/front-speed';
 import * as gravity2 from '../gravity-currents/viscous';
@@ -55,6 +56,7 @@ const MODULES: readonly Record<string, unknown>[] = [
   water5,
   water6,
   water7,
+  water8,
   profile,
   gravity1,
   gravity2,

@@ -1,11 +1,22 @@
 import type { Assessment, EstimateOutcome } from '../site/assess';
 import { VERDICT_RULE } from '../site/compliance';
-import { complianceTable, derivation, verdictLines, type ComplianceTable, type VerdictLine } from './compliance';
+import {
+  complianceColumns,
+  complianceTable,
+  derivation,
+  verdictLines,
+  type ComplianceTable,
+  type Derivation,
+  type VerdictLine,
+} from './compliance';
 import { keyResultName, type ResultValue } from '../calc/types';
 import { findCalcMethod } from '../calc/registry';
 import { toDisplay, type UnitSystem } from '../units/units';
 import { chartSpecs, type ChartSpec } from './charts';
-import { formatValue, prettyUnit, readableName } from './format';
+import { figuresFor, FIGURES_RULE, formatValue, prettyUnit, readableName } from './format';
+import { documentControl, type DocumentControl } from './document';
+import { sentenceIn } from '../units/sentence';
+import { nameText } from '../core/vocabulary';
 import { methodsForSource } from './methods';
 import { verificationEntries, type VerificationEntry } from './verification';
 import { siteInputs, type InputLine } from './inputs';
@@ -17,6 +28,9 @@ import type { Site } from '../site/schema';
  */
 
 export interface QuantityRow {
+  /** the method's parameter or result name ("g_prime") */
+  key: string;
+  /** the name in words, from the vocabulary ("Reduced gravity g′") */
   name: string;
   description: string;
   /** number in the display unit, or text */
@@ -34,6 +48,8 @@ export interface MethodText {
   title?: string;
   equation?: string;
   source: string;
+  /** number of the source in the reference list */
+  reference: number;
 }
 
 export interface EstimateSection {
@@ -63,7 +79,15 @@ export interface UncertaintySection {
   caption: string;
   coverage: number;
   /** each varied input: nominal value and its standard uncertainty */
-  inputs: { name: string; nominal: string; standardUncertainty: string; unit: string }[];
+  inputs: {
+    name: string;
+    nominal: string;
+    standardUncertainty: string;
+    unit: string;
+    /** the same in display units, as numbers (null when the nominal is not a number) */
+    nominalValue: number | null;
+    standardUncertaintyValue: number;
+  }[];
   /** per numeric result: nominal, low, median and high, typeset, with the numbers in display units */
   rows: {
     name: string;
@@ -93,6 +117,8 @@ export interface ReportModel {
     title: string;
     where: string;
     keyResult: string;
+    /** the key result as a quantity row, when there is one */
+    key?: QuantityRow;
     warnings: number;
     status: 'ok' | 'incomplete' | 'error';
   }[];
@@ -100,8 +126,10 @@ export interface ReportModel {
   compliance: ComplianceTable | null;
   /** per limit, the verdict under its governing condition (page 1) */
   verdicts: VerdictLine[];
+  /** headers of the typeset compliance table */
+  complianceColumns: string[];
   /** per compliance row: how the verdict was reached, with the warnings of the runs behind it */
-  complianceDerivations: string[];
+  complianceDerivations: Derivation[];
   /** the rule every verdict follows, in words */
   verdictRule: string;
   /** every quantity of the site document as entered, in SI and in display units (empty without the site) */
@@ -111,30 +139,37 @@ export interface ReportModel {
   /** every cited source, once, in order of first citation */
   references: string[];
   cautions: string[];
+  documentControl: DocumentControl;
+  /** which density unit the edition uses, in words */
+  densityNote: string;
   gprimeVersion: string;
   siteHash: string;
 }
 
-function quantity(name: string, description: string, v: ResultValue, units: UnitSystem): QuantityRow {
-  if (typeof v.value !== 'number')
-    return { name, description, value: v.value, unit: '', shown: v.value, shownUnit: '' };
+function quantity(key: string, name: string, description: string, v: ResultValue, units: UnitSystem): QuantityRow {
+  if (typeof v.value !== 'number') {
+    const text = sentenceIn(v.value, units);
+    return { key, name, description, value: text, unit: '', shown: text, shownUnit: '' };
+  }
   const d = toDisplay(v.value, v.unit, units);
   return {
+    key,
     name,
     description,
     value: d.value,
     unit: d.unit,
-    shown: formatValue(d.value),
+    shown: formatValue(d.value, figuresFor(d.unit)),
     shownUnit: prettyUnit(d.unit),
   };
 }
 
 function quantities(
   values: Record<string, ResultValue>,
-  describe: (name: string) => string,
+  label: (key: string) => string,
+  describe: (key: string) => string,
   units: UnitSystem,
 ): QuantityRow[] {
-  return Object.entries(values).map(([name, v]) => quantity(name, describe(name), v, units));
+  return Object.entries(values).map(([key, v]) => quantity(key, label(key), describe(key), v, units));
 }
 
 /** A spread (difference) in display units: an offset unit such as °F converts without its offset. */
@@ -154,9 +189,11 @@ function uncertaintySection(e: EstimateOutcome, units: UnitSystem): UncertaintyS
       const siUnit = nominal?.unit ?? '1';
       const d = typeof nominal?.value === 'number' ? toDisplay(nominal.value, siUnit, units) : undefined;
       return {
-        name: i.name,
-        nominal: d ? formatValue(d.value) : '',
+        name: nameText(i.name, e.method, 'input'),
+        nominal: d ? formatValue(d.value, figuresFor(d.unit)) : '',
         standardUncertainty: formatValue(spreadToDisplay(i.standardUncertainty, siUnit, units)),
+        nominalValue: d ? d.value : null,
+        standardUncertaintyValue: spreadToDisplay(i.standardUncertainty, siUnit, units),
         unit: prettyUnit(d?.unit ?? siUnit),
       };
     }),
@@ -167,22 +204,24 @@ function uncertaintySection(e: EstimateOutcome, units: UnitSystem): UncertaintyS
         number,
         number,
       ];
+      const unit = toDisplay(0, b.unit, units).unit;
       return {
-        name: b.name,
-        unit: prettyUnit(toDisplay(0, b.unit, units).unit),
-        shown: values.map((v) => formatValue(v)) as [string, string, string, string],
+        name: nameText(b.name, e.method, 'result'),
+        unit: prettyUnit(unit),
+        shown: values.map((v) => formatValue(v, figuresFor(unit))) as [string, string, string, string],
         values,
       };
     }),
-    warnings: r.warnings.map((w) => w.message),
+    warnings: r.warnings.map((w) => sentenceIn(w.message, units)),
   };
 }
 
-function methodTexts(sources: readonly string[]): MethodText[] {
+function methodTexts(sources: readonly string[], referenceOf: (source: string) => number): MethodText[] {
   return sources.flatMap((source): MethodText[] => {
+    const reference = referenceOf(source);
     const infos = methodsForSource(source);
-    if (infos.length === 0) return [{ source }];
-    return infos.map((m) => ({ title: m.title, equation: m.equation, source }));
+    if (infos.length === 0) return [{ source, reference }];
+    return infos.map((m) => ({ title: m.title, equation: m.equation, source, reference }));
   });
 }
 
@@ -197,7 +236,13 @@ function originText(e: EstimateOutcome, name: string): string {
     : `from the site${from ? `: ${from}` : ''}`;
 }
 
-function section(e: EstimateOutcome, number: string, units: UnitSystem): EstimateSection {
+function section(
+  e: EstimateOutcome,
+  number: string,
+  units: UnitSystem,
+  referenceOf: (source: string) => number,
+): EstimateSection {
+  const say = (t: string) => sentenceIn(t, units);
   const method = findCalcMethod(e.method);
   const paramText = (n: string) => method?.params.find((p) => p.name === n)?.description ?? readableName(n);
   const resultText = (n: string) => method?.results.find((r) => r.name === n)?.description ?? readableName(n);
@@ -210,11 +255,21 @@ function section(e: EstimateOutcome, number: string, units: UnitSystem): Estimat
     feature: e.feature?.name,
     condition: e.condition?.name,
     status: e.status,
-    error: e.error ?? e.incomplete,
-    inputs: quantities(e.inputs, (n) => `${paramText(n)} (${originText(e, n)})`, units),
-    results: quantities(e.results, resultText, units),
-    methods: methodTexts(e.sources),
-    warnings: e.warnings.map((w) => w.message),
+    error: e.error !== undefined || e.incomplete !== undefined ? say((e.error ?? e.incomplete)!) : undefined,
+    inputs: quantities(
+      e.inputs,
+      (n) => nameText(n, e.method, 'input'),
+      (n) => say(`${paramText(n)} (${originText(e, n)})`),
+      units,
+    ),
+    results: quantities(
+      e.results,
+      (n) => nameText(n, e.method, 'result'),
+      (n) => say(resultText(n)),
+      units,
+    ),
+    methods: methodTexts(e.sources, referenceOf),
+    warnings: e.warnings.map((w) => say(w.message)),
     charts: chartSpecs(e.series, units, e.id),
     ...(e.uncertainty ? { uncertainty: uncertaintySection(e, units) } : {}),
   };
@@ -224,16 +279,23 @@ function keyResult(s: EstimateSection, results: Record<string, ResultValue>): st
   if (s.status === 'error') return `not computed: ${s.error ?? 'error'}`;
   if (s.status === 'incomplete') return `incomplete: ${s.error ?? ''}`;
   const key = keyResultName(results);
-  const r = s.results.find((q) => q.name === key);
+  const r = s.results.find((q) => q.key === key);
   if (!r) return '';
   return `${r.name} = ${r.shown}${r.shownUnit ? ' ' + r.shownUnit : ''}`;
 }
 
 /** Builds the report model of an assessment in the given unit system. */
-export function buildReportModel(a: Assessment, units: UnitSystem, site?: Site): ReportModel {
-  const estimates = a.estimates.map((e, i) => section(e, String(i + 2), units));
-  const compliance = complianceTable(a.compliance);
+export function buildReportModel(
+  a: Assessment,
+  units: UnitSystem,
+  site?: Site,
+  options: { issueDate?: string } = {},
+): ReportModel {
   const references = [...new Set(a.estimates.flatMap((e) => e.sources))];
+  const referenceOf = (source: string) => references.indexOf(source) + 1;
+  const estimates = a.estimates.map((e, i) => section(e, String(i + 2), units, referenceOf));
+  const sectionOf = (id: string) => estimates.find((s) => s.id === id)?.number;
+  const compliance = complianceTable(a.compliance, units);
   let next = estimates.length + 2;
   const contents: ContentsEntry[] = [
     { number: '1', title: 'Summary of estimates', anchor: 'summary' },
@@ -245,46 +307,65 @@ export function buildReportModel(a: Assessment, units: UnitSystem, site?: Site):
     { number: String(next), title: 'Cautions', anchor: 'cautions' },
   ];
   const p = a.project;
-  const unitsLabel = units === 'us' ? 'US customary (ft, cfs, °F, lb/ft³)' : 'SI (m, m³/s, °C, kg/m³)';
+  const densityNote =
+    units === 'us'
+      ? 'This US edition gives densities in pounds per cubic foot (lb/ft³; 1 lb/ft³ = 16.01846 kg/m³), to six significant figures.'
+      : 'Densities are in kilograms per cubic metre (kg/m³), to six significant figures.';
+  const unitsLabel =
+    units === 'us'
+      ? 'US customary (ft, ft/s, cfs, ft²/s, °F); densities in lb/ft³'
+      : 'SI (m, m/s, m³/s, m²/s, °C); densities in kg/m³';
+  const control = documentControl(a, options.issueDate);
   return {
     title: p.name,
     subtitle: `Screening calculation sheet — ${a.waterBody}`,
     units,
     titleBlock: [
+      { label: 'Document number', value: control.number },
       { label: 'Project', value: p.name },
       { label: 'Site', value: p.site },
       { label: 'Water body', value: a.waterBody },
       { label: 'Prepared by', value: p.preparedBy || '—' },
       { label: 'Checked by', value: p.checkedBy || '—' },
-      { label: 'Date', value: p.date || '—' },
-      { label: 'Revision', value: p.revision || '—' },
+      { label: 'Revision', value: control.revision },
+      { label: 'Issue date', value: control.issueDate || 'not issued (draft for checking)' },
+      { label: 'Date of the site data', value: p.date || '—' },
       { label: 'gprime version', value: a.gprimeVersion },
       { label: 'Site file SHA-256', value: a.siteHash },
       { label: 'Display units', value: unitsLabel },
     ],
     contents,
-    summary: estimates.map((s, i) => ({
-      id: s.id,
-      title: s.title,
-      where: [s.feature, s.condition].filter(Boolean).join(' · '),
-      keyResult: keyResult(s, a.estimates[i].results),
-      warnings: s.warnings.length,
-      status: s.status,
-    })),
+    summary: estimates.map((s, i) => {
+      const key =
+        s.status === 'error' ? undefined : s.results.find((q) => q.key === keyResultName(a.estimates[i].results));
+      return {
+        id: s.id,
+        title: s.title,
+        where: [s.feature, s.condition].filter(Boolean).join(' · '),
+        keyResult: keyResult(s, a.estimates[i].results),
+        ...(key ? { key } : {}),
+        warnings: s.warnings.length,
+        status: s.status,
+      };
+    }),
     estimates,
     compliance,
     verdicts: verdictLines(a.compliance),
-    complianceDerivations: a.compliance.map((r) => derivation(r, a.estimates)),
+    complianceColumns: complianceColumns(units),
+    complianceDerivations: a.compliance.map((r) => derivation(r, a.estimates, units, sectionOf)),
     verdictRule: VERDICT_RULE,
-    verification: verificationEntries(references),
+    verification: verificationEntries(references, referenceOf),
     inputs: site ? siteInputs(site, units) : [],
     references,
     cautions: [
-      a.caution,
+      sentenceIn(a.caution, units),
       'Every result is computed with the published method named beside it; a warning marks an input outside the range the method was calibrated or validated for, where the result is an extrapolation.',
-      `Values are shown rounded to four significant figures in ${units === 'us' ? 'US customary' : 'SI'} units; the spreadsheet and CSV files hold them at full precision.`,
+      `${FIGURES_RULE}; they are shown in ${units === 'us' ? 'US customary' : 'SI'} units, and the spreadsheet and CSV files hold them at full precision.`,
+      densityNote,
       'The same site file (identified by its SHA-256 above) and gprime version give the same numbers and charts.',
     ],
+    documentControl: control,
+    densityNote,
     gprimeVersion: a.gprimeVersion,
     siteHash: a.siteHash,
   };

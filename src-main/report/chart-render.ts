@@ -10,6 +10,7 @@ import {
   type Plugin,
 } from 'chart.js';
 import { LINE_STYLES, type ChartSpec } from '../../shared-core/report/charts';
+import { formatValue } from '../../shared-core/report/format';
 import { fontPath, FONT_FAMILY } from './assets';
 
 /**
@@ -38,6 +39,8 @@ export interface ChartSize {
   dpi: number;
   /** draw the caption below the legend (standalone files); the PDF sets its caption as text instead */
   caption: boolean;
+  /** a line under the caption naming the document and site file (standalone files) */
+  stamp?: string;
 }
 
 export const DEFAULT_CHART_SIZE: ChartSize = { widthIn: 6.5, heightIn: 4.2, dpi: 300, caption: true };
@@ -56,8 +59,11 @@ interface LegendItem {
 interface BottomLayout {
   items: LegendItem[][];
   caption: string[];
+  stamp: string[];
   height: number;
 }
+
+const STAMP_FONT = 9;
 
 function wrapText(ctx: SKRSContext2D, text: string, width: number): string[] {
   const lines: string[] = [];
@@ -74,7 +80,13 @@ function wrapText(ctx: SKRSContext2D, text: string, width: number): string[] {
 }
 
 /** Lays out legend rows and caption lines for the space under the plot. */
-function bottomLayout(ctx: SKRSContext2D, spec: ChartSpec, width: number, caption: boolean): BottomLayout {
+function bottomLayout(
+  ctx: SKRSContext2D,
+  spec: ChartSpec,
+  width: number,
+  caption: boolean,
+  stamp: string | undefined,
+): BottomLayout {
   ctx.font = `${LEGEND_FONT}px "${FONT_FAMILY}"`;
   const rows: LegendItem[][] = [[]];
   let used = 0;
@@ -89,7 +101,18 @@ function bottomLayout(ctx: SKRSContext2D, spec: ChartSpec, width: number, captio
   }
   ctx.font = `${CAPTION_FONT}px "${FONT_FAMILY}"`;
   const lines = caption ? wrapText(ctx, spec.caption, width) : [];
-  return { items: rows, caption: lines, height: rows.length * 20 + (lines.length ? lines.length * 16 + 8 : 0) + 6 };
+  ctx.font = `${STAMP_FONT}px "${FONT_FAMILY}"`;
+  const stampLines = stamp ? wrapText(ctx, stamp, width) : [];
+  return {
+    items: rows,
+    caption: lines,
+    stamp: stampLines,
+    height:
+      rows.length * 20 +
+      (lines.length ? lines.length * 16 + 8 : 0) +
+      (stampLines.length ? stampLines.length * 12 + 4 : 0) +
+      6,
+  };
 }
 
 function drawMarker(ctx: SKRSContext2D, marker: string, x: number, y: number, r: number): void {
@@ -175,6 +198,13 @@ function bottomPlugin(layout: BottomLayout, width: number, height: number): Plug
         ctx.fillText(line, (width - ctx.measureText(line).width) / 2, y);
         y += 16;
       }
+      ctx.font = `${STAMP_FONT}px "${FONT_FAMILY}"`;
+      ctx.fillStyle = '#555555';
+      y += 4;
+      for (const line of layout.stamp) {
+        ctx.fillText(line, (width - ctx.measureText(line).width) / 2, y);
+        y += 12;
+      }
       ctx.restore();
     },
   };
@@ -191,7 +221,8 @@ function config(
     type: 'linear' as const,
     reverse: a.reverse,
     title: { display: true, text: a.title, font: { size: 13 } },
-    ticks: { font: { size: 11 }, maxTicksLimit: 8 },
+    // ticks in the report's number style (4.365×10⁻⁵, never 1.000000E-5)
+    ticks: { font: { size: 11 }, maxTicksLimit: 8, callback: (v: number | string) => formatValue(Number(v), 4) },
     grid: { color: '#dddddd' },
     border: { color: '#555555' },
   });
@@ -238,7 +269,7 @@ function draw(spec: ChartSpec, size: ChartSize, kind: 'png' | 'svg') {
   const width = Math.round(size.widthIn * PX_PER_IN);
   const height = Math.round(size.heightIn * PX_PER_IN);
   const canvas = kind === 'svg' ? createCanvas(width, height, SvgExportFlag.NoPrettyXML) : createCanvas(width, height);
-  const layout = bottomLayout(canvas.getContext('2d'), spec, width - 40, size.caption);
+  const layout = bottomLayout(canvas.getContext('2d'), spec, width - 40, size.caption, size.stamp);
   const dpr = kind === 'svg' ? 1 : size.dpi / PX_PER_IN;
   const chart = new Chart(
     canvas as unknown as ConstructorParameters<typeof Chart>[0],
@@ -286,7 +317,7 @@ export function renderChartSvg(spec: ChartSpec, size: ChartSize = DEFAULT_CHART_
   const { canvas, chart } = draw(spec, size, 'svg');
   try {
     const svg = (canvas as unknown as { getContent(): Buffer }).getContent().toString('utf8');
-    const meta = `<title>${xmlEscape(spec.title)}</title><desc>${xmlEscape(`${spec.caption}. Horizontal axis: ${spec.x.title}; vertical axis: ${spec.y.title}.`)}</desc>`;
+    const meta = `<title>${xmlEscape(spec.title)}</title><desc>${xmlEscape(`${spec.caption}. Horizontal axis: ${spec.x.title}; vertical axis: ${spec.y.title}.${size.stamp ? ` ${size.stamp}.` : ''}`)}</desc>`;
     // the canvas numbers clip paths with a process-wide counter: renumber them so the same chart gives the same file
     const ids = new Map<string, string>();
     const stable = svg.replace(/\bcl_[0-9a-z]+\b/g, (id) => {

@@ -87,9 +87,29 @@ export function textWidth(font: PDFFont, text: string, size: number): number {
   return width * size;
 }
 
+const NUMBER = /^[([]?[−+±~≈<>≤≥-]?[\d.,]*\d(?:×10[⁻⁰¹²³⁴⁵⁶⁷⁸⁹]+)?$/;
+const UNIT_LIKE = /^(?:[a-zA-Zµ°%‰][^\s]{0,7}|×|±|–|−)$/;
+
 /**
- * Splits text into lines no wider than `width`; words longer than a line are broken between characters. A line's
- * width is the sum of its words and spaces (no kerning across a space).
+ * The words of a paragraph, with a number and the short word after it (its unit: "15 ft", "1.2 %") kept as one
+ * unit, so that no value is broken across lines.
+ */
+function unbreakableWords(paragraph: string): string[] {
+  const words = paragraph.split(/ +/).filter(Boolean);
+  const out: string[] = [];
+  for (let i = 0; i < words.length; i++) {
+    const next = words[i + 1];
+    if (next !== undefined && NUMBER.test(words[i]) && UNIT_LIKE.test(next)) {
+      out.push(`${words[i]} ${next}`);
+      i++;
+    } else out.push(words[i]);
+  }
+  return out;
+}
+
+/**
+ * Splits text into lines no wider than `width`; a value stays with its unit; words longer than a line are broken
+ * between characters. A line's width is the sum of its words and spaces (no kerning across a space).
  */
 export function wrapText(text: string, font: PDFFont, size: number, width: number): string[] {
   const out: string[] = [];
@@ -120,7 +140,7 @@ export function wrapText(text: string, font: PDFFont, size: number, width: numbe
       }
       [line, lineWidth] = [piece, pieceWidth];
     };
-    for (const word of paragraph.split(/ +/).filter(Boolean)) push(word);
+    for (const word of unbreakableWords(paragraph)) push(word);
     out.push(line);
   }
   return out;
@@ -204,11 +224,13 @@ export class PdfWriter {
     }
   }
 
-  /** Reserves one line for text written later (table of contents). */
-  reserveLine(size: number): Reserved {
-    this.ensure(size * 1.5);
+  /** Reserves `lines` lines for text written later (table of contents); the returned y is of the first line. */
+  reserveLine(size: number, lines = 1): Reserved {
+    this.ensure(size * 1.5 * lines);
     this.y -= size * 1.5;
-    return { page: this.page, y: this.y };
+    const at = { page: this.page, y: this.y };
+    this.y -= size * 1.3 * (lines - 1);
+    return at;
   }
 
   table(columns: readonly TableColumn[], rows: readonly string[][], size = 8.5): void {

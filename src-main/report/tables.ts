@@ -4,7 +4,8 @@ import type { EstimateSection, QuantityRow, ReportModel } from '../../shared-cor
 
 /**
  * Tables of inputs and results: one CSV per estimate and one XLSX workbook with a sheet per estimate.
- * Numbers are written at full precision in the display units; units are in their own column.
+ * Numbers are written as numbers at full precision in the display units; units are in their own column or in
+ * the header; workbook cells are typed (numbers as numbers, text as text).
  */
 
 function csvCell(v: string | number | null): string {
@@ -19,6 +20,7 @@ export function toCsv(rows: readonly (readonly (string | number | null)[])[]): s
 
 const quantityLine = (section: string) => (q: QuantityRow) => [
   section,
+  q.key,
   q.name,
   q.description,
   q.value,
@@ -34,40 +36,51 @@ function uncertaintyLines(s: EstimateSection): (string | number)[][] {
   return [
     ...u.inputs.map((i) => [
       'input standard uncertainty',
+      '',
       i.name,
       `one standard deviation (nominal ${i.nominal})`,
-      i.standardUncertainty,
+      i.standardUncertaintyValue,
       i.unit,
     ]),
     ...u.rows.flatMap((r) => [
-      [`band low (${lo} %)`, r.name, u.caption, r.values[1], r.unit],
-      ['band median', r.name, u.caption, r.values[2], r.unit],
-      [`band high (${100 - lo} %)`, r.name, u.caption, r.values[3], r.unit],
+      [`band low (${lo} %)`, '', r.name, u.caption, r.values[1], r.unit],
+      ['band median', '', r.name, u.caption, r.values[2], r.unit],
+      [`band high (${100 - lo} %)`, '', r.name, u.caption, r.values[3], r.unit],
     ]),
-    ...u.warnings.map((w) => ['band warning', '', '', w, '']),
+    ...u.warnings.map((w) => ['band warning', '', '', '', w, '']),
   ];
 }
 
 /** The CSV of one estimate: a row per input and result, then warnings and sources. */
 export function estimateCsv(s: EstimateSection): string {
   return toCsv([
-    ['section', 'name', 'description', 'value', 'unit'],
+    ['section', 'name', 'label', 'description', 'value', 'unit'],
     ...s.inputs.map(quantityLine('input')),
     ...s.results.map(quantityLine('result')),
-    ...(s.error ? [['error', '', '', s.error, '']] : []),
-    ...s.warnings.map((w) => ['warning', '', '', w, '']),
+    ...(s.error ? [['error', '', '', '', s.error, '']] : []),
+    ...s.warnings.map((w) => ['warning', '', '', '', w, '']),
     ...uncertaintyLines(s),
-    ...s.methods.map((m) => ['source', m.title ?? '', m.equation ?? '', m.source, '']),
+    ...s.methods.map((m) => ['source', `[${m.reference}]`, m.title ?? '', m.equation ?? '', m.source, '']),
   ]);
 }
 
-/** The CSV of the report header: title block, caution and the summary of estimates. */
+/** The CSV of the report header: title block and caution, then the summary of estimates with numeric key results. */
 export function summaryCsv(model: ReportModel): string {
   return toCsv([
     ['field', 'value'],
     ...model.titleBlock.map((r) => [r.label, r.value]),
     ['Caution', model.cautions[0]],
-    ...model.summary.map((r) => [`estimate ${r.id}`, `${r.keyResult}; ${r.warnings} warning(s)`]),
+    [],
+    ['estimate', 'title', 'status', 'key result', 'value', 'unit', 'warnings'],
+    ...model.summary.map((r) => [
+      r.id,
+      r.title,
+      r.status,
+      r.key?.name ?? r.keyResult,
+      r.key?.value ?? null,
+      r.key?.shownUnit ?? '',
+      r.warnings,
+    ]),
   ]);
 }
 
@@ -76,7 +89,7 @@ export function chartCsv(c: ChartSpec): string {
 }
 
 export function complianceCsv(model: ReportModel): string | null {
-  return model.compliance ? toCsv([model.compliance.header, ...model.compliance.rows]) : null;
+  return model.compliance ? toCsv([model.compliance.header, ...model.compliance.values]) : null;
 }
 
 /** Excel sheet names: ≤ 31 characters, none of \ / ? * [ ] :, unique. */
@@ -93,9 +106,9 @@ function sheetNames(ids: readonly string[]): string[] {
 
 function addQuantities(ws: ExcelJS.Worksheet, title: string, rows: readonly QuantityRow[]): void {
   ws.addRow([title]).font = { bold: true };
-  const head = ws.addRow(['Name', 'Description', 'Value', 'Unit']);
+  const head = ws.addRow(['Name', 'Description', 'Value', 'Unit', 'Parameter']);
   head.font = { bold: true };
-  for (const q of rows) ws.addRow([q.name, q.description, q.value, q.shownUnit]);
+  for (const q of rows) ws.addRow([q.name, q.description, q.value, q.shownUnit, q.key]);
   ws.addRow([]);
 }
 
@@ -103,9 +116,17 @@ function addBands(ws: ExcelJS.Worksheet, s: EstimateSection): void {
   const u = s.uncertainty!;
   ws.addRow(['Uncertainty band', u.caption]).font = { bold: true };
   ws.addRow(['Input', 'Standard uncertainty (one s.d.)', 'Nominal', 'Unit']).font = { bold: true };
-  for (const i of u.inputs) ws.addRow([i.name, i.standardUncertainty, i.nominal, i.unit]);
-  ws.addRow(['Result', 'Nominal · low · median · high', '', 'Unit']).font = { bold: true };
-  for (const r of u.rows) ws.addRow([r.name, r.values.join(' · '), '', r.unit]);
+  for (const i of u.inputs) ws.addRow([i.name, i.standardUncertaintyValue, i.nominalValue, i.unit]);
+  const pc = Math.round(u.coverage * 100);
+  ws.addRow([
+    'Result',
+    'Nominal',
+    `Low (${(100 - pc) / 2} %)`,
+    'Unit',
+    'Median',
+    `High (${100 - (100 - pc) / 2} %)`,
+  ]).font = { bold: true };
+  for (const r of u.rows) ws.addRow([r.name, r.values[0], r.values[1], r.unit, r.values[2], r.values[3]]);
   for (const w of u.warnings) ws.addRow(['', w]);
   ws.addRow([]);
 }
@@ -129,8 +150,9 @@ export async function buildXlsx(model: ReportModel, projectDate: string): Promis
   caution.font = { bold: true };
   caution.alignment = { wrapText: true, vertical: 'top' };
   report.addRow([]);
-  report.addRow(['Estimate', 'Key result (warnings)']).font = { bold: true };
-  for (const r of model.summary) report.addRow([r.id, `${r.keyResult} (${r.warnings})`]);
+  report.addRow(['Estimate', 'Key result', 'Value', 'Unit', 'Warnings']).font = { bold: true };
+  for (const r of model.summary)
+    report.addRow([r.id, r.key?.name ?? r.keyResult, r.key?.value ?? null, r.key?.shownUnit ?? '', r.warnings]);
 
   const names = sheetNames(model.estimates.map((s) => s.id));
   model.estimates.forEach((s, i) => {
@@ -151,13 +173,14 @@ export async function buildXlsx(model: ReportModel, projectDate: string): Promis
     if (!s.warnings.length) ws.addRow(['', 'none']);
     ws.addRow([]);
     ws.addRow(['Sources']).font = { bold: true };
-    for (const m of s.methods) ws.addRow([m.title ?? '', m.source]);
+    for (const m of s.methods) ws.addRow([`[${m.reference}] ${m.title ?? ''}`.trim(), m.source]);
     ws.getColumn(2).alignment = { wrapText: true, vertical: 'top' };
   });
   if (model.compliance) {
     const ws = wb.addWorksheet('Compliance');
     ws.addRow(model.compliance.header).font = { bold: true };
-    for (const r of model.compliance.rows) ws.addRow(r);
+    for (const r of model.compliance.values) ws.addRow(r);
+    ws.columns.forEach((c) => (c.width = 16));
   }
   return Buffer.from(await wb.xlsx.writeBuffer());
 }

@@ -4,6 +4,7 @@ import { basename, dirname, extname, join } from 'node:path';
 import { assessSite, loadSite, type Assessment } from '../../shared-core/site';
 import { buildReportModel, type ReportModel } from '../../shared-core/report/model';
 import { slug } from '../../shared-core/report/format';
+import { isIssueDate } from '../../shared-core/report/document';
 import type { UnitSystem } from '../../shared-core/units/units';
 import { GPRIME_VERSION, type LoadedSite } from '../services/site-file';
 import { UsageError } from '../cli/errors';
@@ -25,6 +26,8 @@ export interface ReportOptions {
   units: UnitSystem;
   /** chart size and resolution (default 6.5 × 4.2 in at 300 dpi) */
   chart?: Partial<ChartSize>;
+  /** date of issue of the document (YYYY-MM-DD); without it the package is a draft for checking */
+  issueDate?: string;
 }
 
 /** One output file: path relative to the output folder and its bytes. */
@@ -56,14 +59,16 @@ export async function renderReport(
 ): Promise<ReportFile[]> {
   const files: ReportFile[] = [];
   const want = new Set(formats);
-  const size = { ...DEFAULT_CHART_SIZE, ...chart };
+  const control = model.documentControl;
+  const stamp = `${control.number} rev ${control.revision} · site file SHA-256 ${model.siteHash}`;
+  const size = { ...DEFAULT_CHART_SIZE, stamp, ...chart };
   const charts = model.estimates.flatMap((s) => s.charts);
   const pdfCharts = new Map<string, ChartPixels>();
   for (const c of charts) {
     if (want.has('png')) files.push({ path: `charts/${c.id}.png`, bytes: renderChartPng(c, size) });
     if (want.has('svg')) files.push({ path: `charts/${c.id}.svg`, bytes: renderChartSvg(c, size) });
     if (want.size) files.push({ path: `charts/${c.id}.csv`, bytes: chartCsv(c) });
-    if (want.has('pdf')) pdfCharts.set(c.id, renderChartRgb(c, { ...size, caption: false }));
+    if (want.has('pdf')) pdfCharts.set(c.id, renderChartRgb(c, { ...size, caption: false, stamp: undefined }));
   }
   if (want.has('pdf')) files.push({ path: `${stem}.pdf`, bytes: await buildPdf(model, pdfCharts, projectDate) });
   if (want.has('xlsx')) files.push({ path: `${stem}.xlsx`, bytes: await buildXlsx(model, projectDate) });
@@ -91,7 +96,9 @@ export async function writeReport(
   options: ReportOptions,
 ): Promise<string[]> {
   const formats = checkFormats(options.formats);
-  const model = buildReportModel(assessment, options.units, loaded.site);
+  if (options.issueDate !== undefined && !isIssueDate(options.issueDate))
+    throw new UsageError(`--issue-date: "${options.issueDate}" is not a calendar date YYYY-MM-DD`);
+  const model = buildReportModel(assessment, options.units, loaded.site, { issueDate: options.issueDate });
   const stem = slug(basename(loaded.path, extname(loaded.path)) || loaded.site.project.site);
   const files = await renderReport(model, formats, stem, loaded.site.project.date, options.chart);
   mkdirSync(options.outDir, { recursive: true });

@@ -5,6 +5,7 @@ import { join } from 'node:path';
 import Papa from 'papaparse';
 import { afterAll, describe, expect, it } from 'vitest';
 import { runGprime } from '../helpers/cli';
+import { sentenceIn } from '../../shared-core/units/sentence';
 
 const out = mkdtempSync(join(tmpdir(), 'gprime-assess-'));
 afterAll(() => rmSync(out, { recursive: true, force: true }));
@@ -27,7 +28,9 @@ describe('gprime assess --out (real CLI)', () => {
       }).data;
       for (const [name, r] of Object.entries(e.results as Record<string, { value: number | string }>)) {
         const row = rows.find((x) => x.section === 'result' && x.name === name)!;
-        expect(typeof r.value === 'number' ? Number(row.value) : row.value, `${e.id}.${name}`).toBe(r.value);
+        expect(typeof r.value === 'number' ? Number(row.value) : row.value, `${e.id}.${name}`).toBe(
+          typeof r.value === 'number' ? r.value : sentenceIn(r.value, 'si'),
+        );
       }
     }
     const text = execFileSync('pdftotext', [join(out, 'quillmere-reservoir.pdf'), '-'], { encoding: 'utf8' }).replace(

@@ -10,6 +10,8 @@ import {
   methodsForSource,
 } from '../../shared-core/report';
 import { assessSite, type Assessment } from '../../shared-core/site';
+import { nameText } from '../../shared-core/core/vocabulary';
+import { sentenceIn } from '../../shared-core/units/sentence';
 import { readSiteFile, GPRIME_VERSION } from '../../src-main/services/site-file';
 
 const ROOT = resolve(import.meta.dirname, '..', '..');
@@ -52,12 +54,22 @@ describe('report model', () => {
       Site: quillmere.project.site,
       'Prepared by': quillmere.project.preparedBy,
       'Checked by': quillmere.project.checkedBy,
-      Date: quillmere.project.date,
+      'Date of the site data': quillmere.project.date,
+      'Issue date': 'not issued (draft for checking)',
       Revision: quillmere.project.revision,
+      'Document number': `GP-QUILLMERE-RESERVOIR-${quillmere.siteHash.slice(0, 8).toUpperCase()}`,
       'gprime version': GPRIME_VERSION,
       'Site file SHA-256': quillmere.siteHash,
     });
     expect(m.cautions[0]).toBe(quillmere.caution);
+    // an issue date is the caller's, apart from the site date; an impossible date is not an issue date
+    const issued = buildReportModel(quillmere, 'si', undefined, { issueDate: '2026-10-01' }).documentControl;
+    expect(issued).toMatchObject({ issueDate: '2026-10-01', siteDate: quillmere.project.date, revision: 'A' });
+    expect(issued.revisions[0]).toMatchObject({ date: '2026-10-01', prepared: quillmere.project.preparedBy });
+    expect(issued.signatures.map((x) => x.role)).toEqual(['Prepared', 'Checked', 'Approved']);
+    expect(buildReportModel(quillmere, 'si', undefined, { issueDate: '2026-02-30' }).documentControl.issueDate).toBe(
+      '',
+    );
   });
 
   it('lists summary, every estimate, references and cautions in the contents, numbered in order', () => {
@@ -76,15 +88,15 @@ describe('report model', () => {
   it('converts inputs and results to US customary units with the exact NIST factors', () => {
     const si = quillmere.estimates.find((e) => e.id === 'layer-upper')!;
     const us = buildReportModel(quillmere, 'us').estimates.find((e) => e.id === 'layer-upper')!;
-    const q = Object.fromEntries(us.inputs.map((r) => [r.name, r]));
+    const q = Object.fromEntries(us.inputs.map((r) => [r.key, r]));
     expect(q.discharge.unit).toBe('cfs');
     expect(q.discharge.value).toBeCloseTo((si.inputs.discharge.value as number) / CFS, 9);
     expect(q.reservoir_length.value).toBeCloseTo((si.inputs.reservoir_length.value as number) / FT, 9);
-    const thickness = us.results.find((r) => r.name === 'thickness')!;
+    const thickness = us.results.find((r) => r.key === 'thickness')!;
     expect(thickness.shownUnit).toBe('ft');
     expect(thickness.value).toBeCloseTo((si.results.thickness.value as number) / FT, 9);
     const blend = buildReportModel(quillmere, 'us').estimates.find((e) => e.id === 'release-summer')!;
-    const t = blend.inputs.find((r) => r.name === 'target_temperature')!;
+    const t = blend.inputs.find((r) => r.key === 'target_temperature')!;
     expect(t.shownUnit).toBe('°F');
     expect(t.value).toBeCloseTo(1.8 * 13.88888888888889 + 32, 9); // the site gives 57 °F
   });
@@ -182,13 +194,34 @@ describe('report model', () => {
       'Outfall',
       'Late summer (governs)',
       'ammonia (chronic)',
-      'mg/L',
+      '12 / 0.05 / 1.2 mg/L',
+      '50',
       '10.4',
       '6.24 × 2 = 12.48',
       '20 %',
       'meets',
-      'Ce 12, Ca 0.05, Cc 1.2; boundary 50 m; buoyant-jet (plume) × far-field (far)',
     ]);
+    // the spreadsheets get the same row as numbers; the US edition gives the boundary in feet (NIST SP 811: 1 ft = 0.3048 m)
+    expect(m.compliance?.values[0]).toEqual([
+      'Outfall',
+      'Late summer',
+      'yes',
+      'ammonia',
+      'chronic',
+      'mg/L',
+      12,
+      0.05,
+      1.2,
+      50,
+      10.4,
+      6.24,
+      2,
+      12.48,
+      20,
+      'meets',
+    ]);
+    expect(buildReportModel(a, 'us').compliance?.values[0][9]).toBeCloseTo(50 / FT, 9);
+    expect(buildReportModel(a, 'us').compliance?.header[9]).toBe('Boundary distance (ft)');
     expect(m.contents.map((c) => c.anchor)).toContain('compliance');
   });
 });
@@ -220,16 +253,20 @@ describe('uncertainty bands in the report model', () => {
   it('carries each stated input uncertainty and a low ≤ median ≤ high band per numeric result, converted like the results', () => {
     const si = buildReportModel(quillmere, 'si').estimates.find((s) => s.id === 'plunge-summer')!;
     const us = buildReportModel(quillmere, 'us').estimates.find((s) => s.id === 'plunge-summer')!;
-    expect(si.uncertainty?.inputs.map((i) => i.name)).toEqual(['discharge']);
-    const depth = si.uncertainty!.rows.find((r) => r.name === 'plunge_depth')!;
+    const words = (n: string, role: 'input' | 'result') => nameText(n, si.method, role);
+    expect(si.uncertainty?.inputs.map((i) => i.name)).toEqual([words('discharge', 'input')]);
+    const depth = si.uncertainty!.rows.find((r) => r.name === words('plunge_depth', 'result'))!;
     const [nominal, low, median, high] = depth.values;
-    expect(nominal).toBe(si.results.find((r) => r.name === 'plunge_depth')!.value);
+    expect(nominal).toBe(si.results.find((r) => r.key === 'plunge_depth')!.value);
     expect(low).toBeLessThan(median);
     expect(median).toBeLessThan(high);
     // the typed 15 % of the bound discharge, in m³/s and in ft³/s (1 ft³ = 0.028316846592 m³, NIST SP 811 App. B.8)
-    const q = Number(si.inputs.find((r) => r.name === 'discharge')!.value);
-    expect(Number(si.uncertainty!.inputs[0].standardUncertainty)).toBeCloseTo(0.15 * q, 3);
-    expect(us.uncertainty!.rows.find((r) => r.name === 'plunge_depth')!.values[3]).toBeCloseTo(high / FT, 6);
+    const q = Number(si.inputs.find((r) => r.key === 'discharge')!.value);
+    expect(si.uncertainty!.inputs[0].standardUncertaintyValue).toBeCloseTo(0.15 * q, 9);
+    expect(us.uncertainty!.rows.find((r) => r.name === words('plunge_depth', 'result'))!.values[3]).toBeCloseTo(
+      high / FT,
+      6,
+    );
     expect(si.methods.some((m) => /JCGM 101:2008/.test(m.source))).toBe(true);
   });
   it('gives no band where the estimate states no uncertainty', () => {
@@ -252,22 +289,22 @@ describe('the calc package traces every verdict', () => {
   it('each compliance row has its derivation: Ce, Ca, Cc, S required, the runs and their warnings', () => {
     expect(m.complianceDerivations).toHaveLength(quillmere.compliance.length);
     quillmere.compliance.forEach((r, i) => {
-      const d = m.complianceDerivations[i];
+      const d = [...m.complianceDerivations[i].lines, ...m.complianceDerivations[i].warnings].join(' ');
       expect(d).toContain(`Ce = ${formatValue(r.effluent!)}`);
-      expect(d).toContain(`S required = (Ce − Ca)/(Cc − Ca) = ${formatValue(r.requiredDilution!)}`);
-      expect(d).toContain(r.estimate!);
+      expect(d).toContain(`S_req = (Ce − Ca)/(Cc − Ca) = ${formatValue(r.requiredDilution!)}`);
+      expect(d).toContain(`${formatValue(r.boundary!)} m from the port`);
+      const section = m.estimates.find((s) => s.id === r.estimate)!.number;
+      expect(d).toContain(`${r.estimate!}, §${section}`);
       const run = quillmere.estimates.find((o) => o.id === r.estimate)!;
-      for (const w of run.warnings) expect(d).toContain(w.message);
+      for (const w of run.warnings) expect(d).toContain(sentenceIn(w.message, 'si'));
     });
   });
 
   it('every input names its origin: typed, from the site, or the method default', () => {
     const jet = m.estimates.find((s) => s.id === 'plume-summer')!;
-    expect(jet.inputs.find((q) => q.name === 'diameter')!.description).toMatch(
-      /from the site: Treatment works outfall/,
-    );
+    expect(jet.inputs.find((q) => q.key === 'diameter')!.description).toMatch(/from the site: Treatment works outfall/);
     const added = m.estimates.find((s) => s.id.endsWith('far-chronic'))!;
-    expect(added.inputs.find((q) => q.name === 'width')!.description).toMatch(/derived from the near-field run/);
-    expect(added.inputs.find((q) => q.name === 'alpha')!.description).toMatch(/default/);
+    expect(added.inputs.find((q) => q.key === 'width')!.description).toMatch(/derived from the near-field run/);
+    expect(added.inputs.find((q) => q.key === 'alpha')!.description).toMatch(/default/);
   });
 });
