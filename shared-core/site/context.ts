@@ -1,4 +1,5 @@
 import { GRAVITY } from '../quantities';
+import { InputError } from '../core/errors';
 import { parseQuantity } from '../units/units';
 import { profileFromTable } from '../profile/csv';
 import { twoLayerFit, n2Profile, type TwoLayerFit } from '../profile/stratification';
@@ -13,6 +14,8 @@ const MAX_READ_QUANTITIES = 4096;
 /** A quantity of the site file in SI; the field path names its place in the file. */
 export function si(field: string, q: QuantityInput, unit: string): number {
   if (typeof q === 'number') return q;
+  // a required field emptied in the workspace: say so by name, never an internal error
+  if (typeof q !== 'string') throw new InputError(field, '', unit, 'a value', 'the field is empty; give a value');
   const key = `${unit}\u0000${q}`;
   let value = readQuantities.get(key);
   if (value === undefined) {

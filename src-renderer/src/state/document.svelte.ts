@@ -13,6 +13,13 @@ function canonicalText(site: Site): string {
 const pathOf = (path: readonly PropertyKey[]) =>
   path.reduce<string>((a, k) => (typeof k === 'number' ? `${a}[${k}]` : a ? `${a}.${String(k)}` : String(k)), '');
 
+/** The value at a zod issue path of the site (undefined where the path leads nowhere). */
+function valueAt(site: Site, path: readonly PropertyKey[]): unknown {
+  let v: unknown = site;
+  for (const k of path) v = v && typeof v === 'object' ? (v as Record<PropertyKey, unknown>)[k] : undefined;
+  return v;
+}
+
 /** Text typed into a field that the document does not hold (unreadable or out of range), kept until fixed. */
 export interface FieldDraft {
   /** the field as labelled on screen */
@@ -58,7 +65,7 @@ export class SiteDocument {
       ? []
       : r.error.issues.map((i) => {
           const place = placeName(pathOf(i.path), this.site);
-          return i.code === 'invalid_type' && /received undefined/.test(i.message)
+          return valueAt(this.site, i.path) === undefined
             ? `${place} is empty; a value is needed`
             : `${place}: ${i.message}`;
         });
