@@ -148,6 +148,18 @@ describe('calc package from the workspace (browser shell)', () => {
     expectIn(text, '°F');
   }, 150_000);
 
+  it('refuses to export while a field holds text the site does not take, naming the field', async () => {
+    const depth = page.getByLabel('Greatest depth');
+    await depth.fill('-5 m');
+    await panel().getByRole('button', { name: 'Write the package' }).click();
+    const error = panel().getByTestId('export-error');
+    await error.waitFor();
+    expect(await error.textContent()).toMatch(/^Not exported: Greatest depth .*-5 m/);
+    expect(reportFolders()).toHaveLength(2);
+    await depth.fill('38 m');
+    await expect.poll(() => page.getByTestId('file-name').textContent()).toContain('unsaved');
+  }, 60_000);
+
   it('says in words why nothing was written when the shell does not answer, and closes with Escape', async () => {
     await session.shell.stop();
     await panel().getByRole('button', { name: 'Write the package' }).click();

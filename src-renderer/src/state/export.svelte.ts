@@ -77,7 +77,8 @@ export class PackageExport {
     }
     const doc = this.ws.doc;
     if (doc.problems.length) {
-      this.error = `Not exported: the site has a problem at ${doc.problems[0]}. Fix it in the editor first.`;
+      // a field holding text the document could not take would be left out silently: refused, as saving is
+      this.error = `Not exported: ${doc.problems[0]}. Fix it in the editor first.`;
       return;
     }
     // the text on screen now: later edits do not change this export
