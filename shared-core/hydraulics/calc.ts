@@ -2,6 +2,7 @@ import { num, text } from '../calc/resolve';
 import { note } from '../core/warning';
 import { arg, type CalcMethod } from '../calc/types';
 import { InputError } from '../core/errors';
+import { qty } from '../core/quantity-text';
 import { positive } from '../core/range';
 import { STRATIFIED_OBSTACLE_FLOW, stratifiedObstacleFlow } from './obstacle';
 import {
@@ -254,6 +255,14 @@ export const hydraulicsCalcMethods: CalcMethod[] = [
         arg.num(a, 'interface_distance'),
         arg.num(a, 'width'),
       ];
+      if (opening >= interfaceDistance)
+        throw new InputError(
+          'opening',
+          opening,
+          'm',
+          `< ${qty(interfaceDistance, 'm')}`,
+          `it must be less than interface_distance = ${qty(interfaceDistance, 'm')} (the ${weir ? 'crest lies above' : 'lip lies below'} the interface)`,
+        );
       const approachVelocity = arg.text(a, 'approach_velocity') === 'included';
       const contraction = arg.num(a, 'contraction');
       const r = weir

@@ -125,3 +125,13 @@ describe('hydraulics calc methods', () => {
     ).toThrow(InputError);
   });
 });
+
+describe('skimming-withdrawal names the input that is wrong', () => {
+  it('an opening beyond the interface is refused as opening, for both structures', () => {
+    const m = findCalcMethod('skimming-withdrawal')!;
+    for (const structure of ['weir', 'curtain-wall'])
+      expect(() => runCalc(m, { g_prime: '0.02', structure, opening: '3', interface_distance: '2' })).toThrow(
+        /^opening = .* is not allowed: it must be less than interface_distance/,
+      );
+  });
+});
