@@ -136,6 +136,9 @@ const BINDINGS: Record<string, Binding> = {
     return {
       g_prime: ctx.fit.gPrime,
       interface_distance: Math.abs(depth - ctx.fit.upperThickness),
+      port_depth: depth,
+      // one port carries the whole planned release; with several, the split is the release blend's
+      ...(i.ports.length === 1 ? { planned_discharge: si(`${at(ctx)}.release`, i.release, 'm3/s') } : {}),
       sink: i.sink,
       width: siOptional(`${at(ctx)}.width`, i.width, 'm'),
     };

@@ -93,6 +93,14 @@ export const withdrawalCalcMethods: CalcMethod[] = [
       },
       {
         kind: 'number',
+        name: 'port_depth',
+        unit: 'm',
+        description: 'depth of the port the estimate is for, below the surface (named in the estimate; optional)',
+        optional: true,
+        range: { min: 0, max: 11000 },
+      },
+      {
+        kind: 'number',
         name: 'planned_discharge',
         unit: 'm3/s',
         description: 'planned release through the intake, to compare with the critical discharge (optional)',
@@ -117,7 +125,19 @@ export const withdrawalCalcMethods: CalcMethod[] = [
         arg.optNum(a, 'width'),
       );
       const planned = arg.optNum(a, 'planned_discharge');
-      const warnings = [...r.warnings];
+      const portDepth = arg.optNum(a, 'port_depth');
+      const warnings = [
+        ...(portDepth === undefined
+          ? []
+          : [
+              note(
+                'port-used',
+                `Critical discharge of the port at ${qty(portDepth, 'm')} below the surface.`,
+                'port_depth',
+              ),
+            ]),
+        ...r.warnings,
+      ];
       if (planned !== undefined && planned > r.value)
         warnings.push(
           caution(
@@ -210,7 +230,18 @@ export const withdrawalCalcMethods: CalcMethod[] = [
       });
       const regime = r.regimeAssumed ? 'inertial (assumed: no reservoir length)' : r.regime;
       const portDepth = arg.optNum(a, 'port_depth');
-      const warnings = [...r.warnings];
+      const warnings = [
+        ...(portDepth === undefined
+          ? []
+          : [
+              note(
+                'port-used',
+                `Withdrawal layer of the port at ${qty(portDepth, 'm')} below the surface drawing ${qty(arg.num(a, 'discharge'), 'm3/s')}.`,
+                'port_depth',
+              ),
+            ]),
+        ...r.warnings,
+      ];
       let spread = { low: r.totalThickness, high: r.totalThickness };
       if (sink === 'line' && r.regime === 'inertial') {
         const half = halfThicknessSpreadLineSink(
