@@ -142,12 +142,13 @@ export function reachesHalfThickness(
 /**
  * Published coefficients C of the inertial line-sink half-thickness δ = C (q/N)^½, from the critical Froude number
  * q/(N δ²) = 1/C² of each: inviscid theory 1/π (Yih 1958; Kao 1970 free-streamline theory), Debler's (1959)
- * measured 0.28 and Imberger, Thompson & Fandry's (1976) steady layer, C = 2 (the one coded above). Values from memory.
+ * measured 0.28 and Imberger, Thompson & Fandry's (1976) steady layer, C = 2 (the one coded above). Values from memory;
+ * Kao's pages as listed in the references of Imberger, Thompson & Fandry (1976).
  */
 export const LINE_SINK_INERTIAL_COEFFICIENTS = [
   {
     source:
-      'Yih (1958); Kao, T.W. (1970). Free-streamline theory for inviscid stratified flow into a line sink. Phys. Fluids 13, 558–564: q/(Nδ²) = 1/π',
+      'Yih (1958); Kao, T.W. (1970). Free-streamline theory for inviscid stratified flow into a line sink. Phys. Fluids 13, 535–543: q/(Nδ²) = 1/π',
     c: Math.sqrt(Math.PI),
   },
   {
