@@ -3,7 +3,7 @@ import type { Series } from '../calc/types';
 import type { Warning } from '../core/warning';
 import { profileSeries } from '../profile/calc';
 import { ProfileError, type ProfileIssue } from '../profile/profile';
-import type { ProfileCache } from './context';
+import { siteLatitude, type ProfileCache } from './context';
 import type { Site } from './schema';
 
 /** How a condition's measured profile reads: its curves for the views, or its problems by row and column. */
@@ -26,7 +26,7 @@ export interface ConditionOutcome {
 export function assessConditions(site: Site, cache: ProfileCache): ConditionOutcome[] {
   return site.conditions.map((c, i) => {
     const base = { id: c.id, name: c.name, issues: [] as ProfileIssue[], warnings: [] as Warning[], series: [] };
-    const read = cache.read(c);
+    const read = cache.read(c, siteLatitude(site));
     if ('error' in read) {
       const message = read.error instanceof Error ? read.error.message : String(read.error);
       const issues = read.error instanceof ProfileError ? read.error.issues : [];

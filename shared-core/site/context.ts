@@ -72,12 +72,13 @@ export class ProfileCache {
     return id;
   }
 
-  read(c: Condition): ReadProfile {
-    const key = this.key(c);
+  /** `latitude` [deg] is the site's, for depth from a pressure column (the reader's default when absent) */
+  read(c: Condition, latitude?: number): ReadProfile {
+    const key = latitude === undefined ? this.key(c) : `${latitude}|${this.key(c)}`;
     let r = this.byContent.get(key);
     if (!r) {
       try {
-        const profile = profileFromTable(c.profile, { eos: c.eos });
+        const profile = profileFromTable(c.profile, { eos: c.eos, latitude });
         r = { profile, fit: twoLayerFit(profile) };
       } catch (error) {
         r = { error };
@@ -89,9 +90,21 @@ export class ProfileCache {
 
   /** forgets profiles no longer in the site */
   keepOnly(site: Site): void {
-    const live = new Set(site.conditions.map((c) => this.key(c)));
+    const latitude = siteLatitude(site);
+    const live = new Set(
+      site.conditions.flatMap((c) => [this.key(c), latitude === undefined ? '' : `${latitude}|${this.key(c)}`]),
+    );
     for (const k of this.byContent.keys()) if (!live.has(k)) this.byContent.delete(k);
     for (const k of this.ids.keys()) if (!live.has(k)) this.ids.delete(k);
+  }
+}
+
+/** The site's latitude [deg] for depth from pressure; undefined when not given or unreadable (its field says why). */
+export function siteLatitude(site: Site): number | undefined {
+  try {
+    return siOptional('waterBody.latitude', site.waterBody.latitude, 'deg');
+  } catch {
+    return undefined;
   }
 }
 
@@ -124,7 +137,7 @@ export function makeContext(
   const conditionIndex = conditionId ? site.conditions.findIndex((c) => c.id === conditionId) : 0;
   const featureIndex = featureId ? site.features.findIndex((f) => f.id === featureId) : -1;
   const condition = conditionIndex >= 0 ? site.conditions[conditionIndex] : undefined;
-  const read = condition ? cache.read(condition) : undefined;
+  const read = condition ? cache.read(condition, siteLatitude(site)) : undefined;
   if (read && 'error' in read) throw read.error;
   return {
     site,

@@ -176,6 +176,8 @@ export const waterBodySchema = z.object({
   /** fetch / basin length along the wind [m] */
   length: quantitySchema.optional(),
   width: quantitySchema.optional(),
+  /** latitude of the site [deg], north positive: depth from a pressure column of a profile (UNESCO 1983) */
+  latitude: quantitySchema.optional(),
   /** hypsographic curve: plan area at each depth below the surface */
   hypsography: z.array(z.object({ depth: quantitySchema, area: quantitySchema })).optional(),
 });
