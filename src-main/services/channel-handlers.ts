@@ -60,8 +60,7 @@ export function createChannelHandlers({ host, dataDir, version }: HandlerOptions
   const recent = new RecentFiles(dataDir);
   const recovery = new RecoveryStore(dataDir);
   // saves killed part-way leave temporary files beside their targets: remove them at the start
-  for (const dir of new Set([dataDir, recovery.dir, ...recent.list().map((p) => dirname(p))]))
-    removeStaleTemporaryFiles(dir);
+  for (const dir of new Set([dataDir, ...recent.list().map((p) => dirname(p))])) removeStaleTemporaryFiles(dir);
   const opened = (path: string) => {
     const r = readSiteText(path);
     recent.add(path);

@@ -26,27 +26,22 @@ export const SHARED_DOCUMENT = 'default';
 const DOCUMENT_KEY = /^[A-Za-z0-9_-]{1,64}$/;
 
 /**
- * Autosaves of unsaved documents, one file per document in <data folder>/recovery/, so two windows never
+ * Autosaves of unsaved documents, one file per document in the data folder (recovery-<document>.json; the
+ * shared document, and earlier versions' single autosave, in recovery.json), so two windows never
  * overwrite each other's. They survive a crash; the workspace offers them back on the next start and a
  * document's file is removed after it is saved or when the user declines its offer.
  */
 export class RecoveryStore {
-  readonly dir: string;
-  /** the single recovery file of earlier versions, still offered (as document "default") */
-  private readonly legacy: string;
   constructor(
-    dataDir: string,
+    readonly dir: string,
     private readonly now: () => Date = () => new Date(),
-  ) {
-    this.dir = join(dataDir, 'recovery');
-    this.legacy = join(dataDir, 'recovery.json');
-  }
+  ) {}
 
   /** the file of one document; the key is checked again here, so no request can name another path */
   fileOf(document: string): string {
     if (!DOCUMENT_KEY.test(document))
       throw new ServiceError('invalid-request', `recovery: document key "${document}" is not letters, digits, - or _`);
-    return join(this.dir, `${document}.json`);
+    return join(this.dir, document === SHARED_DOCUMENT ? 'recovery.json' : `recovery-${document}.json`);
   }
 
   write(text: string, path: string | null, document = SHARED_DOCUMENT): void {
@@ -58,26 +53,25 @@ export class RecoveryStore {
 
   /** Every recovery left behind, newest first (an unreadable file counts as none and is left as it is). */
   check(): RecoveryEntry[] {
-    const found: RecoveryEntry[] = [];
-    const legacy = readEntry(this.legacy, SHARED_DOCUMENT);
     let names: string[] = [];
     try {
-      names = readdirSync(this.dir).filter((n) => n.endsWith('.json') && DOCUMENT_KEY.test(n.slice(0, -5)));
+      names = readdirSync(this.dir);
     } catch {
-      // no recovery folder yet
+      // no data folder yet
     }
+    const found: RecoveryEntry[] = [];
     for (const n of names) {
-      const e = readEntry(join(this.dir, n), n.slice(0, -5));
+      const m = /^recovery(?:-([A-Za-z0-9_-]{1,64}))?\.json$/.exec(n);
+      if (!m || m[1] === SHARED_DOCUMENT) continue;
+      const e = readEntry(join(this.dir, n), m[1] ?? SHARED_DOCUMENT);
       if (e) found.push(e);
     }
-    if (legacy && !found.some((e) => e.document === SHARED_DOCUMENT)) found.push(legacy);
     return found.sort((a, b) => (a.savedAt < b.savedAt ? 1 : a.savedAt > b.savedAt ? -1 : 0));
   }
 
-  /** Removes one document's recovery (the shared one also removes the file of earlier versions). */
+  /** Removes one document's recovery. */
   clear(document = SHARED_DOCUMENT): void {
     rmSync(this.fileOf(document), { force: true });
-    if (document === SHARED_DOCUMENT) rmSync(this.legacy, { force: true });
   }
 }
 

@@ -242,12 +242,13 @@ describe('nothing typed is lost, nothing stale is kept', () => {
     await expect
       .poll(() => page.getByLabel('Name', { exact: true }).first().inputValue())
       .toBe('Typed while the shell was down');
-    // autosave goes on into the shell's recovery folder now that it answers again
+    // autosave goes on into this document's recovery file in the shell's data folder now that it answers again
     await page.getByLabel('Name', { exact: true }).first().fill('Typed after the restart');
     const kept = () => {
       try {
-        const dir = join(folders.dataDir, 'recovery');
+        const dir = folders.dataDir;
         return readdirSync(dir)
+          .filter((n) => /^recovery-[\w-]+\.json$/.test(n))
           .map((n) => readFileSync(join(dir, n), 'utf8'))
           .join('\n');
       } catch {
