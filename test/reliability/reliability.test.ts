@@ -29,7 +29,7 @@ const AREA_TIMEOUT_MS = 240_000 * SCALE;
 
 const DEMO = readFileSync(join(import.meta.dirname, '../../examples/quillmere-reservoir.gpsite'), 'utf8');
 const NEWER = DEMO.replace(/"version": \d+/, '"version": 99');
-const CLEAN_CODES = new Set(['invalid-request', 'forbidden', 'not-found', 'site-file', 'io', 'unsupported']);
+const CLEAN_CODES = new Set(['invalid-request', 'forbidden', 'not-found', 'site-file', 'io', 'unsupported', 'exists']);
 const tally = new Tally();
 const sample = <T>(arb: fc.Arbitrary<T>, n: number) => fc.sample(arb, { numRuns: n * SCALE, seed: SEED });
 
