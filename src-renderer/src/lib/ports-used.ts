@@ -29,6 +29,9 @@ export function portRows(text: string, site: Site, o: EstimateOutcome, name = 'p
   }));
 }
 
+/** inputs that show an outfall estimate runs on its port or diffuser */
+const PORT_INPUTS = ['port_depth', 'diameter', 'ports', 'spacing'];
+
 const shown = (v: number, unit: string, system: UnitSystem) => {
   const d = safeDisplay(v, unit, system);
   return `${formatNumber(d.value)} ${prettyUnit(d.unit)}`;
@@ -43,7 +46,10 @@ export function portsUsed(site: Site, o: EstimateOutcome, system: UnitSystem): s
   const f = site.features.find((x) => x.id === o.feature?.id);
   if (!f) return '';
   if (f.kind === 'outfall') {
-    const depth = readQuantity(f.portDepth, 'm', 'port depth').si;
+    // a criterion's required dilution is a mass balance: it uses no port
+    if (!PORT_INPUTS.some((name) => name in o.inputs)) return '';
+    const typed = o.inputs.port_depth?.value;
+    const depth = typeof typed === 'number' ? typed : readQuantity(f.portDepth, 'm', 'port depth').si;
     const at = depth === undefined ? '' : ` at ${shown(depth, 'm', system)}`;
     return f.ports > 1 ? `diffuser of ${f.ports} ports${at}` : `single port${at}`;
   }
