@@ -148,6 +148,24 @@ describe('what a card says', () => {
     await detail().getByRole('button', { name: 'Close' }).click();
   });
 
+  it('says on the card when a release target cannot be reached, in the units shown', async () => {
+    await page.getByText('US', { exact: true }).click();
+    await outline()
+      .getByRole('button', { name: /^Tower intake/ })
+      .click();
+    // no port of the demo's tower draws water warmer than its surface (about 76.6 °F in late summer)
+    await page.getByLabel('Target release temperature').fill('95 degF');
+    const release = card('release-summer');
+    await expect.poll(() => release.getByTestId('target-unreachable').count()).toBe(1);
+    const warnings = await release.locator('.warnings li').allInnerTexts();
+    const refusal = warnings.find((w) => w.includes('cannot be met'));
+    expect(refusal).toMatch(/°F/);
+    expect(siQuantities(refusal ?? '')).toEqual([]);
+    await page.keyboard.press('Control+z');
+    await expect.poll(() => release.getByTestId('target-unreachable').count()).toBe(0);
+    await page.getByText('SI', { exact: true }).click();
+  });
+
   it('gives each chart a table of its values for screen readers', async () => {
     await card('plume-summer')
       .getByRole('button', { name: /detail/i })
