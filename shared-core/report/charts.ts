@@ -41,6 +41,8 @@ export interface ChartDataset {
 }
 
 export interface ChartSpec {
+  /** the kind of the series it draws ("plume-centreline"), for views that add reference lines */
+  kind: string;
   /** file-safe identifier, unique within a report */
   id: string;
   title: string;
@@ -89,6 +91,7 @@ export function chartSpecs(series: readonly Series[], units: UnitSystem, prefix:
       const v = swap ? along : across;
       const title = sentenceIn(groups.length > 1 ? `${s.title}: ${across.label}` : s.title, units);
       out.push({
+        kind: s.kind,
         id: `${prefix}-${si + 1}${groups.length > 1 ? String.fromCharCode(97 + gi) : ''}-${slug(title, 40)}`,
         title,
         caption: sentenceIn(s.caption ?? `${across.label} against ${s.x.label.toLowerCase()}`, units),

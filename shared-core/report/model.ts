@@ -13,6 +13,9 @@ import { keyResultName, type ResultValue } from '../calc/types';
 import { findCalcMethod } from '../calc/registry';
 import { toDisplay, type UnitSystem } from '../units/units';
 import { chartSpecs, type ChartSpec } from './charts';
+import { withReferenceLines } from './figures';
+import type { ComplianceRow } from '../site/assess';
+import type { ConditionOutcome } from '../site/conditions';
 import { figuresFor, FIGURES_RULE, formatValue, prettyUnit, readableName } from './format';
 import { documentControl, type DocumentControl } from './document';
 import { sentenceIn } from '../units/sentence';
@@ -241,6 +244,8 @@ function section(
   number: string,
   units: UnitSystem,
   referenceOf: (source: string) => number,
+  compliance: readonly ComplianceRow[],
+  conditions: readonly ConditionOutcome[],
 ): EstimateSection {
   const say = (t: string) => sentenceIn(t, units);
   const method = findCalcMethod(e.method);
@@ -270,7 +275,7 @@ function section(
     ),
     methods: methodTexts(e.sources, referenceOf),
     warnings: e.warnings.map((w) => say(w.message)),
-    charts: chartSpecs(e.series, units, e.id),
+    charts: withReferenceLines(chartSpecs(e.series, units, e.id), e, compliance, conditions, units),
     ...(e.uncertainty ? { uncertainty: uncertaintySection(e, units) } : {}),
   };
 }
@@ -293,7 +298,9 @@ export function buildReportModel(
 ): ReportModel {
   const references = [...new Set(a.estimates.flatMap((e) => e.sources))];
   const referenceOf = (source: string) => references.indexOf(source) + 1;
-  const estimates = a.estimates.map((e, i) => section(e, String(i + 2), units, referenceOf));
+  const estimates = a.estimates.map((e, i) =>
+    section(e, String(i + 2), units, referenceOf, a.compliance, a.conditions),
+  );
   const sectionOf = (id: string) => estimates.find((s) => s.id === id)?.number;
   const compliance = complianceTable(a.compliance, units);
   let next = estimates.length + 2;

@@ -23,7 +23,8 @@ export interface VerificationEntry {
 
 type CheckKind = 'validation' | 'known-bias' | 'consistency';
 
-interface Check {
+/** One check of verification.json (src-main/verification/summary.ts writes it). */
+export interface Check {
   basis: string;
   reference: string;
   cases: number;
@@ -66,6 +67,14 @@ function checkText(c: Check): string {
   return `${BASIS[c.basis] ?? c.basis}: ${c.reference} — ${cases}, ${agreement}.`;
 }
 
+/** The checks of one method in words, grouped by kind in the order of CHECK_GROUPS; a check without a kind is an external check. */
+export function checkGroups(checks: readonly Check[]): VerificationGroup[] {
+  return CHECK_GROUPS.map((g) => ({
+    ...g,
+    checks: checks.filter((c) => (c.kind ?? 'other') === g.kind).map(checkText),
+  })).filter((g) => g.checks.length > 0);
+}
+
 /**
  * The verification appendix: for each method the assessment used, the external checks its tests pass
  * (from shared-core/report/verification.json, generated from test/check-values) grouped by kind — validation,
@@ -79,11 +88,7 @@ export function verificationEntries(
   const infos = new Map<string, MethodInfo>();
   for (const s of sources) for (const m of methodsForSource(s)) infos.set(m.id, m);
   return [...infos.values()].map((m) => {
-    const checks = SUMMARY[m.id] ?? [];
-    const groups = CHECK_GROUPS.map((g) => ({
-      ...g,
-      checks: checks.filter((c) => (c.kind ?? 'other') === g.kind).map(checkText),
-    })).filter((g) => g.checks.length > 0);
+    const groups = checkGroups(SUMMARY[m.id] ?? []);
     const reference = referenceOf(m.source);
     return {
       method: m.title,

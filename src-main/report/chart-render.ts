@@ -242,7 +242,8 @@ function config(
           borderWidth: 2,
           borderDash: [...st.dash],
           pointStyle: st.marker,
-          pointRadius: (c: { dataIndex: number }) => (c.dataIndex % step === 0 ? 3.5 : 0),
+          // a dataset of one point marks an event: drawn larger than the markers along a curve
+          pointRadius: (c: { dataIndex: number }) => (d.points.length === 1 ? 7 : c.dataIndex % step === 0 ? 3.5 : 0),
           pointBorderWidth: 1,
         };
       }),

@@ -100,7 +100,8 @@ export function sectionBody(w: PdfWriter, s: EstimateSection, images: ReadonlyMa
   s.charts.forEach((c, k) => {
     const img = images.get(c.id);
     if (!img) return;
-    if (k === 0) w.heading('Charts', 2, 260);
+    // the heading stays with the first figure: its height at the drawn width, and its caption
+    if (k === 0) w.heading('Charts', 2, (img.height / img.width) * Math.min(6.5 * 72, w.width) + 40);
     w.image(img, 6.5 * 72);
     w.text(`Figure ${s.number}.${k + 1}: ${c.caption}. Data: charts/${c.id}.csv`, {
       size: 8.5,

@@ -11,7 +11,7 @@ const out = mkdtempSync(join(tmpdir(), 'gprime-assess-'));
 afterAll(() => rmSync(out, { recursive: true, force: true }));
 
 describe('gprime assess --out (real CLI)', () => {
-  it('writes PDF, PNG, SVG, CSV and XLSX whose numbers equal `assess --json`', () => {
+  it('writes PDF, PNG, SVG, CSV and XLSX whose numbers equal `assess --json`', { timeout: 180_000 }, () => {
     const site = 'examples/quillmere-reservoir.gpsite';
     const run = runGprime(['assess', site, '--out', out, '--format', 'pdf,png,svg,csv,xlsx']);
     expect(run.stderr).toBe('');
