@@ -37,6 +37,8 @@ function concentration(x: number | null, unit: string, units: UnitSystem): { val
 const lengthUnit = (units: UnitSystem) => prettyUnit(toDisplay(0, 'm', units).unit);
 const n = (x: number | null) => (x === null ? '—' : formatValue(x));
 const pctText = (m: number | null) => (m === null ? '—' : `${formatValue(100 * m, 3)} %`);
+/** A clause as a sentence: capital first letter, one full stop at the end. */
+const sentence = (t: string) => `${t.charAt(0).toUpperCase()}${t.slice(1)}${/[.!?]$/.test(t) ? '' : '.'}`;
 const zoneText = (z: ComplianceRow['zone']) => (z === 'acute' ? 'acute' : 'chronic');
 
 export function complianceTable(rows: readonly ComplianceRow[], units: UnitSystem = 'si'): ComplianceTable | null {
@@ -110,8 +112,8 @@ export function complianceColumns(units: UnitSystem): string[] {
     'Constituent (zone)',
     'Ce / Ca / Cc',
     `Boundary (${lengthUnit(units)})`,
-    'Required dilution',
-    'Achieved dilution',
+    'Required S',
+    'Achieved S',
     'Margin',
     'Verdict',
   ];
@@ -180,7 +182,7 @@ export function derivation(
       ? ''
       : `Achieved dilution S = ${r.farFieldFactor === null ? '' : `${n(r.nearFieldDilution)} (near field, run ${runText(r.estimate)}) × ${n(r.farFieldFactor)} (far field, run ${runText(r.farFieldEstimate)}) = `}${n(r.achievedDilution)}${r.farFieldFactor === null ? ` (run ${runText(r.estimate)})` : ''}; models: ${say(r.models)}.`,
     `Margin S/S_req − 1 = ${pctText(r.margin)}: ${r.verdict}.`,
-    r.note ? `${say(r.note).charAt(0).toUpperCase()}${say(r.note).slice(1)}.` : '',
+    r.note ? sentence(say(r.note)) : '',
   ].filter(Boolean);
   return {
     heading: `${r.feature} · ${r.constituent} (${zoneText(r.zone)}) · ${r.condition}${r.governing ? ' (governs)' : ''}`,

@@ -111,7 +111,7 @@ export function sectionBody(w: PdfWriter, s: EstimateSection, images: ReadonlyMa
   });
 }
 
-const COMPLIANCE_WIDTHS = [0.13, 0.13, 0.13, 0.15, 0.08, 0.08, 0.12, 0.08, 0.1];
+const COMPLIANCE_WIDTHS = [0.12, 0.12, 0.12, 0.14, 0.1, 0.1, 0.12, 0.08, 0.1];
 
 export function complianceBody(w: PdfWriter, model: ReportModel): void {
   if (!model.compliance) return;
