@@ -1,12 +1,13 @@
 import type { Site } from '../site/schema';
 import { parseQuantity, toDisplay, type UnitSystem } from '../units/units';
-import { formatValue, prettyUnit } from './format';
+import { figuresFor, formatValue, prettyUnit } from './format';
+import { fieldWords } from '../site/words';
 
 /** One input of the site document as typed, in SI, in the display units, and where it sits in the file. */
 export interface InputLine {
   /** what it belongs to: the water body, a condition, a feature */
   owner: string;
-  /** the field, as the file names it (e.g. "ports[1].capacity") */
+  /** the field in words and as the file names it ("Capacity (ports[1].capacity)") */
   field: string;
   typed: string;
   si: string;
@@ -40,6 +41,9 @@ const FIELD_UNITS: Record<string, string> = {
   tidalVelocity: 'm/s',
 };
 
+/** A field in the editors' words with its path in the file, so that the reader can find it in either. */
+const fieldText = (path: string) => `${fieldWords(path)} (${path})`;
+
 function lines(owner: string, value: unknown, path: string, units: UnitSystem): InputLine[] {
   if (Array.isArray(value)) return value.flatMap((v, i) => lines(owner, v, `${path}[${i}]`, units));
   if (value && typeof value === 'object')
@@ -55,21 +59,21 @@ function lines(owner: string, value: unknown, path: string, units: UnitSystem): 
       .at(-1) ?? path;
   const unit = FIELD_UNITS[key];
   if (unit === undefined || (typeof value !== 'number' && typeof value !== 'string'))
-    return value === undefined ? [] : [{ owner, field: path, typed: String(value), si: '', shown: '' }];
+    return value === undefined ? [] : [{ owner, field: fieldText(path), typed: String(value), si: '', shown: '' }];
   let si: number;
   try {
     si = typeof value === 'number' ? value : parseQuantity(path, value, unit);
   } catch {
-    return [{ owner, field: path, typed: String(value), si: 'cannot be read', shown: '' }];
+    return [{ owner, field: fieldText(path), typed: String(value), si: 'cannot be read', shown: '' }];
   }
   const d = toDisplay(si, unit, units);
   return [
     {
       owner,
-      field: path,
+      field: fieldText(path),
       typed: typeof value === 'number' ? `${value} (SI)` : value,
-      si: `${formatValue(si)} ${prettyUnit(unit)}`.trim(),
-      shown: `${formatValue(d.value)} ${prettyUnit(d.unit)}`.trim(),
+      si: `${formatValue(si, figuresFor(unit))} ${prettyUnit(unit)}`.trim(),
+      shown: `${formatValue(d.value, figuresFor(d.unit))} ${prettyUnit(d.unit)}`.trim(),
     },
   ];
 }
