@@ -23,3 +23,18 @@ describe('title block', () => {
     }
   });
 });
+
+describe('wrapping keeps each value with its unit', () => {
+  it('never ends a line between a number and its unit, at any width (NIST SP 811 §7.2: a space, not a break)', async () => {
+    const doc = await PDFDocument.create();
+    doc.registerFontkit(fontkit);
+    const font = await doc.embedFont(fontBytes('DejaVuSans.ttf'), { subset: true });
+    const text = 'The plume reaches the surface 91.62 ft from the port at 0.0656 ft/s and 4.365×10⁻⁵ m²/s, 12 %.';
+    // from the narrowest width that holds the widest value with its unit
+    for (let width = 90; width <= 400; width += 7) {
+      const lines = wrapText(text, font, 9, width);
+      for (const line of lines.slice(0, -1)) expect(line, `width ${width}`).not.toMatch(/(?:^|\s)[\d.×⁻⁰-⁹]+$/);
+      expect(lines.join(' ')).toBe(text);
+    }
+  });
+});
