@@ -1,3 +1,4 @@
+import { qty } from '../core/quantity-text';
 import { GRAVITY } from '../quantities';
 import { requireInRange } from '../core/range';
 import { scalar, type MethodInfo, type Scalar } from '../core/method';
@@ -196,7 +197,7 @@ export function exchangeWithNetFlowArmiFarmer1986(
     warnings.push(
       note(
         'virtual-control-position',
-        `The virtual control lies on the side the net flow comes from, where the channel has widened to ${bv.toPrecision(3)} m.`,
+        `The virtual control lies on the side the net flow comes from, where the channel has widened to ${qty(bv, 'm', 3)}.`,
       ),
     );
   const r = layers(d.withFlow * scale, d.against * scale);

@@ -46,7 +46,7 @@ const VISCOSITY = {
   kind: 'number',
   name: 'kinematic_viscosity',
   unit: 'm2/s',
-  description: 'kinematic viscosity of the current (default: water at 20 °C)',
+  description: 'kinematic viscosity of the current (default: fresh water at room temperature)',
   default: NU_20C,
   range: { ...positive, max: 1 },
 } as const;

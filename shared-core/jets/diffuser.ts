@@ -1,3 +1,4 @@
+import { qty } from '../core/quantity-text';
 import { InputError, formatNumber } from '../core/errors';
 import { requireInRange } from '../core/range';
 import { validityWarnings, type MethodInfo } from '../core/method';
@@ -139,7 +140,7 @@ export function diffuserPlume(input: DiffuserInput): DiffuserPlume {
       'spacing',
       '(missing)',
       'm',
-      `> port diameter (${input.diameter} m)`,
+      `> port diameter (${qty(input.diameter, 'm')})`,
       'a diffuser with several ports needs the port spacing',
     );
   const s = requireInRange('spacing', input.spacing, 'm', { min: input.diameter, minExclusive: true, max: 1e4 });
@@ -187,10 +188,10 @@ export function diffuserPlume(input: DiffuserInput): DiffuserPlume {
 
   const regime: DiffuserRegime = merge ? 'merged line plume' : 'isolated round plumes';
   const regimeText = merge
-    ? `Neighbouring plumes merge ${m(Math.abs(merge.z))} m ${merge.z >= 0 ? 'above' : 'below'} the ports (${m(merge.horizontalDistance)} m from them) at a centreline dilution of ${m(merge.dilutionCentreline)}; ` +
-      `beyond, the diffuser acts as a line plume of ${m(run.Q0 / s)} m³/s per metre.` +
+    ? `Neighbouring plumes merge ${qty(Math.abs(merge.z), 'm', 3)} ${merge.z >= 0 ? 'above' : 'below'} the ports (${qty(merge.horizontalDistance, 'm', 3)} from them) at a centreline dilution of ${m(merge.dilutionCentreline)}; ` +
+      `beyond, the diffuser acts as a line plume of ${qty(run.Q0 / s, 'm2/s', 3)} (flow per length of diffuser).` +
       (governing === 'isolated' ? ' The single-port dilution is the smaller here and governs.' : '')
-    : `Neighbouring plumes (spacing ${m(s)} m) do not merge within the near field: the ports act as isolated round plumes.`;
+    : `Neighbouring plumes (spacing ${qty(s, 'm', 3)}) do not merge within the near field: the ports act as isolated round plumes.`;
   const warnings = [...merged.warnings];
   if (froudeCurrent !== undefined)
     warnings.push(...validityWarnings(DIFFUSER_PLUME, { froude_current: froudeCurrent }));
@@ -222,7 +223,7 @@ export function diffuserPlume(input: DiffuserInput): DiffuserPlume {
     warnings.push(
       caution(
         'diffuser-shorter-than-rise',
-        `The diffuser (${m(length)} m long) is shorter than the rise (${m(g.maxRise)} m): water entrained at its ends makes the plume tend to one round plume of the total flow, so the line-plume continuation errs low (common practice, no source).`,
+        `The diffuser (${qty(length, 'm', 3)} long) is shorter than the rise (${qty(g.maxRise, 'm', 3)}): water entrained at its ends makes the plume tend to one round plume of the total flow, so the line-plume continuation errs low (common practice, no source).`,
       ),
     );
   }

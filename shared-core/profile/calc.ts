@@ -1,3 +1,4 @@
+import { qty } from '../core/quantity-text';
 import { num } from '../calc/resolve';
 import { arg, type CalcMethod } from '../calc/types';
 import { InputError } from '../core/errors';
@@ -35,7 +36,7 @@ export function summariseProfile(p: Profile): CalcOutput {
     warnings.push(
       note(
         'no-thermocline',
-        `The largest density gradient is ${th.gradient.toFixed(3)} kg/m³ per m, below 0.1: there is no distinct thermocline.`,
+        `The largest density gradient is ${qty(th.gradient, 'kg/m3', 3)} per metre of depth, below ${qty(0.1, 'kg/m3')} per metre: there is no distinct thermocline.`,
       ),
     );
   const unstable = stabilityFlags(p).filter((f) => f.stability === 'unstable');

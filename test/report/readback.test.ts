@@ -184,10 +184,6 @@ describe('inputs, compliance derivation, verification and references', () => {
  * wind speed U₁₀ is a name (the standard reference height), not a length to convert.
  */
 const AWAITING_TOKENS: readonly RegExp[] = [
-  /widened to [\d.]+ m\b/g,
-  /merge [\d.]+ m above the ports \([\d.]+ m from them\)/g,
-  /line plume of [\d.]+ m³\/s per metre/g,
-  /water at 20 °C/g,
   // the name of a quantity, not a length: wind speed at the standard reference height of 10 m (U₁₀)
   /(?:at|from) the 10 m wind|at 10 m(?= (?:U₁₀|=|\(from|wind))|speed at 10 m\b/g,
 ];

@@ -57,29 +57,6 @@ function sentences(a: Assessment): [string, string][] {
   return out;
 }
 
-/**
- * Sentences still built with SI numbers in modules converted apart (the diffuser's regime text, the stratification
- * summary's thermocline note, the exchange flow's control note): a known gap, listed so that no new one passes. An
- * entry that no longer leaks fails the test: remove it then.
- */
-const KNOWN_LEFT = new Set([
-  'strat-winter warning no-thermocline',
-  'mouth-exchange warning virtual-control-position',
-  'brine-diffuser regime',
-  'brine-winter-near regime',
-  'calc diffuser-plume',
-]);
-
-/** The problems outside the known gap, and the known entries that were met. */
-function split(found: string[]): { fresh: string[]; known: string[] } {
-  const keyOf = (p: string) => [...KNOWN_LEFT].find((k) => p.startsWith(`${k}:`));
-  return {
-    fresh: found.filter((p) => !keyOf(p)),
-    known: [...new Set(found.map(keyOf).filter((k): k is string => !!k))],
-  };
-}
-const metKnown = new Set<string>();
-
 const problems = (texts: [string, string][]) =>
   texts.flatMap(([where, text]) => {
     const shown = sentenceIn(text, 'us');
@@ -95,9 +72,7 @@ describe('US display: no SI quantity inside any sentence', () => {
       const a = assessSite(site, { gprimeVersion: 'test', siteHash: 'h' });
       const texts = sentences(a);
       expect(texts.length).toBeGreaterThan(10);
-      const { fresh, known } = split(problems(texts));
-      known.forEach((k) => metKnown.add(k));
-      expect(fresh).toEqual([]);
+      expect(problems(texts)).toEqual([]);
     });
   }
 
@@ -131,13 +106,7 @@ describe('US display: no SI quantity inside any sentence', () => {
     }
     // every method computes on everyday inputs, so that none escapes the scan
     expect(CALC_METHODS.map((m) => m.id).filter((id) => !computed.includes(id))).toEqual([]);
-    const { fresh, known } = split(found);
-    known.forEach((k) => metKnown.add(k));
-    expect(fresh).toEqual([]);
-  });
-
-  it('the known gap is still open (an entry that no longer leaks is removed from KNOWN_LEFT)', () => {
-    expect([...KNOWN_LEFT].filter((k) => !metKnown.has(k))).toEqual([]);
+    expect(found).toEqual([]);
   });
 });
 
