@@ -60,6 +60,8 @@ export interface AssessOptions {
   out?: string;
   formats?: string[];
   units?: 'si' | 'us';
+  /** the package's issue date (YYYY-MM-DD); without it the package is a draft for checking */
+  issueDate?: string;
 }
 
 export function parseAssessArgs(args: string[]): AssessOptions {
@@ -72,9 +74,11 @@ export function parseAssessArgs(args: string[]): AssessOptions {
       if (v === undefined) throw new UsageError(`${a} needs a value`);
       return v;
     };
-    if (['--out', '--format', '--units'].includes(a) && given.has(a)) throw new UsageError(`${a} is given twice`);
+    if (['--out', '--format', '--units', '--issue-date'].includes(a) && given.has(a))
+      throw new UsageError(`${a} is given twice`);
     given.add(a);
     if (a === '--out') opts.out = value();
+    else if (a === '--issue-date') opts.issueDate = value();
     else if (a === '--format')
       opts.formats = value()
         .split(',')
@@ -89,7 +93,9 @@ export function parseAssessArgs(args: string[]): AssessOptions {
     else throw new UsageError(`unexpected argument "${a}"`);
   }
   if (!opts.file)
-    throw new UsageError('gprime assess needs a site file: gprime assess <site file> [--json] [--out <folder>]');
+    throw new UsageError(
+      'gprime assess needs a site file: gprime assess <site file> [--json] [--out <folder>] [--units si|us] [--issue-date YYYY-MM-DD]',
+    );
   return opts;
 }
 
@@ -122,6 +128,7 @@ export async function assessCommand(args: string[], json: boolean): Promise<Comm
       outDir: opts.out,
       formats: opts.formats,
       units: opts.units ?? loaded.site.units,
+      issueDate: opts.issueDate,
     });
     const summary =
       summariseAssessment(assessment, system) +

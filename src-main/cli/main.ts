@@ -21,7 +21,8 @@ Usage:
                                                 evaluate every estimate of a site file (summary in the
                                                 site's units unless --units is given)
   gprime assess <site file> --out <folder> [--format pdf,png,svg,csv,xlsx] [--units si|us]
-                                                write the calc sheet, charts and tables
+               [--issue-date YYYY-MM-DD]        write the calc package (a draft for checking unless
+                                                an issue date is given)
   gprime help                                   this text
 
 Exit codes: 0 success, 2 bad input, 1 internal error; assess: 3 when an estimate is in error or incomplete

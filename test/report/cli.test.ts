@@ -13,7 +13,16 @@ afterAll(() => rmSync(out, { recursive: true, force: true }));
 describe('gprime assess --out (real CLI)', () => {
   it('writes PDF, PNG, SVG, CSV and XLSX whose numbers equal `assess --json`', { timeout: 180_000 }, () => {
     const site = 'examples/quillmere-reservoir.gpsite';
-    const run = runGprime(['assess', site, '--out', out, '--format', 'pdf,png,svg,csv,xlsx']);
+    const run = runGprime([
+      'assess',
+      site,
+      '--out',
+      out,
+      '--format',
+      'pdf,png,svg,csv,xlsx',
+      '--issue-date',
+      '2026-12-01',
+    ]);
     expect(run.stderr).toBe('');
     expect(run.code).toBe(0);
     expect(run.stdout).toMatch(/Wrote \d+ files to /);
@@ -39,6 +48,21 @@ describe('gprime assess --out (real CLI)', () => {
     );
     expect(text).toContain(json.siteHash);
     expect(text).toContain(`gprime version ${json.gprimeVersion}`);
+    expect(text).toContain('issued 2026-12-01');
+    expect(text).not.toMatch(/rev \S+ · draft/);
+  });
+
+  it('exits 2 on an issue date that is not a calendar date', () => {
+    const run = runGprime([
+      'assess',
+      'examples/amsel-estuary.gpsite',
+      '--out',
+      join(out, 'bad-date'),
+      '--issue-date',
+      '2026-13-45',
+    ]);
+    expect(run.code).toBe(2);
+    expect(run.stderr).toMatch(/--issue-date: "2026-13-45" is not a calendar date YYYY-MM-DD/);
   });
 
   it('exits 2 on an unknown format', () => {
