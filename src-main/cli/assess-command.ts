@@ -1,7 +1,8 @@
 import { assessSite, SiteFileError, type Assessment } from '../../shared-core/site';
-import { formatNumber } from '../../shared-core/core/errors';
 import { keyResultName } from '../../shared-core/calc/types';
 import { sentenceIn } from '../../shared-core/units/sentence';
+import { formatValue } from '../../shared-core/units/format';
+import { qty } from '../../shared-core/core/quantity-text';
 import type { UnitSystem } from '../../shared-core/units/units';
 import { quantityText } from './format';
 import { withSentencesIn } from './shown';
@@ -44,9 +45,13 @@ export function summariseAssessment(a: Assessment, system: UnitSystem = 'si'): s
   if (a.compliance.length) {
     lines.push('', 'Mixing-zone compliance (required vs achieved dilution at the boundary):');
     for (const r of a.compliance) {
-      const f = (x: number | null) => (x === null ? '—' : formatNumber(x));
+      const f = (x: number | null) => (x === null ? '—' : formatValue(x));
+      const edge = r.boundary === null ? '' : ` at ${sentenceIn(qty(r.boundary, 'm'), system)}`;
+      const margin =
+        r.margin === null ? '' : `, margin ${r.margin >= 0 ? '+' : '−'}${formatValue(Math.abs(r.margin) * 100, 3)} %`;
       lines.push(
-        `  ${r.verdict.padEnd(13)} ${r.feature}, ${r.condition}, ${r.constituent}: required ${f(r.requiredDilution)}, achieved ${f(r.achievedDilution)}`,
+        `  ${r.verdict.padEnd(13)} ${r.feature}, ${r.condition}, ${r.constituent} (${r.zone} zone${edge}): ` +
+          `required ${f(r.requiredDilution)}, achieved ${f(r.achievedDilution)}${margin}${r.governing ? ' (governs)' : ''}`,
       );
     }
   }

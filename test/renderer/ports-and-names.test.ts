@@ -11,7 +11,7 @@ import { wrappedName } from '../../src-renderer/src/lib/section-geometry';
 const SITE = loadSite(
   readFileSync(join(import.meta.dirname, '..', '..', 'examples', 'quillmere-reservoir.gpsite'), 'utf8'),
 );
-const ASSESSED = assessSite(SITE, { bands: false });
+const ASSESSED = assessSite(SITE, { gprimeVersion: 'test', siteHash: 'h' }, { bands: false });
 const outcome = (id: string) => {
   const o = ASSESSED.estimates.find((e) => e.id === id);
   if (!o) throw new Error(`no estimate ${id}`);
