@@ -117,7 +117,9 @@ describe('copying from the estimate detail', () => {
     await detail()
       .getByRole('button', { name: /^Copy table/ })
       .click();
-    await expect.poll(() => detail().getByTestId('copy-feedback').first().textContent()).toContain('Copied');
+    await expect
+      .poll(() => detail().getByTestId('copy-feedback').first().textContent(), { timeout: 15_000, interval: 100 })
+      .toContain('Copied');
     const text = String(await page.evaluate('navigator.clipboard.readText()'));
     const rows = text.split('\n').map((l) => l.split('\t'));
     expect(rows[1]).toEqual(['result', 'value', 'unit']);
@@ -142,7 +144,9 @@ describe('copying from the estimate detail', () => {
     await detail()
       .getByRole('button', { name: /^Copy table/ })
       .click();
-    await expect.poll(() => detail().getByTestId('copy-feedback').first().textContent()).toContain('Copied');
+    await expect
+      .poll(() => detail().getByTestId('copy-feedback').first().textContent(), { timeout: 15_000, interval: 100 })
+      .toContain('Copied');
     const rows = String(await page.evaluate('navigator.clipboard.readText()'))
       .split('\n')
       .map((l) => l.split('\t'));
@@ -167,11 +171,14 @@ describe('copying from the estimate detail', () => {
         return [el.width, el.height, el.clientWidth, el.clientHeight];
       });
     const before = await size();
-    await detail()
-      .getByRole('button', { name: /^Copy image/ })
-      .first()
-      .click();
-    await expect.poll(() => detail().getByTestId('copy-feedback').nth(1).textContent()).toContain('Copied');
+    // the feedback beside this very button; a 3× redraw can take seconds on a loaded machine
+    const copyImage = detail()
+      .locator('.copy', { has: page.getByRole('button', { name: /^Copy image/ }) })
+      .first();
+    await copyImage.getByRole('button').click();
+    await expect
+      .poll(() => copyImage.getByTestId('copy-feedback').textContent(), { timeout: 15_000, interval: 100 })
+      .toContain('Copied');
     const got = (await page.evaluate(`(async () => {
       const items = await navigator.clipboard.read();
       const types = items.flatMap((i) => i.types);
