@@ -370,6 +370,7 @@ export function buildReportModel(
       `${FIGURES_RULE}; they are shown in ${units === 'us' ? 'US customary' : 'SI'} units, and the spreadsheet and CSV files hold them at full precision.`,
       densityNote,
       'The same site file (identified by its SHA-256 above) and gprime version give the same numbers and charts.',
+      ...a.checks.map((w) => `Site check: ${sentenceIn(w.message, units)}`),
     ],
     documentControl: control,
     densityNote,

@@ -272,10 +272,11 @@ export function assessSite(
     units: site.units,
     caution: SCREENING_CAUTION,
     conditions,
+    // worded here, so that the workspace, the CLI and the report read the same sentence
     checks: siteGeometryChecks(
       site,
       conditions.map((c) => c.deepest),
-    ),
+    ).map((w) => ({ ...w, message: siteMessage(w.message, site) })),
     estimates,
     compliance,
   };

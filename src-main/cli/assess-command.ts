@@ -42,6 +42,10 @@ export function summariseAssessment(a: Assessment, system: UnitSystem = 'si'): s
         (e.warnings.length ? `  [${e.warnings.length} warning${e.warnings.length > 1 ? 's' : ''}]` : ''),
     );
   }
+  if (a.checks.length) {
+    lines.push('', 'Site checks:');
+    for (const w of a.checks) lines.push(`  ! ${say(w.message)}`);
+  }
   if (a.compliance.length) {
     lines.push('', 'Mixing-zone compliance (required vs achieved dilution at the boundary):');
     for (const r of a.compliance) {

@@ -106,3 +106,22 @@ describe('geometry of the site', () => {
     expect(codes(s, [500])).toEqual([]);
   });
 });
+
+describe('site checks reach every view in words', () => {
+  it('the CLI summary and the report cautions say a port lies below the bed, naming the field as the editors do', async () => {
+    const { summariseAssessment } = await import('../../../src-main/cli/assess-command');
+    const { buildReportModel } = await import('../../../shared-core/report/model');
+    const s = demo();
+    const outfall = s.features.findIndex((f) => f.kind === 'outfall');
+    (s.features[outfall] as { portDepth: number | string }).portDepth = '130 ft';
+    const a = assessSite(s, { gprimeVersion: 't', siteHash: 'h' });
+    const name = (s.features[outfall] as { name: string }).name;
+    const summary = summariseAssessment(a, 'us');
+    expect(summary).toContain('Site checks:');
+    expect(summary).toContain(`${name}: Port depth = 130 ft puts the port below the bed`);
+    expect(summary).not.toMatch(/features\[|waterBody\./);
+    const cautions = buildReportModel(a, 'si', s).cautions.filter((c) => c.startsWith('Site check:'));
+    expect(cautions).toHaveLength(1);
+    expect(cautions[0]).toMatch(/Port depth = 39\.62 m puts the port below the bed: Water body: .* is 38 m/);
+  });
+});
